@@ -1,0 +1,232 @@
+package org.fatefield.circuits.analysis;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Comparator;
+import java.util.List;
+import org.fatefield.circuits.model.ReactionNetwork;
+import org.hipparchus.complex.Complex;
+import org.hipparchus.linear.Array2DRowRealMatrix;
+import org.hipparchus.linear.ArrayRealVector;
+import org.hipparchus.linear.DecompositionSolver;
+import org.hipparchus.linear.EigenDecompositionNonSymmetric;
+import org.hipparchus.linear.LUDecomposition;
+import org.hipparchus.linear.RealVector;
+
+/**
+ * Finds every steady state of a circuit inside a box of concentrations, with its stability.
+ *
+ * <p>Damped Newton iterations start from a regular grid of points in the box; converged points
+ * are deduplicated and classified by the eigenvalues of the Jacobian (Hipparchus
+ * {@link EigenDecompositionNonSymmetric}). A grid fine enough to put a start in every basin of
+ * Newton's method finds every root in practice; the number of starts per axis is a setting.
+ */
+public final class SteadyStateFinder {
+
+    private static final int MAX_ITERATIONS = 100;
+    private static final int MAX_HALVINGS = 30;
+
+    private final ReactionNetwork network;
+    private final int startsPerAxis;
+    private final double residualTolerance;
+    private final double zeroEigenvalueTolerance;
+
+    private SteadyStateFinder(ReactionNetwork network, int startsPerAxis, double residualTolerance,
+            double zeroEigenvalueTolerance) {
+        this.network = network;
+        this.startsPerAxis = startsPerAxis;
+        this.residualTolerance = residualTolerance;
+        this.zeroEigenvalueTolerance = zeroEigenvalueTolerance;
+    }
+
+    /** A finder with 24 starts per axis, residual tolerance 1e-12 and zero-eigenvalue tolerance 1e-10. */
+    public static SteadyStateFinder of(ReactionNetwork network) {
+        return new SteadyStateFinder(network, 24, 1e-12, 1e-10);
+    }
+
+    /** A copy using {@code starts} Newton starts per axis (at least 2). */
+    public SteadyStateFinder withStartsPerAxis(int starts) {
+        if (starts < 2) {
+            throw new IllegalArgumentException("starts per axis must be at least 2, got " + starts);
+        }
+        return new SteadyStateFinder(network, starts, residualTolerance, zeroEigenvalueTolerance);
+    }
+
+    /**
+     * All steady states in the box {@code [lower, upper]}, sorted by the first species.
+     *
+     * @param params parameter vector, not modified
+     * @param lower  lower corner (concentrations), not modified
+     * @param upper  upper corner, each entry greater than the lower one, not modified
+     */
+    public List<SteadyState> find(double[] params, double[] lower, double[] upper) {
+        int n = network.speciesCount();
+        if (lower.length != n || upper.length != n) {
+            throw new IllegalArgumentException("box corners need " + n + " entries, got "
+                    + lower.length + " and " + upper.length);
+        }
+        for (int i = 0; i < n; i++) {
+            if (!(upper[i] > lower[i])) {
+                throw new IllegalArgumentException("box upper corner must exceed the lower one in "
+                        + network.speciesNames().get(i) + ": " + lower[i] + " .. " + upper[i]);
+            }
+        }
+        List<double[]> roots = new ArrayList<>();
+        int total = (int) Math.pow(startsPerAxis, n);
+        double[] start = new double[n];
+        for (int index = 0; index < total; index++) {
+            int rest = index;
+            for (int i = 0; i < n; i++) {
+                int k = rest % startsPerAxis;
+                rest /= startsPerAxis;
+                start[i] = lower[i] + (upper[i] - lower[i]) * (k + 0.5) / startsPerAxis;
+            }
+            double[] root = newton(start.clone(), params, lower, upper);
+            if (root != null && inside(root, lower, upper) && isNew(root, roots)) {
+                roots.add(root);
+            }
+        }
+        List<SteadyState> result = new ArrayList<>();
+        for (double[] root : roots) {
+            result.add(classify(root, params));
+        }
+        result.sort(Comparator.comparingDouble(s -> s.state()[0]));
+        return result;
+    }
+
+    /**
+     * Refines a steady state by Newton's method from {@code guess}, or returns null if the
+     * iteration does not converge (no box constraint).
+     */
+    public SteadyState refine(double[] guess, double[] params) {
+        int n = network.speciesCount();
+        double[] lower = new double[n];
+        double[] upper = new double[n];
+        Arrays.fill(lower, Double.NEGATIVE_INFINITY);
+        Arrays.fill(upper, Double.POSITIVE_INFINITY);
+        double[] root = newton(guess.clone(), params, lower, upper);
+        return root == null ? null : classify(root, params);
+    }
+
+    /** Classifies the point {@code x} (assumed to be a steady state) by its Jacobian's eigenvalues. */
+    public SteadyState classify(double[] x, double[] params) {
+        int n = network.speciesCount();
+        double[][] jac = new double[n][n];
+        network.jacobian(x, params, jac);
+        Complex[] eigen = new EigenDecompositionNonSymmetric(new Array2DRowRealMatrix(jac, false)).getEigenvalues();
+        Arrays.sort(eigen, Comparator.comparingDouble(Complex::getReal).reversed()
+                .thenComparing(Comparator.comparingDouble(Complex::getImaginary)));
+        return new SteadyState(x, eigen, typeOf(eigen));
+    }
+
+    private SteadyStateType typeOf(Complex[] eigen) {
+        boolean anyPositive = false;
+        boolean anyNegative = false;
+        boolean complex = false;
+        for (Complex lambda : eigen) {
+            double re = lambda.getReal();
+            if (Math.abs(re) <= zeroEigenvalueTolerance) {
+                return SteadyStateType.NON_HYPERBOLIC;
+            }
+            anyPositive |= re > 0;
+            anyNegative |= re < 0;
+            complex |= Math.abs(lambda.getImaginary()) > zeroEigenvalueTolerance;
+        }
+        if (anyPositive && anyNegative) {
+            return SteadyStateType.SADDLE;
+        }
+        if (anyNegative) {
+            return complex ? SteadyStateType.STABLE_FOCUS : SteadyStateType.STABLE_NODE;
+        }
+        return complex ? SteadyStateType.UNSTABLE_FOCUS : SteadyStateType.UNSTABLE_NODE;
+    }
+
+    /**
+     * Damped Newton iteration. It stops when no further step reduces the residual, and accepts
+     * the point if the residual is then within tolerance, so a converged root is as accurate as
+     * rounding allows, also near a bifurcation where convergence slows to linear.
+     */
+    private double[] newton(double[] x, double[] params, double[] lower, double[] upper) {
+        int n = x.length;
+        double[] f = new double[n];
+        double[] trial = new double[n];
+        double[] work = new double[network.reactionCount()];
+        double[][] jac = new double[n][n];
+        network.drift(x, params, f, work);
+        double norm = maxAbs(f);
+        for (int iteration = 0; iteration < MAX_ITERATIONS && norm > 0.0; iteration++) {
+            network.jacobian(x, params, jac);
+            DecompositionSolver solver = new LUDecomposition(new Array2DRowRealMatrix(jac, false), 1e-300).getSolver();
+            if (!solver.isNonSingular()) {
+                break;
+            }
+            RealVector step = solver.solve(new ArrayRealVector(f, false));
+            double lambda = 1.0;
+            double trialNorm = Double.POSITIVE_INFINITY;
+            for (int h = 0; h <= MAX_HALVINGS; h++) {
+                for (int i = 0; i < n; i++) {
+                    trial[i] = x[i] - lambda * step.getEntry(i);
+                }
+                network.drift(trial, params, f, work);
+                trialNorm = maxAbs(f);
+                if (trialNorm < norm) {
+                    break;
+                }
+                lambda *= 0.5;
+            }
+            if (!(trialNorm < norm)) {
+                break;
+            }
+            System.arraycopy(trial, 0, x, 0, n);
+            norm = trialNorm;
+            if (outside(x, lower, upper)) {
+                return null;
+            }
+        }
+        return norm <= residualTolerance * (1.0 + maxAbs(x)) ? x : null;
+    }
+
+    private static boolean outside(double[] x, double[] lower, double[] upper) {
+        for (int i = 0; i < x.length; i++) {
+            double width = upper[i] - lower[i];
+            double margin = Double.isFinite(width) ? 0.5 * width : 0.0;
+            if (!Double.isFinite(x[i]) || x[i] < lower[i] - margin || x[i] > upper[i] + margin) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static boolean inside(double[] x, double[] lower, double[] upper) {
+        for (int i = 0; i < x.length; i++) {
+            double slack = 1e-9 * (upper[i] - lower[i]);
+            if (x[i] < lower[i] - slack || x[i] > upper[i] + slack) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static boolean isNew(double[] root, List<double[]> roots) {
+        for (double[] other : roots) {
+            double distance = 0.0;
+            double scale = 1.0;
+            for (int i = 0; i < root.length; i++) {
+                distance = Math.max(distance, Math.abs(root[i] - other[i]));
+                scale = Math.max(scale, Math.abs(root[i]));
+            }
+            if (distance <= 1e-7 * scale) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static double maxAbs(double[] v) {
+        double m = 0.0;
+        for (double value : v) {
+            m = Math.max(m, Math.abs(value));
+        }
+        return m;
+    }
+}

@@ -1,0 +1,104 @@
+package org.fatefield.circuits.model;
+
+import java.util.List;
+
+/**
+ * An intracellular circuit written as species, parameters and reactions.
+ *
+ * <p>Every simulation method and every analysis derives from the same reactions: the
+ * deterministic drift is {@code dx_i/dt = sum_j nu_ij a_j(x, p)}, the chemical Langevin noise
+ * has variance {@code sum_j nu_ij^2 a_j / Omega} per unit time, and the exact stochastic process
+ * fires reaction {@code j} at rate {@code Omega a_j}. Concentrations are dimensionless; the
+ * system size {@code Omega} (molecules per unit concentration) belongs to the simulation method,
+ * not to the network.
+ *
+ * <p>Implementations are immutable and thread-safe: all mutable data lives in the arrays the
+ * caller passes in.
+ */
+public interface ReactionNetwork {
+
+    /** Names of the species, in state-vector order. */
+    List<String> speciesNames();
+
+    /** Names of the parameters, in parameter-vector order. */
+    List<String> parameterNames();
+
+    /** A copy of the default parameter vector. */
+    double[] defaultParameters();
+
+    /** Number of reactions. */
+    int reactionCount();
+
+    /** Net change of {@code species} when {@code reaction} fires once. */
+    int stoichiometry(int reaction, int species);
+
+    /**
+     * Writes the propensity of every reaction, in concentration per unit time, into {@code out}.
+     *
+     * @param x   state (concentrations), not modified
+     * @param p   parameters, not modified
+     * @param out receives {@link #reactionCount()} values
+     */
+    void propensities(double[] x, double[] p, double[] out);
+
+    /**
+     * Writes the Jacobian of the drift, {@code out[i][k] = d(dx_i/dt)/dx_k}, into {@code out}.
+     *
+     * @param x   state, not modified
+     * @param p   parameters, not modified
+     * @param out square matrix of side {@link #speciesCount()}, overwritten
+     */
+    void jacobian(double[] x, double[] p, double[][] out);
+
+    /** Number of species. */
+    default int speciesCount() {
+        return speciesNames().size();
+    }
+
+    /** Index of the named parameter; throws with the list of known names if there is none. */
+    default int parameterIndex(String name) {
+        int index = parameterNames().indexOf(name);
+        if (index < 0) {
+            throw new IllegalArgumentException("unknown parameter '" + name + "'; this circuit has "
+                    + parameterNames());
+        }
+        return index;
+    }
+
+    /** Index of the named species; throws with the list of known names if there is none. */
+    default int speciesIndex(String name) {
+        int index = speciesNames().indexOf(name);
+        if (index < 0) {
+            throw new IllegalArgumentException("unknown species '" + name + "'; this circuit has "
+                    + speciesNames());
+        }
+        return index;
+    }
+
+    /**
+     * Writes the deterministic drift {@code dx/dt = N a(x, p)} into {@code out}, using
+     * {@code work} (length {@link #reactionCount()}) for the propensities.
+     */
+    default void drift(double[] x, double[] p, double[] out, double[] work) {
+        propensities(x, p, work);
+        int n = speciesCount();
+        for (int i = 0; i < n; i++) {
+            out[i] = 0.0;
+        }
+        for (int j = 0; j < work.length; j++) {
+            for (int i = 0; i < n; i++) {
+                int nu = stoichiometry(j, i);
+                if (nu != 0) {
+                    out[i] += nu * work[j];
+                }
+            }
+        }
+    }
+
+    /** Allocating convenience form of {@link #drift(double[], double[], double[], double[])}. */
+    default double[] drift(double[] x, double[] p) {
+        double[] out = new double[speciesCount()];
+        drift(x, p, out, new double[reactionCount()]);
+        return out;
+    }
+}
