@@ -1,0 +1,157 @@
+package org.fatefield.engine.cell;
+
+import org.apache.commons.rng.UniformRandomProvider;
+
+/**
+ * One cell: where it is, how far through its cycle, and its own copy of the circuit.
+ *
+ * <p>Each cell draws only from its own random stream, derived from the run seed and its id, so
+ * the tissue's history does not depend on the order or thread in which cells are stepped.
+ * The mutators are for the engine's tick; everything else only reads.
+ */
+public final class Cell {
+
+    private final long id;
+    private final long parentId;
+    private final int generation;
+    private final double birthTime;
+    private final double cycleTime;
+    private final double[] state;
+    private final UniformRandomProvider rng;
+    private double x;
+    private double y;
+    private double age;
+    private double signal;
+    private int fate;
+
+    /**
+     * @param id         unique id, never reused
+     * @param parentId   id of the mother, or -1 for a founder cell
+     * @param generation divisions since the founder (founders are generation 0)
+     * @param birthTime  time of birth (h)
+     * @param cycleTime  time from birth to division (h)
+     * @param state      circuit state (concentrations), owned by the cell from now on
+     * @param rng        the cell's own random stream
+     * @param x          position (µm)
+     * @param y          position (µm)
+     * @param age        time since birth (h); founders start part-way through their cycle
+     */
+    public Cell(long id, long parentId, int generation, double birthTime, double cycleTime, double[] state,
+            UniformRandomProvider rng, double x, double y, double age) {
+        this.id = id;
+        this.parentId = parentId;
+        this.generation = generation;
+        this.birthTime = birthTime;
+        this.cycleTime = cycleTime;
+        this.state = state;
+        this.rng = rng;
+        this.x = x;
+        this.y = y;
+        this.age = age;
+    }
+
+    /** Unique id. */
+    public long id() {
+        return id;
+    }
+
+    /** Mother's id, -1 for a founder. */
+    public long parentId() {
+        return parentId;
+    }
+
+    /** Divisions since the founder. */
+    public int generation() {
+        return generation;
+    }
+
+    /** Birth time (h). */
+    public double birthTime() {
+        return birthTime;
+    }
+
+    /** Drawn cycle time (h). */
+    public double cycleTime() {
+        return cycleTime;
+    }
+
+    /** Position along x (µm). */
+    public double x() {
+        return x;
+    }
+
+    /** Position along y (µm). */
+    public double y() {
+        return y;
+    }
+
+    /** Time since birth (h). */
+    public double age() {
+        return age;
+    }
+
+    /** Morphogen level at the cell, as last read. */
+    public double signal() {
+        return signal;
+    }
+
+    /** Fate index, as last classified. */
+    public int fate() {
+        return fate;
+    }
+
+    /** A copy of the circuit state (concentrations). */
+    public double[] state() {
+        return state.clone();
+    }
+
+    /** Concentration of species {@code i}. */
+    public double concentration(int i) {
+        return state[i];
+    }
+
+    /**
+     * Radius (µm) for a cell of newborn radius {@code r0}: area grows linearly from that of a
+     * newborn to twice it at division.
+     */
+    public double radius(double r0) {
+        double progress = Math.min(1.0, age / cycleTime);
+        return r0 * Math.sqrt(1.0 + progress);
+    }
+
+    /** The cell's random stream; only the engine's tick draws from it. */
+    public UniformRandomProvider random() {
+        return rng;
+    }
+
+    /** The live circuit state, advanced in place by the tick. */
+    public double[] liveState() {
+        return state;
+    }
+
+    /** Moves the cell to (x, y) µm. */
+    public void moveTo(double newX, double newY) {
+        this.x = newX;
+        this.y = newY;
+    }
+
+    /** Adds {@code dt} hours to the cell's age. */
+    public void grow(double dt) {
+        this.age += dt;
+    }
+
+    /** True once the cell has reached its cycle time. */
+    public boolean readyToDivide() {
+        return age >= cycleTime;
+    }
+
+    /** Records the morphogen level read at the cell. */
+    public void setSignal(double value) {
+        this.signal = value;
+    }
+
+    /** Records the cell's fate index. */
+    public void setFate(int value) {
+        this.fate = value;
+    }
+}

@@ -1,0 +1,59 @@
+package org.fatefield.engine.coupling;
+
+import java.util.List;
+
+/**
+ * The map from a cell's local morphogen level to its circuit parameters: base parameters with
+ * the coupled entries overwritten. The first coupling is the tissue's control parameter, the one
+ * whose local value is reported per cell and compared with the single-cell bifurcation.
+ */
+public final class ParameterMapping {
+
+    private final double[] base;
+    private final List<SignalCoupling> couplings;
+
+    /**
+     * @param base      default parameter vector of the circuit (copied)
+     * @param couplings couplings applied in order; a later one wins where two set the same entry
+     */
+    public ParameterMapping(double[] base, List<SignalCoupling> couplings) {
+        this.base = base.clone();
+        this.couplings = List.copyOf(couplings);
+        for (SignalCoupling coupling : this.couplings) {
+            for (int index : coupling.parameterIndices()) {
+                if (index < 0 || index >= base.length) {
+                    throw new IllegalArgumentException("coupled parameter index " + index
+                            + " is outside the circuit's " + base.length + " parameters");
+                }
+            }
+        }
+    }
+
+    /** Writes the parameters for morphogen level {@code c} into {@code out} (length of the base vector). */
+    public void parametersAt(double c, double[] out) {
+        System.arraycopy(base, 0, out, 0, base.length);
+        for (SignalCoupling coupling : couplings) {
+            coupling.apply(c, out);
+        }
+    }
+
+    /** Value of the control parameter at morphogen level {@code c}; NaN without couplings. */
+    public double controlAt(double c) {
+        return couplings.isEmpty() ? Double.NaN : couplings.get(0).valueAt(c);
+    }
+
+    /** Number of circuit parameters. */
+    public int parameterCount() {
+        return base.length;
+    }
+
+    /** A copy of the base parameters. */
+    public double[] base() {
+        return base.clone();
+    }
+
+    /** The couplings, in application order. */
+    public List<SignalCoupling> couplings() {
+        return couplings;
+    }
+}

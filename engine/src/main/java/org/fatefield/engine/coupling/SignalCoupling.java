@@ -1,0 +1,59 @@
+package org.fatefield.engine.coupling;
+
+import java.util.Arrays;
+import org.fatefield.circuits.model.Hill;
+
+/**
+ * Sets one or more circuit parameters from the local morphogen level.
+ *
+ * @param parameterIndices indices in the circuit's parameter vector that take the value
+ * @param form             linear or Hill
+ * @param base             value at zero morphogen (parameter units)
+ * @param gain             slope (linear) or maximal increase (Hill), parameter units
+ * @param halfMax          morphogen level of half-maximal effect (Hill only), greater than 0
+ * @param hill             Hill coefficient (Hill only), greater than 0
+ */
+public record SignalCoupling(int[] parameterIndices, CouplingForm form, double base, double gain,
+        double halfMax, double hill) {
+
+    /** Validates and copies. */
+    public SignalCoupling {
+        if (parameterIndices.length == 0) {
+            throw new IllegalArgumentException("a coupling must set at least one parameter");
+        }
+        parameterIndices = parameterIndices.clone();
+        if (!Double.isFinite(base) || !Double.isFinite(gain)) {
+            throw new IllegalArgumentException("coupling base and gain must be finite, got " + base + ", " + gain);
+        }
+        if (form == CouplingForm.HILL && (!(halfMax > 0) || !(hill > 0))) {
+            throw new IllegalArgumentException("a Hill coupling needs half_max > 0 and hill > 0, got "
+                    + halfMax + ", " + hill);
+        }
+    }
+
+    @Override
+    public int[] parameterIndices() {
+        return parameterIndices.clone();
+    }
+
+    /** The parameter value at morphogen level {@code c}. */
+    public double valueAt(double c) {
+        return switch (form) {
+            case LINEAR -> base + gain * c;
+            case HILL -> base + gain * Hill.activation(c, halfMax, hill);
+        };
+    }
+
+    /** Writes the value at {@code c} into every coupled entry of {@code params}. */
+    void apply(double c, double[] params) {
+        double value = valueAt(c);
+        for (int index : parameterIndices) {
+            params[index] = value;
+        }
+    }
+
+    @Override
+    public String toString() {
+        return form + " coupling of parameters " + Arrays.toString(parameterIndices);
+    }
+}

@@ -1,0 +1,55 @@
+package org.fatefield.engine.fate;
+
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * Assigns each cell a fate from its circuit state: the first matching rule wins, and a cell
+ * matching none takes the default fate (typically the uncommitted, progenitor-like state).
+ * Fate indices run over the rules in order, then the default.
+ */
+public final class FateClassifier {
+
+    private final List<FateRule> rules;
+    private final List<String> names;
+
+    /**
+     * @param rules       rules in priority order
+     * @param defaultName fate of a cell that matches no rule
+     * @throws IllegalArgumentException if two fates share a name
+     */
+    public FateClassifier(List<FateRule> rules, String defaultName) {
+        this.rules = List.copyOf(rules);
+        List<String> all = new ArrayList<>();
+        for (FateRule rule : rules) {
+            all.add(rule.name());
+        }
+        all.add(defaultName);
+        for (int i = 0; i < all.size(); i++) {
+            if (all.indexOf(all.get(i)) != i) {
+                throw new IllegalArgumentException("fate name '" + all.get(i) + "' is used twice");
+            }
+        }
+        this.names = List.copyOf(all);
+    }
+
+    /** Fate index of {@code state}. */
+    public int classify(double[] state) {
+        for (int i = 0; i < rules.size(); i++) {
+            if (rules.get(i).matches(state)) {
+                return i;
+            }
+        }
+        return rules.size();
+    }
+
+    /** All fate names: the rules in order, then the default. */
+    public List<String> fateNames() {
+        return names;
+    }
+
+    /** Number of fates, default included. */
+    public int fateCount() {
+        return names.size();
+    }
+}

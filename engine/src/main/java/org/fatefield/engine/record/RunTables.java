@@ -1,0 +1,111 @@
+package org.fatefield.engine.record;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.util.ArrayList;
+import java.util.List;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+import org.fatefield.engine.cell.Cell;
+import org.fatefield.engine.tissue.Tissue;
+import org.fatefield.engine.tissue.TissueSpec;
+
+/**
+ * Writes a run's tidy tables: one row per observation, one column per variable, the unit in
+ * the column name. Numbers carry ten significant digits, so equal runs give equal bytes.
+ */
+public final class RunTables {
+
+    private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get();
+    private static final MathContext DIGITS = new MathContext(10);
+
+    private RunTables() {
+    }
+
+    /**
+     * {@code timeseries.csv}: {@code time_h}, one {@code count_<fate>} column per fate,
+     * {@code population}, {@code mean_morphogen}.
+     */
+    public static void writeTimeSeries(TimeSeries series, Writer out) throws IOException {
+        List<String> header = new ArrayList<>();
+        header.add("time_h");
+        for (String fate : series.fateNames()) {
+            header.add("count_" + fate);
+        }
+        header.add("population");
+        header.add("mean_morphogen");
+        try (CSVPrinter printer = new CSVPrinter(out, FORMAT)) {
+            printer.printRecord(header);
+            for (TimeSeries.Row row : series.rows()) {
+                List<String> values = new ArrayList<>();
+                values.add(number(row.time()));
+                for (int count : row.fateCounts()) {
+                    values.add(Integer.toString(count));
+                }
+                values.add(Integer.toString(row.population()));
+                values.add(number(row.meanMorphogen()));
+                printer.printRecord(values);
+            }
+        }
+    }
+
+    /**
+     * {@code cells.csv}: the live cells at the end: {@code id, parent_id, generation, x_um, y_um},
+     * one {@code <species>_molecules} column per species (concentration times system size, rounded),
+     * {@code morphogen}, {@code control_<parameter>} (the first coupled parameter's local value)
+     * and {@code fate}.
+     */
+    public static void writeCells(Tissue tissue, Writer out) throws IOException {
+        TissueSpec spec = tissue.spec();
+        List<String> species = spec.circuit().network().speciesNames();
+        double omega = spec.circuit().systemSize();
+        List<String> header = new ArrayList<>(List.of("id", "parent_id", "generation", "x_um", "y_um"));
+        for (String s : species) {
+            header.add(s + "_molecules");
+        }
+        header.add("morphogen");
+        header.add("control_" + controlName(spec));
+        header.add("fate");
+        List<String> fateNames = spec.fates().fateNames();
+        try (CSVPrinter printer = new CSVPrinter(out, FORMAT)) {
+            printer.printRecord(header);
+            for (Cell cell : tissue.cells()) {
+                List<String> values = new ArrayList<>();
+                values.add(Long.toString(cell.id()));
+                values.add(Long.toString(cell.parentId()));
+                values.add(Integer.toString(cell.generation()));
+                values.add(number(cell.x()));
+                values.add(number(cell.y()));
+                for (int i = 0; i < species.size(); i++) {
+                    values.add(Long.toString(Math.round(cell.concentration(i) * omega)));
+                }
+                values.add(number(cell.signal()));
+                values.add(number(spec.mapping().controlAt(cell.signal())));
+                values.add(fateNames.get(cell.fate()));
+                printer.printRecord(values);
+            }
+        }
+    }
+
+    /** Name of the control parameter (the first coupled one), or "none". */
+    public static String controlName(TissueSpec spec) {
+        if (spec.mapping().couplings().isEmpty()) {
+            return "none";
+        }
+        int index = spec.mapping().couplings().get(0).parameterIndices()[0];
+        return spec.circuit().network().parameterNames().get(index);
+    }
+
+    /** A number with ten significant digits and no trailing zeros; NaN as "NaN". */
+    public static String number(double value) {
+        if (!Double.isFinite(value)) {
+            return Double.toString(value);
+        }
+        if (value == 0.0) {
+            return "0";
+        }
+        return new BigDecimal(value).round(DIGITS).stripTrailingZeros().toPlainString();
+    }
+}

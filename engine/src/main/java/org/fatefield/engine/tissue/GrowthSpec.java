@@ -1,0 +1,30 @@
+package org.fatefield.engine.tissue;
+
+import org.fatefield.engine.division.CycleTimeDistribution;
+import org.fatefield.engine.division.PartitionMode;
+
+/**
+ * Founding population, cell size, mechanics and division.
+ *
+ * @param initialCells  founder cells, placed uniformly at random, at least 1
+ * @param cellRadius    radius of a newborn cell (µm), greater than 0
+ * @param repulsionRate overlap relaxation rate (1 / h), at least 0
+ * @param cycle         cycle-time distribution
+ * @param partition     how molecules are shared at division
+ */
+public record GrowthSpec(int initialCells, double cellRadius, double repulsionRate, CycleTimeDistribution cycle,
+        PartitionMode partition) {
+
+    /** Validates. */
+    public GrowthSpec {
+        if (initialCells < 1) {
+            throw new IllegalArgumentException("initial cells must be at least 1, got " + initialCells);
+        }
+        if (!(cellRadius > 0) || Double.isInfinite(cellRadius)) {
+            throw new IllegalArgumentException("cell radius must be finite and greater than 0, got " + cellRadius);
+        }
+        if (!(repulsionRate >= 0) || Double.isInfinite(repulsionRate)) {
+            throw new IllegalArgumentException("repulsion rate must be finite and at least 0, got " + repulsionRate);
+        }
+    }
+}

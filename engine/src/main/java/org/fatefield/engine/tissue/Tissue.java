@@ -1,0 +1,189 @@
+package org.fatefield.engine.tissue;
+
+import java.util.List;
+import org.apache.commons.rng.UniformRandomProvider;
+import org.fatefield.circuits.random.RandomStreams;
+import org.fatefield.circuits.sim.CircuitStepper;
+import org.fatefield.engine.cell.Cell;
+import org.fatefield.engine.cell.CellPopulation;
+import org.fatefield.engine.field.MorphogenField;
+import org.fatefield.engine.mechanics.OverlapRepulsion;
+import org.fatefield.engine.record.TimeSeries;
+import sim.engine.Schedule;
+import sim.engine.SimState;
+
+/**
+ * A growing tissue of cells, each carrying its own noisy copy of a switch circuit whose
+ * parameters the local morphogen sets.
+ *
+ * <p>MASON's schedule runs one {@link TissueTick} per time step; inside it the cells are stepped
+ * in one plain loop (a schedule entry per cell costs a heap operation per cell per step). One
+ * tick: (1) advance the morphogen field; (2) each cell reads its local morphogen, maps it to
+ * circuit parameters, advances its circuit and ages; (3) cells past their cycle time divide, in
+ * population order, sharing molecules between daughters; (4) overlaps relax; (5) when a record
+ * is due, fates are classified and counted. Every cell draws only from its own stream, derived
+ * from the seed and its id.
+ */
+public final class Tissue extends SimState {
+
+    private static final long PLACEMENT_STREAM = -1L;
+
+    private final TissueSpec spec;
+    private final RandomStreams streams;
+    private CellPopulation population;
+    private MorphogenField field;
+    private TimeSeries series;
+    private CircuitStepper stepper;
+    private OverlapRepulsion mechanics;
+    private double[] params;
+    private double[] firstDaughter;
+    private double[] secondDaughter;
+    private long steps;
+
+    /** A tissue following {@code spec}, reproducible from {@code seed}. */
+    public Tissue(TissueSpec spec, long seed) {
+        super(seed);
+        this.spec = spec;
+        this.streams = RandomStreams.of(seed);
+    }
+
+    @Override
+    public void start() {
+        super.start();
+        CircuitSetup circuit = spec.circuit();
+        GrowthSpec growth = spec.growth();
+        population = new CellPopulation();
+        field = new MorphogenField(spec.morphogen(), spec.width(), spec.height());
+        series = new TimeSeries(spec.fates().fateNames());
+        stepper = circuit.noise().stepper(circuit.network(), circuit.systemSize());
+        mechanics = new OverlapRepulsion(spec.width(), spec.height(), growth.repulsionRate(), growth.cellRadius());
+        params = new double[spec.mapping().parameterCount()];
+        int species = circuit.network().speciesCount();
+        firstDaughter = new double[species];
+        secondDaughter = new double[species];
+        steps = 0;
+        UniformRandomProvider placement = streams.stream(PLACEMENT_STREAM);
+        double r = growth.cellRadius();
+        for (int i = 0; i < growth.initialCells(); i++) {
+            double x = r + (spec.width() - 2 * r) * placement.nextDouble();
+            double y = r + (spec.height() - 2 * r) * placement.nextDouble();
+            long id = population.newId();
+            UniformRandomProvider rng = streams.stream(id);
+            double cycle = growth.cycle().sample(rng);
+            double age = cycle * rng.nextDouble();
+            population.add(new Cell(id, -1, 0, -age, cycle, circuit.initialState(), rng, x, y, age));
+        }
+        record();
+        schedule.scheduleRepeating(Schedule.EPOCH, 0, new TissueTick(this), 1.0);
+    }
+
+    /** One time step; called by {@link TissueTick}. */
+    void tick() {
+        double dt = spec.timing().step();
+        field.advance(dt);
+        stepCells(dt);
+        steps++;
+        divide();
+        mechanics.relax(population, dt);
+        if (steps % spec.timing().stepsPerRecord() == 0 || steps == spec.timing().totalSteps()) {
+            record();
+        }
+    }
+
+    private void stepCells(double dt) {
+        int n = population.size();
+        for (int i = 0; i < n; i++) {
+            Cell cell = population.get(i);
+            double c = field.sample(cell.x(), cell.y());
+            cell.setSignal(c);
+            spec.mapping().parametersAt(c, params);
+            stepper.advance(cell.liveState(), params, dt, cell.random());
+            cell.grow(dt);
+        }
+    }
+
+    private void divide() {
+        int n = population.size();
+        double now = time();
+        GrowthSpec growth = spec.growth();
+        double offset = 0.5 * growth.cellRadius();
+        for (int i = 0; i < n; i++) {
+            Cell mother = population.get(i);
+            if (!mother.readyToDivide()) {
+                continue;
+            }
+            UniformRandomProvider rng = mother.random();
+            growth.partition().split(mother.liveState(), spec.circuit().systemSize(), rng, firstDaughter, secondDaughter);
+            double angle = 2 * Math.PI * rng.nextDouble();
+            double ox = offset * Math.cos(angle);
+            double oy = offset * Math.sin(angle);
+            population.replace(i, daughter(mother, firstDaughter, now, mother.x() + ox, mother.y() + oy));
+            population.add(daughter(mother, secondDaughter, now, mother.x() - ox, mother.y() - oy));
+        }
+    }
+
+    private Cell daughter(Cell mother, double[] state, double now, double x, double y) {
+        long id = population.newId();
+        UniformRandomProvider rng = streams.stream(id);
+        double cycle = spec.growth().cycle().sample(rng);
+        double r = spec.growth().cellRadius();
+        double cx = Math.min(Math.max(x, r), spec.width() - r);
+        double cy = Math.min(Math.max(y, r), spec.height() - r);
+        Cell cell = new Cell(id, mother.id(), mother.generation() + 1, now, cycle, state.clone(), rng, cx, cy, 0.0);
+        cell.setSignal(mother.signal());
+        return cell;
+    }
+
+    private void record() {
+        int[] counts = new int[spec.fates().fateCount()];
+        for (Cell cell : population.view()) {
+            cell.setSignal(field.sample(cell.x(), cell.y()));
+            int fate = spec.fates().classify(cell.liveState());
+            cell.setFate(fate);
+            counts[fate]++;
+        }
+        series.add(new TimeSeries.Row(time(), counts, population.size(), field.mean()));
+    }
+
+    /** Runs every remaining step. */
+    public void runToEnd() {
+        while (!finished()) {
+            schedule.step(this);
+        }
+    }
+
+    /** True once the run's duration has been simulated. */
+    public boolean finished() {
+        return steps >= spec.timing().totalSteps();
+    }
+
+    /** Simulated time (h). */
+    public double time() {
+        return steps * spec.timing().step();
+    }
+
+    /** Steps taken. */
+    public long steps() {
+        return steps;
+    }
+
+    /** The run's specification. */
+    public TissueSpec spec() {
+        return spec;
+    }
+
+    /** Live cells, in population order (read-only). */
+    public List<Cell> cells() {
+        return population.view();
+    }
+
+    /** The morphogen field. */
+    public MorphogenField field() {
+        return field;
+    }
+
+    /** The recorded fate counts. */
+    public TimeSeries series() {
+        return series;
+    }
+}

@@ -1,0 +1,37 @@
+package org.fatefield.engine.tissue;
+
+import org.fatefield.engine.coupling.ParameterMapping;
+import org.fatefield.engine.fate.FateClassifier;
+import org.fatefield.engine.field.MorphogenSpec;
+
+/**
+ * Everything a tissue run needs, validated: the model objects a scenario file becomes.
+ *
+ * @param circuit   the circuit in every cell and its simulation method
+ * @param mapping   how the local morphogen sets the circuit's parameters
+ * @param morphogen morphogen physics
+ * @param width     domain width (µm), greater than 0
+ * @param height    domain height (µm), greater than 0
+ * @param growth    founders, size, mechanics and division
+ * @param fates     the fate rules
+ * @param timing    duration, step and recording interval
+ */
+public record TissueSpec(CircuitSetup circuit, ParameterMapping mapping, MorphogenSpec morphogen, double width,
+        double height, GrowthSpec growth, FateClassifier fates, Timing timing) {
+
+    /** Checks that the parts fit together. */
+    public TissueSpec {
+        if (!(width > 0) || !(height > 0) || Double.isInfinite(width) || Double.isInfinite(height)) {
+            throw new IllegalArgumentException("domain must be finite with positive width and height, got "
+                    + width + " x " + height);
+        }
+        if (mapping.parameterCount() != circuit.network().parameterNames().size()) {
+            throw new IllegalArgumentException("parameter mapping has " + mapping.parameterCount()
+                    + " parameters but the circuit has " + circuit.network().parameterNames().size());
+        }
+        if (2 * growth.cellRadius() > Math.min(width, height)) {
+            throw new IllegalArgumentException("a cell of radius " + growth.cellRadius()
+                    + " µm does not fit in a " + width + " x " + height + " µm domain");
+        }
+    }
+}

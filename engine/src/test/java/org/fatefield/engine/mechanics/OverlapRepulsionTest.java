@@ -1,0 +1,50 @@
+package org.fatefield.engine.mechanics;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import org.fatefield.circuits.random.RandomStreams;
+import org.fatefield.engine.cell.Cell;
+import org.fatefield.engine.cell.CellPopulation;
+import org.junit.jupiter.api.Test;
+
+class OverlapRepulsionTest {
+
+    private static Cell cellAt(long id, double x, double y) {
+        return new Cell(id, -1, 0, 0, 10, new double[] {0}, RandomStreams.of(1).stream(id), x, y, 0);
+    }
+
+    @Test
+    void twoOverlappingCellsRelaxExponentiallyToContact() {
+        // Overlap d = 2r - s obeys d' = -rate d (each disc moves rate d / 2): d(t) = d0 e^(-rate t),
+        // and explicit Euler gives d0 (1 - rate dt)^n exactly.
+        CellPopulation population = new CellPopulation();
+        population.add(cellAt(0, 50, 50));
+        population.add(cellAt(1, 53, 50));
+        OverlapRepulsion repulsion = new OverlapRepulsion(100, 100, 10.0, 2.5);
+        double dt = 0.01;
+        int steps = 200;
+        for (int i = 0; i < steps; i++) {
+            repulsion.relax(population, dt);
+        }
+        double separation = population.get(1).x() - population.get(0).x();
+        double expectedOverlap = 2.0 * Math.pow(1 - 10.0 * dt, steps);
+        assertEquals(5.0 - expectedOverlap, separation, 1e-9);
+        assertEquals(50.0, population.get(0).y(), 0.0);
+    }
+
+    @Test
+    void cellsStayInsideTheWalls() {
+        CellPopulation population = new CellPopulation();
+        for (int i = 0; i < 50; i++) {
+            population.add(cellAt(i, 1 + 0.01 * i, 1));
+        }
+        OverlapRepulsion repulsion = new OverlapRepulsion(20, 20, 50.0, 1.0);
+        for (int s = 0; s < 500; s++) {
+            repulsion.relax(population, 0.01);
+        }
+        for (Cell c : population.view()) {
+            assertTrue(c.x() >= 1.0 && c.x() <= 19.0 && c.y() >= 1.0 && c.y() <= 19.0, c.x() + "," + c.y());
+        }
+    }
+}
