@@ -32,8 +32,17 @@ public final class ParameterMapping {
     /** Writes the parameters for morphogen level {@code c} into {@code out} (length of the base vector). */
     public void parametersAt(double c, double[] out) {
         System.arraycopy(base, 0, out, 0, base.length);
-        for (SignalCoupling coupling : couplings) {
-            coupling.apply(c, out);
+        applySignal(c, out);
+    }
+
+    /**
+     * Overwrites only the coupled entries of {@code out} for morphogen level {@code c}: the fast
+     * path for a buffer that {@link #parametersAt} (or a copy of {@link #base()}) filled before,
+     * since the uncoupled entries never change.
+     */
+    public void applySignal(double c, double[] out) {
+        for (int k = 0; k < couplings.size(); k++) {
+            couplings.get(k).apply(c, out);
         }
     }
 

@@ -6,6 +6,7 @@ import org.fatefield.circuits.model.Hill;
 /**
  * Sets one or more circuit parameters from the local morphogen level.
  *
+ * @param label            the parameter as the scenario names it (e.g. {@code repression})
  * @param parameterIndices indices in the circuit's parameter vector that take the value
  * @param form             linear or Hill
  * @param base             value at zero morphogen (parameter units)
@@ -13,7 +14,7 @@ import org.fatefield.circuits.model.Hill;
  * @param halfMax          morphogen level of half-maximal effect (Hill only), greater than 0
  * @param hill             Hill coefficient (Hill only), greater than 0
  */
-public record SignalCoupling(int[] parameterIndices, CouplingForm form, double base, double gain,
+public record SignalCoupling(String label, int[] parameterIndices, CouplingForm form, double base, double gain,
         double halfMax, double hill) {
 
     /** Validates and copies. */
@@ -54,6 +55,6 @@ public record SignalCoupling(int[] parameterIndices, CouplingForm form, double b
 
     @Override
     public String toString() {
-        return form + " coupling of parameters " + Arrays.toString(parameterIndices);
+        return form + " coupling of " + label + " " + Arrays.toString(parameterIndices);
     }
 }

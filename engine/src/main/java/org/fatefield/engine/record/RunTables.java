@@ -14,7 +14,8 @@ import org.fatefield.engine.tissue.TissueSpec;
 
 /**
  * Writes a run's tidy tables: one row per observation, one column per variable, the unit in
- * the column name. Numbers carry ten significant digits, so equal runs give equal bytes.
+ * the column name. Numbers carry ten significant digits, so equal runs give equal bytes. The
+ * writer passed in is flushed, not closed.
  */
 public final class RunTables {
 
@@ -36,19 +37,19 @@ public final class RunTables {
         }
         header.add("population");
         header.add("mean_morphogen");
-        try (CSVPrinter printer = new CSVPrinter(out, FORMAT)) {
-            printer.printRecord(header);
-            for (TimeSeries.Row row : series.rows()) {
-                List<String> values = new ArrayList<>();
-                values.add(number(row.time()));
-                for (int count : row.fateCounts()) {
-                    values.add(Integer.toString(count));
-                }
-                values.add(Integer.toString(row.population()));
-                values.add(number(row.meanMorphogen()));
-                printer.printRecord(values);
+        CSVPrinter printer = new CSVPrinter(out, FORMAT);
+        printer.printRecord(header);
+        for (TimeSeries.Row row : series.rows()) {
+            List<String> values = new ArrayList<>();
+            values.add(number(row.time()));
+            for (int count : row.fateCounts()) {
+                values.add(Integer.toString(count));
             }
+            values.add(Integer.toString(row.population()));
+            values.add(number(row.meanMorphogen()));
+            printer.printRecord(values);
         }
+        printer.flush();
     }
 
     /**
@@ -69,24 +70,24 @@ public final class RunTables {
         header.add("control_" + controlName(spec));
         header.add("fate");
         List<String> fateNames = spec.fates().fateNames();
-        try (CSVPrinter printer = new CSVPrinter(out, FORMAT)) {
-            printer.printRecord(header);
-            for (Cell cell : tissue.cells()) {
-                List<String> values = new ArrayList<>();
-                values.add(Long.toString(cell.id()));
-                values.add(Long.toString(cell.parentId()));
-                values.add(Integer.toString(cell.generation()));
-                values.add(number(cell.x()));
-                values.add(number(cell.y()));
-                for (int i = 0; i < species.size(); i++) {
-                    values.add(Long.toString(Math.round(cell.concentration(i) * omega)));
-                }
-                values.add(number(cell.signal()));
-                values.add(number(spec.mapping().controlAt(cell.signal())));
-                values.add(fateNames.get(cell.fate()));
-                printer.printRecord(values);
+        CSVPrinter printer = new CSVPrinter(out, FORMAT);
+        printer.printRecord(header);
+        for (Cell cell : tissue.cells()) {
+            List<String> values = new ArrayList<>();
+            values.add(Long.toString(cell.id()));
+            values.add(Long.toString(cell.parentId()));
+            values.add(Integer.toString(cell.generation()));
+            values.add(number(cell.x()));
+            values.add(number(cell.y()));
+            for (int i = 0; i < species.size(); i++) {
+                values.add(Long.toString(Math.round(cell.concentration(i) * omega)));
             }
+            values.add(number(cell.signal()));
+            values.add(number(spec.mapping().controlAt(cell.signal())));
+            values.add(fateNames.get(cell.fate()));
+            printer.printRecord(values);
         }
+        printer.flush();
     }
 
     /** Name of the control parameter (the first coupled one), or "none". */
@@ -94,8 +95,7 @@ public final class RunTables {
         if (spec.mapping().couplings().isEmpty()) {
             return "none";
         }
-        int index = spec.mapping().couplings().get(0).parameterIndices()[0];
-        return spec.circuit().network().parameterNames().get(index);
+        return spec.mapping().couplings().get(0).label();
     }
 
     /** A number with ten significant digits and no trailing zeros; NaN as "NaN". */

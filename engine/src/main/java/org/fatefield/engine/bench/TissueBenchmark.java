@@ -1,0 +1,93 @@
+package org.fatefield.engine.bench;
+
+import java.util.Arrays;
+import org.fatefield.engine.coupling.SignalCoupling;
+import org.fatefield.engine.division.CycleTimeDistribution;
+import org.fatefield.engine.tissue.GrowthSpec;
+import org.fatefield.engine.tissue.Tissue;
+import org.fatefield.engine.tissue.TissueSpec;
+import org.fatefield.engine.tissue.Timing;
+
+/**
+ * Measures the tissue's speed in cell-steps per second against a bare array loop doing the same
+ * circuit arithmetic, in the same process. A benchmark, not a test: numbers vary between
+ * machines, only the ratio travels.
+ */
+public final class TissueBenchmark {
+
+    /**
+     * One measurement.
+     *
+     * @param cells           cells in the tissue
+     * @param tickRate        full tick (field, cells, division check, mechanics) in cell-steps per second
+     * @param cellStepRate    the cell loop alone (signal, parameters, circuit, ageing) in cell-steps per second
+     * @param bareRate        the bare loop in cell-steps per second
+     */
+    public record Result(int cells, double tickRate, double cellStepRate, double bareRate) {
+
+        /** Cell loop over bare loop: 1 means no overhead. */
+        public double ratio() {
+            return cellStepRate / bareRate;
+        }
+    }
+
+    private TissueBenchmark() {
+    }
+
+    /**
+     * Measures a tissue of {@code cells} cells built like {@code template} (same circuit, field
+     * and coupling; the domain scaled to the template's founder density; no division), taking
+     * the median of {@code repeats} timings of {@code steps} steps each.
+     */
+    public static Result measure(TissueSpec template, int cells, int steps, int repeats, long seed) {
+        double scale = Math.sqrt((double) cells / template.growth().initialCells());
+        double width = template.width() * scale;
+        double height = template.height() * scale;
+        GrowthSpec growth = new GrowthSpec(cells, template.growth().cellRadius(), template.growth().repulsionRate(),
+                new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e9, 0), template.growth().partition());
+        double dt = template.timing().step();
+        TissueSpec spec = new TissueSpec(template.circuit(), template.mapping(), template.morphogen(), width, height,
+                growth, template.fates(), new Timing(dt * (repeats + 1) * steps * 3, dt, dt * steps));
+        Tissue tissue = new Tissue(spec, seed);
+        tissue.start();
+        SignalCoupling coupling = template.mapping().couplings().get(0);
+        BareSwitchLoop bare = new BareSwitchLoop(cells, template.mapping().base(), template.circuit().systemSize(),
+                new double[] {coupling.base(), coupling.gain(), coupling.halfMax(), coupling.hill()}, seed);
+        double[] tick = new double[repeats];
+        double[] cellsOnly = new double[repeats];
+        double[] bareLoop = new double[repeats];
+        double sink = 0;
+        for (int r = -1; r < repeats; r++) {
+            long t0 = System.nanoTime();
+            for (int s = 0; s < steps; s++) {
+                tissue.schedule.step(tissue);
+            }
+            long t1 = System.nanoTime();
+            for (int s = 0; s < steps; s++) {
+                tissue.stepCellsOnly();
+            }
+            long t2 = System.nanoTime();
+            for (int s = 0; s < steps; s++) {
+                bare.step(dt);
+            }
+            long t3 = System.nanoTime();
+            sink += bare.checksum();
+            if (r >= 0) {
+                double work = (double) cells * steps;
+                tick[r] = work / ((t1 - t0) / 1e9);
+                cellsOnly[r] = work / ((t2 - t1) / 1e9);
+                bareLoop[r] = work / ((t3 - t2) / 1e9);
+            }
+        }
+        if (Double.isNaN(sink)) {
+            throw new IllegalStateException("benchmark state became NaN");
+        }
+        return new Result(tissue.cells().size(), median(tick), median(cellsOnly), median(bareLoop));
+    }
+
+    private static double median(double[] values) {
+        double[] sorted = values.clone();
+        Arrays.sort(sorted);
+        return sorted[sorted.length / 2];
+    }
+}

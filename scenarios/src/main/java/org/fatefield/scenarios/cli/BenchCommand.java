@@ -1,0 +1,67 @@
+package org.fatefield.scenarios.cli;
+
+import java.io.PrintWriter;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.fatefield.engine.bench.TissueBenchmark;
+import org.fatefield.scenarios.format.Scenario;
+import org.fatefield.scenarios.format.ScenarioException;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+
+/** {@code fatefield bench}: cell-steps per second against a bare loop, in one run. */
+@Command(name = "bench", mixinStandardHelpOptions = true,
+        description = {"Measure cell-steps per second against a bare loop.",
+            "Times the tissue at several sizes beside a bare array loop doing the same circuit arithmetic"
+                    + " in the same process, and prints the ratio."})
+final class BenchCommand implements Callable<Integer> {
+
+    @Option(names = "--scenario", paramLabel = "SCENARIO", defaultValue = "demo",
+            description = "scenario whose circuit, field and coupling are measured (default: ${DEFAULT-VALUE})")
+    private String scenario;
+
+    @Option(names = "--cells", split = ",", paramLabel = "N", defaultValue = "10000,100000",
+            description = "tissue sizes (default: ${DEFAULT-VALUE})")
+    private List<Integer> sizes;
+
+    @Option(names = "--steps", paramLabel = "N", defaultValue = "50", description = "steps per timing (default: ${DEFAULT-VALUE})")
+    private int steps;
+
+    @Option(names = "--repeats", paramLabel = "N", defaultValue = "5",
+            description = "timings per size; the median is reported (default: ${DEFAULT-VALUE})")
+    private int repeats;
+
+    @CommandLine.Spec
+    private CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter out = spec.commandLine().getOut();
+        Scenario loaded;
+        try {
+            loaded = ScenarioArgument.load(scenario);
+        } catch (ScenarioException e) {
+            spec.commandLine().getErr().println(e.getMessage());
+            return FatefieldCommand.INVALID_INPUT;
+        }
+        if (loaded.tissue().mapping().couplings().isEmpty()) {
+            spec.commandLine().getErr().println("bench needs a scenario with at least one [[coupling]]");
+            return FatefieldCommand.INVALID_INPUT;
+        }
+        out.printf("Fatefield benchmark, scenario %s, Java %s, %d processors; median of %d timings of %d steps%n",
+                loaded.name(), System.getProperty("java.version"), Runtime.getRuntime().availableProcessors(),
+                repeats, steps);
+        out.printf("%10s %18s %18s %18s %12s%n", "cells", "full tick /s", "cell loop /s", "bare loop /s",
+                "loop/bare");
+        for (int cells : sizes) {
+            TissueBenchmark.Result r = TissueBenchmark.measure(loaded.tissue(), cells, steps, repeats, 1L);
+            out.printf("%10d %18.4g %18.4g %18.4g %12.2f%n", r.cells(), r.tickRate(), r.cellStepRate(), r.bareRate(),
+                    r.ratio());
+            out.flush();
+        }
+        out.println("Rates are cell-steps per second on one thread. loop/bare = 1 means no overhead over the bare loop.");
+        out.flush();
+        return 0;
+    }
+}

@@ -1,0 +1,85 @@
+package org.fatefield.scenarios.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.fatefield.engine.record.TimeSeries;
+import org.fatefield.engine.tissue.Tissue;
+import org.fatefield.scenarios.format.Scenario;
+import org.fatefield.scenarios.format.ScenarioException;
+import org.fatefield.scenarios.output.Progress;
+import org.fatefield.scenarios.output.ScenarioRunner;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code fatefield run}: simulate a scenario and write its run folder. */
+@Command(name = "run", mixinStandardHelpOptions = true,
+        description = {"Simulate a scenario and write its results to a folder.",
+            "Writes timeseries.csv, cells.csv, fate-proportions.png, tissue.png and, last, run.json."})
+final class RunCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", paramLabel = "SCENARIO",
+            description = "a scenario file (TOML), or the name of a built-in scenario (demo)")
+    private String scenario;
+
+    @Option(names = "--out", paramLabel = "DIR",
+            description = "folder for the results (default: <scenario name>-seed<N> in the current folder)")
+    private Path out;
+
+    @Option(names = "--seed", paramLabel = "N", description = "master random seed (default: run.seed of the scenario)")
+    private Long seed;
+
+    @Option(names = "--force", description = "overwrite the run files in an output folder that already holds files")
+    private boolean force;
+
+    @Option(names = "--quiet", description = "print nothing but errors")
+    private boolean quiet;
+
+    @CommandLine.Spec
+    private CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter err = spec.commandLine().getErr();
+        PrintWriter outWriter = spec.commandLine().getOut();
+        Scenario loaded;
+        try {
+            loaded = ScenarioArgument.load(scenario);
+        } catch (ScenarioException e) {
+            err.println(e.getMessage());
+            err.println("Nothing was run. Fix the lines above (see: fatefield keys), then run again.");
+            return FatefieldCommand.INVALID_INPUT;
+        }
+        if (seed != null && seed < 0) {
+            err.println("--seed must be 0 or greater, got " + seed);
+            return FatefieldCommand.INVALID_INPUT;
+        }
+        long runSeed = seed != null ? seed : loaded.seed();
+        Path folder = out != null ? out : Path.of(loaded.name() + "-seed" + runSeed);
+        Progress progress = quiet ? Progress.silent()
+                : Progress.forConsole(loaded.name(), loaded.tissue().timing().totalSteps(), System.err);
+        try {
+            Tissue tissue = ScenarioRunner.run(loaded, runSeed, folder, force, progress);
+            if (!quiet) {
+                TimeSeries.Row last = tissue.series().last();
+                List<String> fates = tissue.series().fateNames();
+                StringBuilder summary = new StringBuilder();
+                for (int f = 0; f < fates.size(); f++) {
+                    summary.append(f == 0 ? "" : ", ").append(fates.get(f)).append(' ').append(last.fateCounts()[f]);
+                }
+                outWriter.printf("Finished %s (seed %d): %d cells at t = %.1f h (%s).%n", loaded.name(), runSeed,
+                        last.population(), last.time(), summary);
+                outWriter.printf("Results are in %s%n", folder.toAbsolutePath().normalize());
+                outWriter.flush();
+            }
+            return 0;
+        } catch (IOException e) {
+            err.println("Cannot write results: " + e.getMessage());
+            return FatefieldCommand.OUTPUT_ERROR;
+        }
+    }
+}

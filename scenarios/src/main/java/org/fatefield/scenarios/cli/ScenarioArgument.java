@@ -1,0 +1,33 @@
+package org.fatefield.scenarios.cli;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import org.fatefield.scenarios.builtin.BuiltinScenarios;
+import org.fatefield.scenarios.format.Problem;
+import org.fatefield.scenarios.format.Scenario;
+import org.fatefield.scenarios.format.ScenarioException;
+import org.fatefield.scenarios.format.ScenarioReader;
+
+/** Resolves a command-line scenario argument: a file path, or the name of a built-in scenario. */
+final class ScenarioArgument {
+
+    private ScenarioArgument() {
+    }
+
+    /** Reads and validates the scenario named by {@code argument}. */
+    static Scenario load(String argument) throws ScenarioException {
+        Path path = Path.of(argument);
+        if (Files.exists(path)) {
+            return ScenarioReader.read(path);
+        }
+        Optional<byte[]> builtin = BuiltinScenarios.bytes(argument);
+        if (builtin.isPresent()) {
+            return ScenarioReader.parse("builtin:" + argument, argument, builtin.get());
+        }
+        throw new ScenarioException(List.of(new Problem(argument, 0, 0, "", null,
+                "no such scenario file, and no built-in scenario of that name (built-in: "
+                        + String.join(", ", BuiltinScenarios.names()) + ")")));
+    }
+}

@@ -1,0 +1,96 @@
+package org.fatefield.scenarios.format;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
+import java.util.HashSet;
+import java.util.HexFormat;
+import java.util.Set;
+import java.util.List;
+import org.tomlj.TomlParseResult;
+
+/**
+ * Reads a scenario file into a {@link Scenario}, reporting every problem at once.
+ *
+ * <p>A scenario file is untrusted: it is parsed as TOML data and checked against
+ * {@link ScenarioSchema}; nothing in it is ever executed.
+ */
+public final class ScenarioReader {
+
+    private ScenarioReader() {
+    }
+
+    /** Reads and validates the file at {@code path}. */
+    public static Scenario read(Path path) throws ScenarioException {
+        byte[] bytes;
+        try {
+            bytes = Files.readAllBytes(path);
+        } catch (IOException e) {
+            throw new ScenarioException(List.of(new Problem(path.toString(), 0, 0, "", null,
+                    "cannot read the file: " + e.getMessage())));
+        }
+        String fallbackName = path.getFileName().toString().replaceFirst("\\.toml$", "");
+        return parse(path.toString(), fallbackName, bytes);
+    }
+
+    /**
+     * Validates scenario text.
+     *
+     * @param label        how the file is named in messages and provenance
+     * @param fallbackName scenario name when the file gives none
+     * @param bytes        the file's UTF-8 bytes
+     */
+    public static Scenario parse(String label, String fallbackName, byte[] bytes) throws ScenarioException {
+        String text = new String(bytes, StandardCharsets.UTF_8);
+        ScenarioChecker checker = new ScenarioChecker(label);
+        TomlParseResult toml = checker.check(text);
+        List<Problem> problems = new ArrayList<>(checker.problems());
+        if (toml == null) {
+            throw new ScenarioException(sorted(problems));
+        }
+        ScenarioCompiler compiler = new ScenarioCompiler(label, toml, checker);
+        Scenario scenario = null;
+        try {
+            scenario = compiler.compile(fallbackName, sha256(bytes));
+        } catch (RuntimeException e) {
+            if (problems.isEmpty()) {
+                throw e;
+            }
+        }
+        Set<String> reported = new HashSet<>();
+        problems.forEach(p -> reported.add(p.keyPath()));
+        for (Problem p : compiler.problems()) {
+            if (reported.add(p.keyPath())) {
+                problems.add(p);
+            }
+        }
+        if (!problems.isEmpty() || scenario == null) {
+            throw new ScenarioException(sorted(problems));
+        }
+        return scenario;
+    }
+
+    /** Problems in file order; absences (line 0) last. */
+    private static List<Problem> sorted(List<Problem> problems) {
+        List<Problem> copy = new ArrayList<>(problems);
+        copy.sort((a, b) -> a.line() != b.line() ? Integer.compare(lineKey(a), lineKey(b))
+                : Integer.compare(a.column(), b.column()));
+        return copy;
+    }
+
+    private static int lineKey(Problem p) {
+        return p.line() == 0 ? Integer.MAX_VALUE : p.line();
+    }
+
+    static String sha256(byte[] bytes) {
+        try {
+            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes));
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is required of every Java platform", e);
+        }
+    }
+}

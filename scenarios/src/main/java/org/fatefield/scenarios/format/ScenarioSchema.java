@@ -1,0 +1,112 @@
+package org.fatefield.scenarios.format;
+
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * Every section and key of the scenario format, with units and defaults: the single source for
+ * validation and for the reference page ({@code fatefield keys}).
+ *
+ * <p>Units: length µm, time h, concentrations dimensionless (the circuit's own unit, which the
+ * system size converts to molecules).
+ */
+public final class ScenarioSchema {
+
+    /** Words of {@code circuit.type}. */
+    public static final String SWITCH = "self-activating-switch";
+
+    /** Kinetic keys shared by {@code [circuit.kinetics]} and its per-gene tables. */
+    public static final List<Key> KINETICS = List.of(
+            Key.nonNegative("basal", "1/h", "0.05", "constitutive production rate of each gene"),
+            Key.nonNegative("self_activation", "1/h", "0.2", "maximal production added by a gene's activation of itself"),
+            Key.positive("self_threshold", "", "0.5", "concentration of half-maximal self-activation"),
+            Key.positive("self_hill", "", "4", "Hill coefficient of self-activation"),
+            Key.nonNegative("repression", "1/h", "1.0",
+                    "production the other gene can repress (maximal when the other gene is absent)"),
+            Key.positive("repression_threshold", "", "0.5", "concentration of the other gene giving half repression"),
+            Key.positive("repression_hill", "", "4", "Hill coefficient of the repression"),
+            Key.positive("degradation", "1/h", "1.0", "first-order loss rate, dilution by growth included"));
+
+    private static final List<Section> SECTIONS = List.of(
+            new Section("scenario", false, false, List.of(
+                    Key.of("name", KeyType.TEXT, "", "file name", "short name shown in outputs"),
+                    Key.of("description", KeyType.TEXT, "", "\"\"", "what the scenario models, one or two sentences")),
+                    "what the scenario is"),
+            new Section("run", false, false, List.of(
+                    Key.positive("duration", "h", "48", "simulated time"),
+                    Key.positive("step", "h", "0.01", "time step of circuits and mechanics (the field sub-steps as it needs)"),
+                    Key.positive("record_every", "h", "0.5", "time between rows of timeseries.csv (at least one step)"),
+                    Key.integer("seed", "1", 0, 9.007199254740991E15,
+                            "master random seed; --seed on the command line overrides it")),
+                    "how long to simulate and how often to record"),
+            new Section("tissue", false, true, List.of(
+                    Key.positive("width", "µm", "600", "domain size along x, the gradient axis"),
+                    Key.positive("height", "µm", "300", "domain size along y"),
+                    Key.integer("founders", "200", 1, 2_000_000, "cells at time 0, placed uniformly at random"),
+                    Key.positive("cell_radius", "µm", "5", "radius of a newborn cell; a cell's area doubles over its cycle"),
+                    Key.nonNegative("repulsion", "1/h", "20",
+                            "overlap relaxation rate: speed (µm/h) per µm of overlap; keep repulsion * step below 0.2")),
+                    "the domain (a rectangle with walls) and its founder cells"),
+            new Section("division", false, false, List.of(
+                    Key.choice("cycle", "gamma", List.of("fixed", "gamma", "lognormal"), "cycle-time distribution"),
+                    Key.positive("cycle_mean", "h", "12", "mean time from birth to division"),
+                    Key.nonNegative("cycle_cv", "", "0.15", "coefficient of variation of the cycle time (ignored when fixed)"),
+                    Key.choice("partition", "binomial", List.of("binomial", "equal"),
+                            "how molecules are shared at division: binomial (each molecule to either daughter with"
+                                    + " probability 1/2) or equal (exact halves: no partitioning noise)")),
+                    "growth and division"),
+            new Section("circuit", false, true, List.of(
+                    Key.choice("type", null, List.of(SWITCH), "the circuit family"),
+                    Key.of("genes", KeyType.NAMES, "", "[\"A\", \"B\"]", "names of the two genes (species)"),
+                    Key.choice("noise", "langevin", List.of("langevin", "none"),
+                            "langevin: chemical Langevin equation; none: deterministic rate equations (RK4)"),
+                    Key.positive("system_size", "molecules per unit concentration", "100",
+                            "converts concentrations to molecule numbers in a newborn cell; sets the noise level"),
+                    Key.of("initial", KeyType.NUMBERS, "", "[0.3, 0.3]", "concentrations of every founder cell, one per gene")),
+                    "the circuit every cell carries"),
+            new Section("circuit.kinetics", false, false, KINETICS,
+                    "kinetics shared by both genes; a sub-table [circuit.kinetics.<gene>] with the same keys"
+                            + " overrides them for one gene"),
+            new Section("morphogen", false, true, List.of(
+                    Key.nonNegative("diffusion", "µm²/h", "3600", "diffusion coefficient"),
+                    Key.nonNegative("decay", "1/h", "0.2", "first-order decay rate"),
+                    Key.positive("grid_spacing", "µm", "10", "side of a grid square of the field"),
+                    Key.nonNegative("initial", "", "0", "uniform concentration at time 0")),
+                    "the diffusing morphogen (no-flux walls)"),
+            new Section("morphogen.source", true, false, List.of(
+                    Key.of("region", KeyType.NUMBERS, "µm", null, "rectangle [x0, y0, x1, y1] where morphogen is made"),
+                    Key.nonNegative("rate", "1/h", null, "synthesis rate (concentration per hour) inside the region")),
+                    "a region that synthesises morphogen; repeat for several"),
+            new Section("coupling", true, false, List.of(
+                    Key.of("parameter", KeyType.TEXT, "", null,
+                            "kinetic key set by the morphogen: a key of [circuit.kinetics] for both genes, or"
+                                    + " <gene>.<key> for one; the first coupling is the tissue's control parameter"),
+                    Key.choice("form", "hill", List.of("hill", "linear"),
+                            "hill: base + gain * c^n / (half_max^n + c^n); linear: base + gain * c"),
+                    Key.anyNumber("base", "parameter's unit", null, "value where there is no morphogen"),
+                    Key.anyNumber("gain", "parameter's unit", null, "maximal increase (hill) or slope per unit morphogen (linear)"),
+                    Key.positive("half_max", "", "1", "morphogen level of half-maximal effect (hill)"),
+                    Key.positive("hill", "", "2", "Hill coefficient of the coupling (hill)")),
+                    "how the local morphogen level c sets a circuit parameter in each cell"),
+            new Section("fates", false, true, List.of(
+                    Key.of("default", KeyType.TEXT, "", "\"progenitor\"", "fate of a cell that matches no rule")),
+                    "how a cell's state is read as a fate"),
+            new Section("fates.rule", true, true, List.of(
+                    Key.of("name", KeyType.TEXT, "", null, "fate name used in outputs"),
+                    Key.of("above", KeyType.SPECIES_NUMBERS, "", "{}", "gene = level: the gene must be at or above the level"),
+                    Key.of("below", KeyType.SPECIES_NUMBERS, "", "{}", "gene = level: the gene must be below the level")),
+                    "a fate and the box of states that defines it; the first matching rule wins"));
+
+    private ScenarioSchema() {
+    }
+
+    /** All sections, in reference order. */
+    public static List<Section> sections() {
+        return SECTIONS;
+    }
+
+    /** The section at {@code path}. */
+    public static Optional<Section> section(String path) {
+        return SECTIONS.stream().filter(s -> s.path().equals(path)).findFirst();
+    }
+}

@@ -1,0 +1,98 @@
+package org.fatefield.scenarios.output;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.stream.Stream;
+
+/**
+ * The folder a run writes into. A folder that already holds files is never overwritten unless
+ * the user says so, and every file is written to a temporary name and then renamed, so a killed
+ * run leaves complete files or none, never a truncated one.
+ */
+public final class RunFolder {
+
+    /** Writes the content of one file. */
+    @FunctionalInterface
+    public interface Content {
+        /** Writes to {@code out}. */
+        void writeTo(OutputStream out) throws IOException;
+    }
+
+    /** Writes the content of one text file. */
+    @FunctionalInterface
+    public interface TextContent {
+        /** Writes to {@code out}. */
+        void writeTo(Writer out) throws IOException;
+    }
+
+    private final Path path;
+
+    private RunFolder(Path path) {
+        this.path = path;
+    }
+
+    /**
+     * Checks that {@code path} may receive a run, without creating anything.
+     *
+     * @throws IOException with a message saying what to do if it holds files and {@code force}
+     *                     is false, or if it is a file
+     */
+    public static void checkUsable(Path path, boolean force) throws IOException {
+        if (Files.exists(path) && !Files.isDirectory(path)) {
+            throw new IOException("output path " + path + " is a file, not a folder; choose another --out");
+        }
+        if (Files.isDirectory(path) && !force) {
+            try (Stream<Path> entries = Files.list(path)) {
+                if (entries.findAny().isPresent()) {
+                    throw new IOException("output folder " + path + " already holds files; choose another --out,"
+                            + " or add --force to overwrite the run files in it");
+                }
+            }
+        }
+    }
+
+    /** Creates (if needed) and opens the folder; call {@link #checkUsable} first. */
+    public static RunFolder open(Path path) throws IOException {
+        Files.createDirectories(path);
+        return new RunFolder(path);
+    }
+
+    /** The folder. */
+    public Path path() {
+        return path;
+    }
+
+    /** Writes {@code name} atomically: to a temporary file first, then renamed over the target. */
+    public Path write(String name, Content content) throws IOException {
+        Path target = path.resolve(name);
+        Path temporary = path.resolve("." + name + ".partial");
+        try {
+            try (OutputStream out = Files.newOutputStream(temporary)) {
+                content.writeTo(out);
+            }
+            try {
+                Files.move(temporary, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException e) {
+                Files.move(temporary, target, StandardCopyOption.REPLACE_EXISTING);
+            }
+        } finally {
+            Files.deleteIfExists(temporary);
+        }
+        return target;
+    }
+
+    /** Writes a UTF-8 text file atomically. */
+    public Path writeText(String name, TextContent content) throws IOException {
+        return write(name, out -> {
+            Writer writer = new java.io.OutputStreamWriter(out, StandardCharsets.UTF_8);
+            content.writeTo(writer);
+            writer.flush();
+        });
+    }
+}

@@ -1,0 +1,62 @@
+package org.fatefield.scenarios.output;
+
+import com.google.gson.GsonBuilder;
+import com.google.gson.JsonArray;
+import com.google.gson.JsonObject;
+import java.time.Instant;
+import java.util.List;
+import org.fatefield.engine.record.TimeSeries;
+import org.fatefield.engine.tissue.Tissue;
+import org.fatefield.scenarios.format.Scenario;
+
+/** Builds {@code run.json}: what was run, with which seed and versions, and what came out. */
+public final class RunProvenance {
+
+    private RunProvenance() {
+    }
+
+    /** The tool's version from the jar manifest, or "development" when run from classes. */
+    public static String toolVersion() {
+        String version = RunProvenance.class.getPackage().getImplementationVersion();
+        return version != null ? version : "development";
+    }
+
+    /**
+     * The provenance record as pretty-printed JSON.
+     *
+     * @param started     when the run began
+     * @param wallSeconds wall-clock time of the simulation and output
+     * @param files       files written beside it
+     */
+    public static String json(Scenario scenario, long seed, Tissue tissue, Instant started, double wallSeconds,
+            List<String> files) {
+        JsonObject root = new JsonObject();
+        root.addProperty("tool", "fatefield");
+        root.addProperty("tool_version", toolVersion());
+        root.addProperty("java_version", System.getProperty("java.version"));
+        root.addProperty("java_vendor", System.getProperty("java.vendor"));
+        root.addProperty("os", System.getProperty("os.name") + " " + System.getProperty("os.arch"));
+        JsonObject source = new JsonObject();
+        source.addProperty("name", scenario.name());
+        source.addProperty("source", scenario.source());
+        source.addProperty("sha256", scenario.sha256());
+        root.add("scenario", source);
+        root.addProperty("seed", seed);
+        root.addProperty("started", started.toString());
+        root.addProperty("wall_time_s", Math.round(wallSeconds * 1000) / 1000.0);
+        root.addProperty("simulated_time_h", tissue.time());
+        root.addProperty("steps", tissue.steps());
+        TimeSeries.Row last = tissue.series().last();
+        root.addProperty("final_population", last.population());
+        JsonObject fates = new JsonObject();
+        List<String> names = tissue.series().fateNames();
+        for (int f = 0; f < names.size(); f++) {
+            fates.addProperty(names.get(f), last.fateCounts()[f]);
+        }
+        root.add("final_fate_counts", fates);
+        JsonArray written = new JsonArray();
+        files.forEach(written::add);
+        root.add("files", written);
+        return new GsonBuilder().setPrettyPrinting().disableHtmlEscaping().create().toJson(root) + "\n";
+    }
+}

@@ -1,0 +1,77 @@
+package org.fatefield.scenarios.output;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import javax.imageio.ImageIO;
+import org.fatefield.engine.record.RunTables;
+import org.fatefield.engine.tissue.Tissue;
+import org.fatefield.scenarios.format.Scenario;
+import org.fatefield.viz.chart.FateProportionChart;
+import org.fatefield.viz.tissue.TissueRenderer;
+
+/**
+ * Runs a scenario to the end and writes its run folder: {@code timeseries.csv},
+ * {@code cells.csv}, {@code fate-proportions.png}, {@code tissue.png} and, last, {@code run.json}
+ * (so a folder with {@code run.json} holds a finished run).
+ */
+public final class ScenarioRunner {
+
+    /** File names of a run folder. */
+    public static final String TIMESERIES = "timeseries.csv";
+    /** Final cell table. */
+    public static final String CELLS = "cells.csv";
+    /** Fate proportions chart. */
+    public static final String FATE_CHART = "fate-proportions.png";
+    /** Final tissue image. */
+    public static final String TISSUE_IMAGE = "tissue.png";
+    /** Provenance, written last. */
+    public static final String PROVENANCE = "run.json";
+
+    private ScenarioRunner() {
+    }
+
+    /**
+     * Runs {@code scenario} with {@code seed} into folder {@code out}.
+     *
+     * @param force overwrite run files in a folder that already holds files
+     * @return the finished tissue
+     * @throws IOException if the folder may not be used or a file cannot be written
+     */
+    public static Tissue run(Scenario scenario, long seed, Path out, boolean force, Progress progress)
+            throws IOException {
+        RunFolder.checkUsable(out, force);
+        Instant started = Instant.now();
+        long startNanos = System.nanoTime();
+        Tissue tissue = new Tissue(scenario.tissue(), seed);
+        tissue.start();
+        long total = scenario.tissue().timing().totalSteps();
+        try (progress) {
+            while (!tissue.finished()) {
+                tissue.schedule.step(tissue);
+                progress.update(tissue.steps(), total);
+            }
+        }
+        RunFolder folder = RunFolder.open(out);
+        List<String> files = new ArrayList<>();
+        folder.writeText(TIMESERIES, w -> RunTables.writeTimeSeries(tissue.series(), w));
+        files.add(TIMESERIES);
+        folder.writeText(CELLS, w -> RunTables.writeCells(tissue, w));
+        files.add(CELLS);
+        String title = scenario.name() + ", seed " + seed;
+        folder.write(FATE_CHART, o -> ImageIO.write(
+                FateProportionChart.create(tissue.series(), "Fate proportions: " + title).createBufferedImage(960, 560),
+                "png", o));
+        files.add(FATE_CHART);
+        String tissueTitle = String.format(Locale.ROOT, "%s at t = %.1f h (%d cells)", title, tissue.time(),
+                tissue.cells().size());
+        folder.write(TISSUE_IMAGE, o -> ImageIO.write(TissueRenderer.render(tissue, tissueTitle, 900), "png", o));
+        files.add(TISSUE_IMAGE);
+        double wall = (System.nanoTime() - startNanos) / 1e9;
+        folder.writeText(PROVENANCE, w -> w.write(RunProvenance.json(scenario, seed, tissue, started, wall, files)));
+        return tissue;
+    }
+}

@@ -1,0 +1,127 @@
+package org.fatefield.scenarios.cli;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.fatefield.scenarios.builtin.BuiltinScenarios;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class RunCommandTest {
+
+    @TempDir
+    Path tmp;
+
+    private record Outcome(int code, String out, String err) {
+    }
+
+    private static Outcome fatefield(String... args) {
+        StringWriter out = new StringWriter();
+        StringWriter err = new StringWriter();
+        int code = FatefieldCommand.execute(new PrintWriter(out, true), new PrintWriter(err, true), args);
+        return new Outcome(code, out.toString(), err.toString());
+    }
+
+    /** The demo, shortened to 12 h so the test stays quick. */
+    private Path shortDemo() throws IOException {
+        String text = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8)
+                .replace("duration = 48.0", "duration = 12.0");
+        Path file = tmp.resolve("short.toml");
+        Files.writeString(file, text);
+        return file;
+    }
+
+    @Test
+    void sameScenarioAndSeedGiveByteIdenticalTables() throws IOException {
+        Path scenario = shortDemo();
+        Path first = tmp.resolve("first");
+        Path second = tmp.resolve("second");
+        assertEquals(0, fatefield("run", scenario.toString(), "--out", first.toString(), "--seed", "5", "--quiet").code());
+        assertEquals(0, fatefield("run", scenario.toString(), "--out", second.toString(), "--seed", "5", "--quiet").code());
+        for (String file : List.of("timeseries.csv", "cells.csv")) {
+            assertArrayEquals(Files.readAllBytes(first.resolve(file)), Files.readAllBytes(second.resolve(file)), file);
+        }
+        for (String file : List.of("fate-proportions.png", "tissue.png", "run.json")) {
+            assertTrue(Files.size(first.resolve(file)) > 0, file);
+        }
+        Path third = tmp.resolve("third");
+        assertEquals(0, fatefield("run", scenario.toString(), "--out", third.toString(), "--seed", "6", "--quiet").code());
+        assertFalse(java.util.Arrays.equals(Files.readAllBytes(first.resolve("cells.csv")),
+                Files.readAllBytes(third.resolve("cells.csv"))), "another seed should give another tissue");
+    }
+
+    @Test
+    void badScenariosExitNonZeroNameLineAndKeyAndCreateNoFolder() throws IOException {
+        String demo = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8);
+        List<String[]> cases = List.of(
+                new String[] {demo.replace("founders = 120", "founders = 120\nspeed = 3"), "tissue.speed", "speed = 3"},
+                new String[] {demo.replace("rate = 3.0", "rate = -3.0"), "morphogen.source[1].rate", "rate = -3.0"},
+                new String[] {demo.replace("[circuit]", "[circus]"), "circuit", null},
+                new String[] {demo.replace("step = 0.01", "step = = 0.01"), "run.step", "step = = 0.01"});
+        for (String[] c : cases) {
+            Path file = tmp.resolve("bad.toml");
+            Files.writeString(file, c[0]);
+            Path out = tmp.resolve("never");
+            for (String command : List.of("run", "validate")) {
+                Outcome o = command.equals("run")
+                        ? fatefield("run", file.toString(), "--out", out.toString())
+                        : fatefield("validate", file.toString());
+                assertNotEquals(0, o.code(), command + " should fail for " + c[1]);
+                assertTrue(o.err().contains(c[1]), o.err());
+                assertTrue(o.err().contains(file.toString()), o.err());
+                if (c[2] != null) {
+                    int line = lineStartingWith(c[0], c[2]);
+                    assertTrue(o.err().contains(file + ":" + line + ":"), "line " + line + " in " + o.err());
+                }
+                assertFalse(Files.exists(out), "no output folder may be created");
+            }
+        }
+    }
+
+    private static int lineStartingWith(String text, String start) {
+        String[] lines = text.split("\n", -1);
+        for (int i = 0; i < lines.length; i++) {
+            if (lines[i].startsWith(start)) {
+                return i + 1;
+            }
+        }
+        throw new AssertionError("no line starts with " + start);
+    }
+
+    @Test
+    void aFolderWithFilesIsNotOverwrittenWithoutForce() throws IOException {
+        Path scenario = shortDemo();
+        Path out = tmp.resolve("busy");
+        Files.createDirectories(out);
+        Files.writeString(out.resolve("notes.txt"), "mine");
+        Outcome refused = fatefield("run", scenario.toString(), "--out", out.toString(), "--quiet");
+        assertEquals(FatefieldCommand.OUTPUT_ERROR, refused.code());
+        assertTrue(refused.err().contains("--force"), refused.err());
+        try (var files = Files.list(out)) {
+            assertEquals(1, files.count());
+        }
+        assertEquals(0, fatefield("run", scenario.toString(), "--out", out.toString(), "--quiet", "--force").code());
+        assertEquals("mine", Files.readString(out.resolve("notes.txt")));
+        assertTrue(Files.exists(out.resolve("run.json")));
+    }
+
+    @Test
+    void validateAcceptsTheDemoAndUnknownNamesAreExplained() {
+        Outcome ok = fatefield("validate", "demo");
+        assertEquals(0, ok.code());
+        assertTrue(ok.out().contains("valid"), ok.out());
+        Outcome missing = fatefield("run", "no-such-scenario");
+        assertEquals(FatefieldCommand.INVALID_INPUT, missing.code());
+        assertTrue(missing.err().contains("built-in: demo"), missing.err());
+    }
+}

@@ -1,0 +1,115 @@
+package org.fatefield.scenarios.format;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.charset.StandardCharsets;
+import java.util.List;
+import org.fatefield.scenarios.builtin.BuiltinScenarios;
+import org.junit.jupiter.api.Test;
+
+class ScenarioReaderTest {
+
+    private static String demo() {
+        return new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8);
+    }
+
+    private static List<Problem> problems(String text) {
+        ScenarioException e = assertThrows(ScenarioException.class,
+                () -> ScenarioReader.parse("test.toml", "test", text.getBytes(StandardCharsets.UTF_8)));
+        return e.problems();
+    }
+
+    private static int lineOf(String text, String fragment) {
+        String[] lines = text.split("\n", -1);
+        for (int i = 0; i < lines.length; i++) {
+            if (lines[i].contains(fragment)) {
+                return i + 1;
+            }
+        }
+        throw new AssertionError("fragment not found: " + fragment);
+    }
+
+    @Test
+    void theDemoIsValid() throws ScenarioException {
+        Scenario scenario = ScenarioReader.parse("demo", "demo", demo().getBytes(StandardCharsets.UTF_8));
+        assertEquals("glassfin-fold", scenario.name());
+        assertEquals(List.of("photocyte", "shieldcyte", "progenitor"), scenario.tissue().fates().fateNames());
+        assertEquals(4800, scenario.tissue().timing().totalSteps());
+        assertEquals(64, scenario.sha256().length());
+    }
+
+    @Test
+    void unknownKeyIsReportedWithLineKeyAndSuggestion() {
+        String text = demo().replace("cell_radius = 4.0", "cell_radus = 4.0");
+        List<Problem> problems = problems(text);
+        assertEquals(1, problems.size(), problems.toString());
+        Problem p = problems.get(0);
+        assertEquals(lineOf(text, "cell_radus"), p.line());
+        assertEquals("tissue.cell_radus", p.keyPath());
+        assertTrue(p.message().contains("did you mean 'cell_radius'"), p.message());
+    }
+
+    @Test
+    void negativeRateIsReportedWithValueAndAllowedRange() {
+        String text = demo().replace("rate = 3.0", "rate = -3.0");
+        Problem p = problems(text).get(0);
+        assertEquals(lineOf(text, "rate = -3.0"), p.line());
+        assertEquals("morphogen.source[1].rate", p.keyPath());
+        assertEquals("-3.0", p.value());
+        assertTrue(p.message().contains("at least 0"), p.message());
+        assertTrue(p.format().startsWith("test.toml:" + p.line() + ":"), p.format());
+    }
+
+    @Test
+    void missingSectionIsNamed() {
+        String text = demo().replace("[tissue]", "[tissue_gone]");
+        List<Problem> problems = problems(text);
+        assertTrue(problems.stream().anyMatch(p -> p.keyPath().equals("tissue") && p.message().contains("missing section")),
+                problems.toString());
+        assertTrue(problems.stream().anyMatch(p -> p.keyPath().equals("tissue_gone")
+                && p.line() == lineOf(text, "[tissue_gone]")), problems.toString());
+    }
+
+    @Test
+    void malformedTomlGivesLineAndColumn() {
+        String text = demo().replace("duration = 48.0", "duration = 48.0.0");
+        Problem p = problems(text).get(0);
+        assertEquals(lineOf(text, "48.0.0"), p.line());
+        assertTrue(p.column() > 0);
+        assertTrue(p.message().startsWith("not valid TOML"), p.message());
+    }
+
+    @Test
+    void everyProblemIsReportedAtOnce() {
+        String text = demo().replace("width = 600.0", "width = -1")
+                .replace("noise = \"langevin\"", "noise = \"loud\"")
+                .replace("half_max = 1.0", "half_max = \"one\"")
+                .replace("above = { Lum = 0.6 }", "above = { Lum = 0.6 }\ncolour = \"red\"");
+        List<Problem> problems = problems(text);
+        assertEquals(4, problems.size(), problems.toString());
+        assertEquals(List.of("tissue.width", "circuit.noise", "coupling[1].half_max", "fates.rule[1].colour"),
+                problems.stream().map(Problem::keyPath).toList());
+    }
+
+    @Test
+    void semanticProblemsNameTheKey() {
+        String text = demo().replace("above = { Lum = 0.6 }", "above = { Lux = 0.6 }")
+                .replace("parameter = \"repression\"", "parameter = \"represion\"");
+        List<Problem> problems = problems(text);
+        assertEquals(2, problems.size(), problems.toString());
+        assertTrue(problems.get(0).message().contains("did you mean 'repression'"), problems.get(0).message());
+        assertEquals("fates.rule[1].above.Lux", problems.get(1).keyPath());
+    }
+
+    @Test
+    void perGeneKineticsOverrideTheSharedOnes() throws ScenarioException {
+        String text = demo().replace("degradation = 1.0", "degradation = 1.0\n\n[circuit.kinetics.Ark]\ndegradation = 2.5");
+        Scenario scenario = ScenarioReader.parse("t", "t", text.getBytes(StandardCharsets.UTF_8));
+        double[] p = scenario.tissue().mapping().base();
+        List<String> names = scenario.tissue().circuit().network().parameterNames();
+        assertEquals(1.0, p[names.indexOf("Lum.degradation")], 0.0);
+        assertEquals(2.5, p[names.indexOf("Ark.degradation")], 0.0);
+    }
+}
