@@ -285,7 +285,7 @@ final class ScenarioCompiler {
             return null;
         }
         PartitionMode partition = PartitionMode.valueOf(text(division, "division", "partition").toUpperCase(Locale.ROOT));
-        return new GrowthSpec((int) (long) tissue.getLong("founders", () -> 200L), number(tissue, "tissue", "cell_radius"),
+        return new GrowthSpec((int) tissue.getLong("founders", () -> 200L), number(tissue, "tissue", "cell_radius"),
                 number(tissue, "tissue", "repulsion"),
                 new CycleTimeDistribution(kind, number(division, "division", "cycle_mean"), cv), partition);
     }
