@@ -9,7 +9,6 @@ import org.hipparchus.complex.Complex;
 import org.hipparchus.linear.Array2DRowRealMatrix;
 import org.hipparchus.linear.ArrayRealVector;
 import org.hipparchus.linear.DecompositionSolver;
-import org.hipparchus.linear.EigenDecompositionNonSymmetric;
 import org.hipparchus.linear.LUDecomposition;
 import org.hipparchus.linear.RealVector;
 
@@ -18,7 +17,7 @@ import org.hipparchus.linear.RealVector;
  *
  * <p>Damped Newton iterations start from a regular grid of points in the box; converged points
  * are deduplicated and classified by the eigenvalues of the Jacobian (Hipparchus
- * {@link EigenDecompositionNonSymmetric}). A grid fine enough to put a start in every basin of
+ * {@link Spectra}). A grid fine enough to put a start in every basin of
  * Newton's method finds every root in practice; the number of starts per axis is a setting.
  */
 public final class SteadyStateFinder {
@@ -113,9 +112,7 @@ public final class SteadyStateFinder {
         int n = network.speciesCount();
         double[][] jac = new double[n][n];
         network.jacobian(x, params, jac);
-        Complex[] eigen = new EigenDecompositionNonSymmetric(new Array2DRowRealMatrix(jac, false)).getEigenvalues();
-        Arrays.sort(eigen, Comparator.comparingDouble(Complex::getReal).reversed()
-                .thenComparing(Comparator.comparingDouble(Complex::getImaginary)));
+        Complex[] eigen = Spectra.eigenvalues(jac);
         return new SteadyState(x, eigen, typeOf(eigen));
     }
 

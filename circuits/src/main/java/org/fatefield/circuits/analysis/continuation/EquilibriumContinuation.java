@@ -1,0 +1,309 @@
+package org.fatefield.circuits.analysis.continuation;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.function.ToDoubleFunction;
+import org.fatefield.circuits.analysis.Spectra;
+import org.hipparchus.complex.Complex;
+import org.hipparchus.linear.Array2DRowRealMatrix;
+import org.hipparchus.linear.RealMatrix;
+import org.hipparchus.linear.SingularValueDecomposition;
+
+/**
+ * Branches of steady states along one parameter, with their stability and special points.
+ *
+ * <p>Pseudo-arclength continuation ({@link PseudoArclength}; Keller 1977) with an adaptive step.
+ * Between consecutive points three test functions are watched (Kuznetsov, Y. A. 2004, Elements of
+ * Applied Bifurcation Theory, 3rd ed., Springer, ch. 10; Govaerts, W. 2000, Numerical Methods
+ * for Bifurcations of Dynamical Equilibria, SIAM): the parameter component of the tangent
+ * (saddle-node folds), the determinant of the bordered Jacobian (simple branch points) and the
+ * real part of the complex eigenvalue pair nearest the imaginary axis (Hopf points). A sign change
+ * is located by the Illinois variant of regula falsi on the arclength, each trial point corrected
+ * onto the branch, to about 1e-10 in the parameter. At a branch point the second branch's
+ * direction is the part of the two-dimensional null space of {@code [F_x | F_lambda]} orthogonal to
+ * the known tangent (from a singular value decomposition), and it is traced both ways.
+ */
+public final class EquilibriumContinuation {
+
+    private static final double IMAGINARY_TOLERANCE = 1e-9;
+
+    private final ParametrisedSystem system;
+    private final ContinuationSettings settings;
+    private final PseudoArclength arclength;
+    private final int n;
+
+    private EquilibriumContinuation(ParametrisedSystem system, ContinuationSettings settings) {
+        this.system = system;
+        this.settings = settings;
+        this.arclength = new PseudoArclength(new EquilibriumBranchSystem(system), settings.tolerance(), 12);
+        this.n = system.dimension();
+    }
+
+    /** A continuation of {@code system} with the given step control. */
+    public static EquilibriumContinuation of(ParametrisedSystem system, ContinuationSettings settings) {
+        return new EquilibriumContinuation(system, settings);
+    }
+
+    /** A branch point found while tracing, with what is needed to switch branches there. */
+    private record Crossing(double[] y, double[] tangent) {
+    }
+
+    /**
+     * The steady-state branch through (near) {@code x0} at {@code lambda0}, followed both ways in
+     * {@code [lambdaMin, lambdaMax]}, and, if {@code switchBranches}, the branches emerging from
+     * its branch points (and theirs, up to {@code depth} levels).
+     */
+    public List<Branch> diagram(double[] x0, double lambda0, double lambdaMin, double lambdaMax, boolean switchBranches,
+            int depth) {
+        double[] start = new double[n + 1];
+        System.arraycopy(x0, 0, start, 0, n);
+        start[n] = lambda0;
+        double[] normal = new double[n + 1];
+        normal[n] = 1.0;
+        double[] y = arclength.correct(start, normal);
+        if (y == null) {
+            throw new IllegalArgumentException("no steady state converged from the start point at parameter "
+                    + lambda0 + "; start closer to a steady state");
+        }
+        List<Branch> branches = new ArrayList<>();
+        List<Crossing> crossings = new ArrayList<>();
+        double[] up = new double[n + 1];
+        up[n] = 1.0;
+        double[] tangent = arclength.tangent(y, up);
+        branches.add(joinBothWays(y, tangent, lambdaMin, lambdaMax, 0, crossings));
+        List<Crossing> pending = new ArrayList<>(crossings);
+        List<double[]> visited = new ArrayList<>();
+        for (int level = 0; switchBranches && level < depth && !pending.isEmpty(); level++) {
+            List<Crossing> next = new ArrayList<>();
+            for (Crossing crossing : pending) {
+                if (seen(crossing.y, visited)) {
+                    continue;
+                }
+                visited.add(crossing.y);
+                double[] direction = emergingDirection(crossing.y, crossing.tangent);
+                if (direction == null) {
+                    continue;
+                }
+                List<Crossing> found = new ArrayList<>();
+                branches.add(joinBothWays(crossing.y, direction, lambdaMin, lambdaMax, branches.size(), found));
+                next.addAll(found);
+            }
+            pending = next;
+        }
+        return branches;
+    }
+
+    private Branch joinBothWays(double[] y, double[] tangent, double lambdaMin, double lambdaMax, int id,
+            List<Crossing> crossings) {
+        List<BranchPoint> backward = new ArrayList<>();
+        List<SpecialPoint> backwardSpecials = new ArrayList<>();
+        trace(y, negate(tangent), lambdaMin, lambdaMax, backward, backwardSpecials, crossings);
+        List<BranchPoint> forward = new ArrayList<>();
+        List<SpecialPoint> forwardSpecials = new ArrayList<>();
+        trace(y, tangent, lambdaMin, lambdaMax, forward, forwardSpecials, crossings);
+        List<BranchPoint> points = new ArrayList<>();
+        for (int i = backward.size() - 1; i >= 1; i--) {
+            points.add(backward.get(i));
+        }
+        points.addAll(forward);
+        List<SpecialPoint> specials = new ArrayList<>();
+        for (int i = backwardSpecials.size() - 1; i >= 0; i--) {
+            specials.add(backwardSpecials.get(i));
+        }
+        specials.addAll(forwardSpecials);
+        return new Branch(id, points, specials);
+    }
+
+    private void trace(double[] start, double[] startTangent, double lambdaMin, double lambdaMax,
+            List<BranchPoint> points, List<SpecialPoint> specials, List<Crossing> crossings) {
+        double[] y = start.clone();
+        double[] t = startTangent.clone();
+        Complex[] eigen = eigenvalues(y);
+        points.add(point(y, eigen));
+        double h = settings.initialStep();
+        while (points.size() < settings.maxPoints()) {
+            double[] predicted = add(y, t, h);
+            double[] next = arclength.correct(predicted, t);
+            double[] nextTangent = next == null ? null : arclength.tangent(next, t);
+            if (next == null || nextTangent == null || dot(t, nextTangent) < 0.9) {
+                h *= 0.5;
+                if (h < settings.minStep()) {
+                    return;
+                }
+                continue;
+            }
+            int iterations = arclength.lastIterations();
+            Complex[] nextEigen = eigenvalues(next);
+            detect(y, t, eigen, next, nextTangent, nextEigen, specials, crossings);
+            if (next[n] < lambdaMin || next[n] > lambdaMax) {
+                return;
+            }
+            points.add(point(next, nextEigen));
+            y = next;
+            t = nextTangent;
+            eigen = nextEigen;
+            h = Math.min(settings.maxStep(), iterations <= 3 ? 1.5 * h : iterations >= 6 ? 0.7 * h : h);
+        }
+    }
+
+    private void detect(double[] ya, double[] ta, Complex[] ea, double[] yb, double[] tb, Complex[] eb,
+            List<SpecialPoint> specials, List<Crossing> crossings) {
+        if (Math.signum(ta[n]) * Math.signum(tb[n]) < 0) {
+            ToDoubleFunction<double[]> fold = y -> {
+                double[] tangent = arclength.tangent(y, ta);
+                return tangent == null ? 0.0 : tangent[n];
+            };
+            locate(SpecialPointType.SADDLE_NODE, ya, ta, yb, fold, specials);
+        }
+        ToDoubleFunction<double[]> branch = y -> arclength.borderedDeterminant(y, ta);
+        if (Math.signum(branch.applyAsDouble(ya)) * Math.signum(branch.applyAsDouble(yb)) < 0) {
+            double[] at = locate(SpecialPointType.BRANCH_POINT, ya, ta, yb, branch, specials);
+            if (at != null) {
+                crossings.add(new Crossing(at, ta.clone()));
+            }
+        }
+        double ha = Spectra.criticalPairRealPart(ea, IMAGINARY_TOLERANCE);
+        double hb = Spectra.criticalPairRealPart(eb, IMAGINARY_TOLERANCE);
+        if (!Double.isNaN(ha) && !Double.isNaN(hb) && Math.signum(ha) * Math.signum(hb) < 0) {
+            ToDoubleFunction<double[]> hopf = y -> {
+                double value = Spectra.criticalPairRealPart(eigenvalues(y), IMAGINARY_TOLERANCE);
+                return Double.isNaN(value) ? 0.0 : value;
+            };
+            locate(SpecialPointType.HOPF, ya, ta, yb, hopf, specials);
+        }
+    }
+
+    /** Illinois regula falsi on the arclength between a and b; returns the located point. */
+    private double[] locate(SpecialPointType type, double[] ya, double[] ta, double[] yb,
+            ToDoubleFunction<double[]> test, List<SpecialPoint> specials) {
+        double[] diff = new double[n + 1];
+        for (int i = 0; i <= n; i++) {
+            diff[i] = yb[i] - ya[i];
+        }
+        double a = 0;
+        double b = dot(diff, ta);
+        double fa = test.applyAsDouble(ya);
+        double fb = test.applyAsDouble(yb);
+        double[] best = fb == 0 ? yb : ya;
+        int side = 0;
+        for (int k = 0; k < 100 && fa != 0 && fb != 0; k++) {
+            double c = (a * fb - b * fa) / (fb - fa);
+            double[] yc = arclength.correct(add(ya, ta, c), ta);
+            if (yc == null) {
+                // Exactly at a branch point the bordered corrector matrix is singular: step aside.
+                yc = arclength.correct(add(ya, ta, c + 1e-9 * (b - a)), ta);
+            }
+            if (yc == null) {
+                break;
+            }
+            double fc = test.applyAsDouble(yc);
+            best = yc;
+            if (fc == 0) {
+                break;
+            }
+            if (fc * fb > 0) {
+                b = c;
+                fb = fc;
+                if (side == -1) {
+                    fa *= 0.5;
+                }
+                side = -1;
+            } else {
+                a = c;
+                fa = fc;
+                if (side == 1) {
+                    fb *= 0.5;
+                }
+                side = 1;
+            }
+            if (Math.abs(b - a) <= 1e-13 * (1 + Math.abs(b))) {
+                break;
+            }
+        }
+        Complex[] eigen = eigenvalues(best);
+        double frequency = type == SpecialPointType.HOPF
+                ? Spectra.criticalPairFrequency(eigen, IMAGINARY_TOLERANCE) : Double.NaN;
+        specials.add(new SpecialPoint(type, best[n], Arrays.copyOf(best, n), eigen, frequency));
+        return best;
+    }
+
+    /** Direction of the branch crossing at a branch point, orthogonal to the known tangent. */
+    private double[] emergingDirection(double[] y, double[] tangent) {
+        double[][] jac = arclength.jacobian(y);
+        double[][] square = new double[n + 1][n + 1];
+        for (int i = 0; i < n; i++) {
+            System.arraycopy(jac[i], 0, square[i], 0, n + 1);
+        }
+        SingularValueDecomposition svd = new SingularValueDecomposition(new Array2DRowRealMatrix(square, false));
+        RealMatrix v = svd.getV();
+        double[] best = null;
+        double bestNorm = 0;
+        for (int column = n - 1; column <= n; column++) {
+            double[] candidate = v.getColumn(column);
+            double along = dot(candidate, tangent);
+            for (int i = 0; i <= n; i++) {
+                candidate[i] -= along * tangent[i];
+            }
+            double norm = PseudoArclength.norm(candidate);
+            if (norm > bestNorm) {
+                bestNorm = norm;
+                best = candidate;
+            }
+        }
+        if (best == null || bestNorm < 1e-6) {
+            return null;
+        }
+        for (int i = 0; i <= n; i++) {
+            best[i] /= bestNorm;
+        }
+        return best;
+    }
+
+    private Complex[] eigenvalues(double[] y) {
+        double[][] jac = new double[n][n];
+        system.jacobian(Arrays.copyOf(y, n), y[n], jac);
+        return Spectra.eigenvalues(jac);
+    }
+
+    private BranchPoint point(double[] y, Complex[] eigen) {
+        return new BranchPoint(y[n], Arrays.copyOf(y, n), eigen, Spectra.stable(eigen));
+    }
+
+    private static boolean seen(double[] y, List<double[]> visited) {
+        for (double[] other : visited) {
+            double d = 0;
+            for (int i = 0; i < y.length; i++) {
+                d = Math.max(d, Math.abs(y[i] - other[i]));
+            }
+            if (d < 1e-6) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static double[] add(double[] y, double[] t, double h) {
+        double[] out = new double[y.length];
+        for (int i = 0; i < y.length; i++) {
+            out[i] = y[i] + h * t[i];
+        }
+        return out;
+    }
+
+    private static double[] negate(double[] t) {
+        double[] out = new double[t.length];
+        for (int i = 0; i < t.length; i++) {
+            out[i] = -t[i];
+        }
+        return out;
+    }
+
+    private static double dot(double[] a, double[] b) {
+        double s = 0;
+        for (int i = 0; i < a.length; i++) {
+            s += a[i] * b[i];
+        }
+        return s;
+    }
+}
