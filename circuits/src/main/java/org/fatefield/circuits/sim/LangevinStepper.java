@@ -23,36 +23,14 @@ public final class LangevinStepper implements CircuitStepper {
 
     private final ReactionNetwork network;
     private final double systemSize;
-    private final int[][] reactionSpecies;
-    private final int[][] reactionChange;
+    private final ReactionTable table;
     private final double[] propensity;
 
     private LangevinStepper(ReactionNetwork network, double systemSize) {
         this.network = network;
         this.systemSize = systemSize;
-        int m = network.reactionCount();
-        int n = network.speciesCount();
-        this.reactionSpecies = new int[m][];
-        this.reactionChange = new int[m][];
-        for (int j = 0; j < m; j++) {
-            int count = 0;
-            for (int i = 0; i < n; i++) {
-                if (network.stoichiometry(j, i) != 0) {
-                    count++;
-                }
-            }
-            reactionSpecies[j] = new int[count];
-            reactionChange[j] = new int[count];
-            int k = 0;
-            for (int i = 0; i < n; i++) {
-                int nu = network.stoichiometry(j, i);
-                if (nu != 0) {
-                    reactionSpecies[j][k] = i;
-                    reactionChange[j][k++] = nu;
-                }
-            }
-        }
-        this.propensity = new double[m];
+        this.table = new ReactionTable(network);
+        this.propensity = new double[network.reactionCount()];
     }
 
     /**
@@ -81,11 +59,7 @@ public final class LangevinStepper implements CircuitStepper {
         for (int j = 0; j < propensity.length; j++) {
             double a = Math.max(propensity[j], 0.0);
             double increment = a * dt + Math.sqrt(a * noiseScale) * gaussian.sample();
-            int[] species = reactionSpecies[j];
-            int[] change = reactionChange[j];
-            for (int k = 0; k < species.length; k++) {
-                state[species[k]] += change[k] * increment;
-            }
+            table.fire(j, increment, 1.0, state);
         }
         for (int i = 0; i < state.length; i++) {
             if (state[i] < 0.0) {
