@@ -135,7 +135,7 @@ final class ScenarioCompiler {
             fail(table, "circuit", "initial", "must give 2 concentrations of at least 0, one per gene");
             return null;
         }
-        NoiseMode noise = NoiseMode.valueOf(text(table, "circuit", "noise").toUpperCase(Locale.ROOT));
+        NoiseMode noise = NoiseMode.fromWord(text(table, "circuit", "noise"));
         return new CircuitParts(network,
                 new CircuitSetup(network, noise, number(table, "circuit", "system_size"), initial));
     }

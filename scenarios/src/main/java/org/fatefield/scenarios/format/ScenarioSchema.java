@@ -58,8 +58,10 @@ public final class ScenarioSchema {
             new Section("circuit", false, true, List.of(
                     Key.choice("type", null, List.of(SWITCH), "the circuit family"),
                     Key.of("genes", KeyType.NAMES, "", "[\"A\", \"B\"]", "names of the two genes (species)"),
-                    Key.choice("noise", "langevin", List.of("langevin", "none"),
-                            "langevin: chemical Langevin equation; none: deterministic rate equations (RK4)"),
+                    Key.choice("noise", "langevin", List.of("langevin", "none", "exact", "tau-leap"),
+                            "langevin: chemical Langevin equation (Euler-Maruyama); none: deterministic rate equations"
+                                    + " (RK4); exact: Gillespie's direct method in molecule counts; tau-leap:"
+                                    + " tau-leaping with Cao-Gillespie-Petzold step selection"),
                     Key.positive("system_size", "molecules per unit concentration", "100",
                             "converts concentrations to molecule numbers in a newborn cell; sets the noise level"),
                     Key.of("initial", KeyType.NUMBERS, "", "[0.3, 0.3]", "concentrations of every founder cell, one per gene")),
