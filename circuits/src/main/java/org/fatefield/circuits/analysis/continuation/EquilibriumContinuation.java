@@ -59,9 +59,13 @@ public final class EquilibriumContinuation {
         double[] start = new double[n + 1];
         System.arraycopy(x0, 0, start, 0, n);
         start[n] = lambda0;
-        double[] normal = new double[n + 1];
-        normal[n] = 1.0;
-        double[] y = arclength.correct(start, normal);
+        double[] y = null;
+        // Fix the parameter first; at a fold that is singular, so then fix one state component.
+        for (int fixed = n; fixed >= 0 && y == null; fixed--) {
+            double[] normal = new double[n + 1];
+            normal[fixed] = 1.0;
+            y = arclength.correct(start, normal);
+        }
         if (y == null) {
             throw new IllegalArgumentException("no steady state converged from the start point at parameter "
                     + lambda0 + "; start closer to a steady state");
