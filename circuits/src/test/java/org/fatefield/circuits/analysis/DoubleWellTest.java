@@ -1,0 +1,103 @@
+package org.fatefield.circuits.analysis;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import java.util.function.DoubleUnaryOperator;
+import org.fatefield.circuits.model.CustomNetwork;
+import org.junit.jupiter.api.Test;
+
+/**
+ * Landscape and switching code on the double-well gradient SDE dx = -U'(x) dt + sqrt(2D) dW with
+ * U(x) = u^4/4 - u^2/2, u = x - 3 (wells at x = 2 and 4, barrier 1/4 at x = 3). It is written as
+ * a custom circuit whose two reactions have propensities c -+ U'(x)/2 with c = D Omega, so the
+ * chemical Langevin drift is -U' and the noise variance 2D exactly. References: stationary density
+ * proportional to exp(-U/D), mean first-passage time and committor as the exact integrals of
+ * Gardiner (2009), Stochastic Methods, 4th ed., Springer, sections 5.2.7 and 6.2 (evaluated here by
+ * Simpson's rule); Kramers (1940), Physica 7:284, as a loose check only.
+ */
+class DoubleWellTest {
+
+    private static final double D = 0.1;
+    private static final double OMEGA = 100.0;
+    private static final DoubleUnaryOperator POTENTIAL = x -> {
+        double u = x - 3;
+        return u * u * u * u / 4 - u * u / 2;
+    };
+
+    private static CustomNetwork doubleWell() {
+        return CustomNetwork.of(List.of("x"), List.of("c"), new double[] {D * OMEGA}, List.of(
+                new CustomNetwork.ReactionDefinition("up", new int[] {1}, "c - ((x - 3)^3 - (x - 3)) / 2"),
+                new CustomNetwork.ReactionDefinition("down", new int[] {-1}, "c + ((x - 3)^3 - (x - 3)) / 2")));
+    }
+
+    private static double simpson(DoubleUnaryOperator f, double a, double b, int intervals) {
+        double h = (b - a) / intervals;
+        double s = f.applyAsDouble(a) + f.applyAsDouble(b);
+        for (int i = 1; i < intervals; i++) {
+            s += (i % 2 == 1 ? 4 : 2) * f.applyAsDouble(a + i * h);
+        }
+        return s * h / 3;
+    }
+
+    @Test
+    void landscapeRecoversTheBarrierOverD() {
+        CustomNetwork network = doubleWell();
+        QuasiPotential landscape = QuasiPotential.estimate(network, network.defaultParameters(), OMEGA,
+                new double[] {2.0}, 0, -1, new double[] {1.0, 0}, new double[] {5.0, 0}, 80,
+                new QuasiPotential.Sampling(20, 50, 5000, 0.01, 11));
+        double[] u = landscape.u()[0];
+        double[] xs = landscape.xs();
+        int top = 0;
+        int well = 0;
+        for (int i = 0; i < xs.length; i++) {
+            if (Math.abs(xs[i] - 3.025) < 1e-9) {
+                top = i;
+            }
+            if (Math.abs(xs[i] - 2.025) < 1e-9) {
+                well = i;
+            }
+        }
+        double expected = (POTENTIAL.applyAsDouble(3.025) - POTENTIAL.applyAsDouble(2.025)) / D;
+        assertEquals(expected, u[top] - u[well], 0.04 * expected);
+    }
+
+    @Test
+    void meanFirstPassageMatchesTheExactIntegral() {
+        CustomNetwork network = doubleWell();
+        double radius = 0.1;
+        double target = 4.0 - radius;
+        // T(2 -> b) = (1/D) int_2^b exp(U(y)/D) int_-inf^y exp(-U(z)/D) dz dy.
+        DoubleUnaryOperator inner = y -> simpson(z -> Math.exp(-POTENTIAL.applyAsDouble(z) / D), 0.0, y, 2000);
+        double exact = simpson(y -> Math.exp(POTENTIAL.applyAsDouble(y) / D) * inner.applyAsDouble(y), 2.0, target, 400) / D;
+        Switching.FirstPassage passage = Switching.meanFirstPassage(network, network.defaultParameters(), OMEGA,
+                new double[] {2.0}, new double[] {4.0}, radius, 1000, 0.005, 5000, 5);
+        assertEquals(0, passage.censored());
+        // Passage times are close to exponential, so the standard error is about mean / sqrt(N).
+        double standardError = passage.standardDeviation() / Math.sqrt(passage.arrived());
+        assertEquals(exact, passage.mean(), 4 * standardError, "exact integral " + exact);
+        assertTrue(passage.low95() < passage.mean() && passage.mean() < passage.high95());
+        // Kramers' escape rate sqrt(U''(well) |U''(top)|) / (2 pi) exp(-dU / D): loose, 30%.
+        double kramers = 2 * Math.PI / Math.sqrt(2.0) * Math.exp(0.25 / D);
+        assertEquals(kramers, passage.mean(), 0.3 * kramers);
+    }
+
+    @Test
+    void commitmentProbabilityMatchesTheExactCommittor() {
+        CustomNetwork network = doubleWell();
+        double radius = 0.1;
+        double a = 2.0 + radius;
+        double b = 4.0 - radius;
+        DoubleUnaryOperator weight = y -> Math.exp(POTENTIAL.applyAsDouble(y) / D);
+        double whole = simpson(weight, a, b, 2000);
+        int n = 2000;
+        for (double start : new double[] {2.8, 3.0, 3.3}) {
+            double exact = simpson(weight, a, start, 2000) / whole;
+            double estimate = Switching.commitment(network, network.defaultParameters(), OMEGA, new double[] {start},
+                    new double[] {4.0}, new double[] {2.0}, radius, n, 0.002, 1000, 17);
+            // 99% binomial interval (normal approximation).
+            assertEquals(exact, estimate, 2.576 * Math.sqrt(exact * (1 - exact) / n) + 0.01, "start " + start);
+        }
+    }
+}
