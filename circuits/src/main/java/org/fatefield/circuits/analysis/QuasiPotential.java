@@ -84,6 +84,52 @@ public record QuasiPotential(double[] xs, double[] ys, long[][] counts, double[]
         return new QuasiPotential(xs, ys, counts, landscape(counts));
     }
 
+    /** The one-dimensional landscape of the x species, summing the probability over y. */
+    public QuasiPotential marginalX() {
+        double[] p = new double[xs.length];
+        long[] c = new long[xs.length];
+        double max = 0;
+        for (int i = 0; i < xs.length; i++) {
+            for (int j = 0; j < ys.length; j++) {
+                p[i] += Math.exp(-u[j][i]);
+                c[i] += counts[j][i];
+            }
+            max = Math.max(max, p[i]);
+        }
+        double[][] out = new double[1][xs.length];
+        for (int i = 0; i < xs.length; i++) {
+            out[0][i] = p[i] > 0 ? -Math.log(p[i] / max) : Double.POSITIVE_INFINITY;
+        }
+        return new QuasiPotential(xs.clone(), new double[] {0}, new long[][] {c}, out);
+    }
+
+    /**
+     * As {@link #estimate} but with the trajectories started in turn from each of {@code starts},
+     * so that every well is visited even when switching between them is rarer than the sampling
+     * time (the wells' shapes are then right; their relative depths reflect the starts).
+     */
+    public static QuasiPotential estimateFrom(ReactionNetwork network, double[] params, double systemSize,
+            java.util.List<double[]> starts, int xSpecies, int ySpecies, double[] lower, double[] upper, int bins,
+            Sampling sampling) {
+        QuasiPotential total = null;
+        int per = Math.max(1, sampling.trajectories() / starts.size());
+        for (int s = 0; s < starts.size(); s++) {
+            QuasiPotential part = estimate(network, params, systemSize, starts.get(s), xSpecies, ySpecies, lower, upper,
+                    bins, new Sampling(per, sampling.burnIn(), sampling.duration(), sampling.step(),
+                            sampling.seed() + 7919L * s));
+            if (total == null) {
+                total = part;
+            } else {
+                for (int j = 0; j < total.counts.length; j++) {
+                    for (int i = 0; i < total.counts[j].length; i++) {
+                        total.counts[j][i] += part.counts[j][i];
+                    }
+                }
+            }
+        }
+        return new QuasiPotential(total.xs, total.ys, total.counts, landscape(total.counts));
+    }
+
     private static double[][] landscape(long[][] counts) {
         long max = 0;
         for (long[] row : counts) {

@@ -65,6 +65,18 @@ public interface ReactionNetwork {
         return index;
     }
 
+    /**
+     * The parameters a name stands for: the parameter of that exact name, or else every
+     * {@code <species>.<name>} (the same rate in each gene, moved together). Empty if none.
+     */
+    default int[] parameterGroup(String name) {
+        List<String> names = parameterNames();
+        if (names.contains(name)) {
+            return new int[] {names.indexOf(name)};
+        }
+        return speciesNames().stream().mapToInt(s -> names.indexOf(s + "." + name)).filter(i -> i >= 0).toArray();
+    }
+
     /** Index of the named species; throws with the list of known names if there is none. */
     default int speciesIndex(String name) {
         int index = speciesNames().indexOf(name);

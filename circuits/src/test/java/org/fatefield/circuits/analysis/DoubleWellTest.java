@@ -64,6 +64,28 @@ class DoubleWellTest {
     }
 
     @Test
+    void gridSolutionHasTheStationaryShapeExpMinusUOverD() {
+        CustomNetwork network = doubleWell();
+        QuasiPotential landscape = StationaryFokkerPlanck.solve(network, network.defaultParameters(), OMEGA, 0, -1,
+                new double[] {1.0, 0}, new double[] {5.0, 0}, 400);
+        double[] u = landscape.u()[0];
+        double[] xs = landscape.xs();
+        double reference = POTENTIAL.applyAsDouble(xs[100]) / D - u[100];
+        double barrier = Double.NaN;
+        for (int i = 0; i < xs.length; i++) {
+            double expected = POTENTIAL.applyAsDouble(xs[i]) / D;
+            if (expected < 8) {
+                // Exponential fitting with a varying drift: error O(h^2) in U, well below 0.01 here.
+                assertEquals(expected - reference, u[i], 0.01, "x = " + xs[i]);
+            }
+            if (Math.abs(xs[i] - 3.005) < 1e-9) {
+                barrier = u[i];
+            }
+        }
+        assertEquals(0.25 / D, barrier - Math.min(u[99], u[100]), 0.04 * 0.25 / D);
+    }
+
+    @Test
     void meanFirstPassageMatchesTheExactIntegral() {
         CustomNetwork network = doubleWell();
         double radius = 0.1;

@@ -179,7 +179,7 @@ final class ScenarioCompiler {
         for (int i = 0; i < array.size(); i++) {
             TomlTable table = array.getTable(i);
             String parameter = table.getString("parameter");
-            int[] indices = resolveParameter(parameter, circuit.network);
+            int[] indices = circuit.network.parameterGroup(parameter);
             if (indices.length == 0) {
                 List<String> options = new ArrayList<>(ScenarioSchema.KINETICS.stream().map(Key::name).toList());
                 options.addAll(parameterNames);
@@ -195,21 +195,6 @@ final class ScenarioCompiler {
                     number(table, "coupling", "hill")));
         }
         return new ParameterMapping(circuit.network.defaultParameters(), couplings);
-    }
-
-    private static int[] resolveParameter(String parameter, SelfActivatingSwitch network) {
-        List<String> names = network.parameterNames();
-        if (names.contains(parameter)) {
-            return new int[] {names.indexOf(parameter)};
-        }
-        List<Integer> both = new ArrayList<>();
-        for (String gene : network.speciesNames()) {
-            int index = names.indexOf(gene + "." + parameter);
-            if (index >= 0) {
-                both.add(index);
-            }
-        }
-        return both.stream().mapToInt(Integer::intValue).toArray();
     }
 
     private FateClassifier fates(CircuitParts circuit) {

@@ -90,7 +90,13 @@ public final class EquilibriumContinuation {
                     continue;
                 }
                 List<Crossing> found = new ArrayList<>();
-                branches.add(joinBothWays(crossing.y, direction, lambdaMin, lambdaMax, branches.size(), found));
+                Branch emerging = joinBothWays(crossing.y, direction, lambdaMin, lambdaMax, branches.size(), found);
+                // The switched branch starts on the branch point already reported on its parent.
+                List<SpecialPoint> own = emerging.specials().stream().filter(s -> !(s.type() == SpecialPointType.BRANCH_POINT
+                        && Math.abs(s.parameter() - crossing.y[n]) < 1e-4
+                        && maxDifference(s.state(), Arrays.copyOf(crossing.y, n)) < 1e-3)).toList();
+                branches.add(new Branch(emerging.id(), emerging.points(), own));
+                found.removeIf(c -> maxDifference(c.y, crossing.y) < 1e-3);
                 next.addAll(found);
             }
             pending = next;
@@ -116,7 +122,38 @@ public final class EquilibriumContinuation {
             specials.add(backwardSpecials.get(i));
         }
         specials.addAll(forwardSpecials);
-        return new Branch(id, points, specials);
+        return new Branch(id, points, withoutFoldsAtBranchPoints(specials));
+    }
+
+    /**
+     * A branch that emerges from a pitchfork turns back in the parameter exactly at the branch
+     * point, so its fold test fires there too; that turning point is the branch point, not a
+     * separate saddle-node, and is dropped.
+     */
+    private static List<SpecialPoint> withoutFoldsAtBranchPoints(List<SpecialPoint> specials) {
+        List<SpecialPoint> kept = new ArrayList<>();
+        for (SpecialPoint s : specials) {
+            boolean atBranchPoint = false;
+            for (SpecialPoint other : specials) {
+                if (s.type() == SpecialPointType.SADDLE_NODE && other.type() == SpecialPointType.BRANCH_POINT
+                        && Math.abs(s.parameter() - other.parameter()) < 1e-6
+                        && maxDifference(s.state(), other.state()) < 1e-3) {
+                    atBranchPoint = true;
+                }
+            }
+            if (!atBranchPoint) {
+                kept.add(s);
+            }
+        }
+        return kept;
+    }
+
+    private static double maxDifference(double[] a, double[] b) {
+        double d = 0;
+        for (int i = 0; i < a.length; i++) {
+            d = Math.max(d, Math.abs(a[i] - b[i]));
+        }
+        return d;
     }
 
     private void trace(double[] start, double[] startTangent, double lambdaMin, double lambdaMax,

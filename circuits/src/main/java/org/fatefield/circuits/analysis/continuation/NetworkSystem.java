@@ -2,26 +2,34 @@ package org.fatefield.circuits.analysis.continuation;
 
 import org.fatefield.circuits.model.ReactionNetwork;
 
-/** The steady-state equations of a circuit, with one of its parameters as the continuation parameter. */
+/**
+ * The steady-state equations of a circuit, with one of its parameters (or a group of parameters
+ * that move together, such as the same rate in both genes) as the continuation parameter.
+ */
 public final class NetworkSystem implements ParametrisedSystem {
 
     private final ReactionNetwork network;
     private final double[] params;
-    private final int parameter;
+    private final int[] parameter;
     private final double[] work;
 
     /**
      * @param network   the circuit
      * @param params    values of the other parameters (copied)
-     * @param parameter index of the continuation parameter
+     * @param parameter indices of the parameters set to the continuation parameter's value
      */
-    public NetworkSystem(ReactionNetwork network, double[] params, int parameter) {
-        if (parameter < 0 || parameter >= params.length) {
-            throw new IllegalArgumentException("parameter index " + parameter + " is outside 0.." + (params.length - 1));
+    public NetworkSystem(ReactionNetwork network, double[] params, int... parameter) {
+        if (parameter.length == 0) {
+            throw new IllegalArgumentException("name at least one parameter to continue in");
+        }
+        for (int index : parameter) {
+            if (index < 0 || index >= params.length) {
+                throw new IllegalArgumentException("parameter index " + index + " is outside 0.." + (params.length - 1));
+            }
         }
         this.network = network;
         this.params = params.clone();
-        this.parameter = parameter;
+        this.parameter = parameter.clone();
         this.work = new double[network.reactionCount()];
     }
 
@@ -33,7 +41,9 @@ public final class NetworkSystem implements ParametrisedSystem {
     /** A copy of the parameter vector with the continuation parameter set to {@code lambda}. */
     public double[] parametersAt(double lambda) {
         double[] p = params.clone();
-        p[parameter] = lambda;
+        for (int index : parameter) {
+            p[index] = lambda;
+        }
         return p;
     }
 
@@ -44,17 +54,11 @@ public final class NetworkSystem implements ParametrisedSystem {
 
     @Override
     public void value(double[] x, double lambda, double[] out) {
-        double saved = params[parameter];
-        params[parameter] = lambda;
-        network.drift(x, params, out, work);
-        params[parameter] = saved;
+        network.drift(x, parametersAt(lambda), out, work);
     }
 
     @Override
     public void jacobian(double[] x, double lambda, double[][] out) {
-        double saved = params[parameter];
-        params[parameter] = lambda;
-        network.jacobian(x, params, out);
-        params[parameter] = saved;
+        network.jacobian(x, parametersAt(lambda), out);
     }
 }

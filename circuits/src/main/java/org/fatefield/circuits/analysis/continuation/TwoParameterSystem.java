@@ -7,24 +7,28 @@ public final class TwoParameterSystem {
 
     private final ReactionNetwork network;
     private final double[] params;
-    private final int first;
-    private final int second;
+    private final int[] first;
+    private final int[] second;
     private final double[] work;
 
     /**
      * @param network the circuit
      * @param params  values of the other parameters (copied)
-     * @param first   index of the first free parameter
-     * @param second  index of the second free parameter
+     * @param first   indices set to the first free parameter
+     * @param second  indices set to the second free parameter
      */
-    public TwoParameterSystem(ReactionNetwork network, double[] params, int first, int second) {
-        if (first == second) {
-            throw new IllegalArgumentException("the two parameters must differ, both are index " + first);
+    public TwoParameterSystem(ReactionNetwork network, double[] params, int[] first, int[] second) {
+        for (int a : first) {
+            for (int b : second) {
+                if (a == b) {
+                    throw new IllegalArgumentException("the two parameters must differ, both set index " + a);
+                }
+            }
         }
         this.network = network;
         this.params = params.clone();
-        this.first = first;
-        this.second = second;
+        this.first = first.clone();
+        this.second = second.clone();
         this.work = new double[network.reactionCount()];
     }
 
@@ -46,14 +50,20 @@ public final class TwoParameterSystem {
     /** The one-parameter system along the first parameter with the second fixed at {@code nu}. */
     public NetworkSystem alongFirst(double nu) {
         double[] p = params.clone();
-        p[second] = nu;
+        for (int index : second) {
+            p[index] = nu;
+        }
         return new NetworkSystem(network, p, first);
     }
 
     private double[] with(double mu, double nu) {
         double[] p = params.clone();
-        p[first] = mu;
-        p[second] = nu;
+        for (int index : first) {
+            p[index] = mu;
+        }
+        for (int index : second) {
+            p[index] = nu;
+        }
         return p;
     }
 }

@@ -21,7 +21,7 @@ class FoldCurveTest {
         CustomNetwork cusp = CustomNetwork.of(List.of("x"), List.of("a", "b"), new double[] {0, 1},
                 List.of(new CustomNetwork.ReactionDefinition("gain", new int[] {1}, "a + b * x"),
                         new CustomNetwork.ReactionDefinition("loss", new int[] {-1}, "x ^ 3")));
-        TwoParameterSystem system = new TwoParameterSystem(cusp, cusp.defaultParameters(), 0, 1);
+        TwoParameterSystem system = new TwoParameterSystem(cusp, cusp.defaultParameters(), new int[] {0}, new int[] {1});
         double x0 = 1 / Math.sqrt(3);
         FoldCurveContinuation.FoldCurve curve = FoldCurveContinuation.of(system,
                 new ContinuationSettings(0.01, 1e-9, 0.05, 4000, 1e-12))
@@ -47,7 +47,7 @@ class FoldCurveTest {
                 new GeneKinetics(0.08, 0.2, 0.5, 4, 1.0, 0.5, 4, 1.0));
         int repression = sw.parameterIndex("A.repression");
         int basal = sw.parameterIndex("B.basal");
-        TwoParameterSystem plane = new TwoParameterSystem(sw, sw.defaultParameters(), repression, basal);
+        TwoParameterSystem plane = new TwoParameterSystem(sw, sw.defaultParameters(), new int[] {repression}, new int[] {basal});
         List<Branch> branches = EquilibriumContinuation.of(plane.alongFirst(0.08), ContinuationSettings.defaults())
                 .diagram(new double[] {2.0, 0.06}, 2.0, 0.05, 3.0, false, 0);
         SpecialPoint fold = branches.get(0).specials().stream()

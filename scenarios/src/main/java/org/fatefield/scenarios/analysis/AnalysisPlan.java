@@ -1,0 +1,47 @@
+package org.fatefield.scenarios.analysis;
+
+/**
+ * What {@code fatefield analyze} computes for one circuit.
+ *
+ * @param parameter      name of the continuation parameter (as the scenario writes it)
+ * @param indices        the circuit parameters it sets
+ * @param min            lower end of its range
+ * @param max            upper end of its range
+ * @param at             value used for steady states, phase portrait, basins, landscape and switching
+ * @param second         name of the second parameter for the bistable region, or null
+ * @param secondIndices  the circuit parameters the second one sets (empty if none)
+ * @param secondMin      lower end of the second range
+ * @param secondMax      upper end of the second range
+ * @param xSpecies       species on the horizontal axis of state-plane figures
+ * @param ySpecies       species on the vertical axis
+ * @param systemSize     molecules per unit concentration for the stochastic analyses
+ * @param trajectories   trajectories per landscape, per first-passage estimate and per commitment start
+ * @param seed           seed of every stochastic analysis
+ */
+public record AnalysisPlan(String parameter, int[] indices, double min, double max, double at, String second,
+        int[] secondIndices, double secondMin, double secondMax, int xSpecies, int ySpecies, double systemSize,
+        int trajectories, long seed) {
+
+    /** Validates ranges and effort. */
+    public AnalysisPlan {
+        if (!(max > min)) {
+            throw new IllegalArgumentException("--range must have MAX > MIN, got " + min + ":" + max);
+        }
+        if (second != null && !(secondMax > secondMin)) {
+            throw new IllegalArgumentException("--second-range must have MAX > MIN, got " + secondMin + ":" + secondMax);
+        }
+        if (trajectories < 2) {
+            throw new IllegalArgumentException("--trajectories must be at least 2, got " + trajectories);
+        }
+        if (xSpecies == ySpecies) {
+            throw new IllegalArgumentException("--x and --y must name different species");
+        }
+        indices = indices.clone();
+        secondIndices = secondIndices.clone();
+    }
+
+    /** True when a second parameter was given. */
+    public boolean hasSecond() {
+        return second != null;
+    }
+}

@@ -1,0 +1,270 @@
+package org.fatefield.scenarios.analysis;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+import org.fatefield.circuits.analysis.QuasiPotential;
+import org.fatefield.circuits.analysis.SteadyState;
+import org.fatefield.circuits.analysis.Switching;
+import org.fatefield.circuits.analysis.continuation.Branch;
+import org.fatefield.circuits.analysis.continuation.BranchPoint;
+import org.fatefield.circuits.analysis.continuation.FoldCurveContinuation.FoldCurve;
+import org.fatefield.circuits.analysis.continuation.FoldCurveContinuation.FoldPoint;
+import org.fatefield.circuits.analysis.continuation.SpecialPoint;
+import org.fatefield.circuits.model.ReactionNetwork;
+import org.fatefield.engine.record.RunTables;
+import org.fatefield.scenarios.output.RunFolder;
+import org.fatefield.viz.analysis.BifurcationDiagramChart;
+import org.fatefield.viz.analysis.BistableRegionChart;
+import org.fatefield.viz.analysis.GridMapChart;
+import org.fatefield.viz.analysis.PhasePortraitChart;
+import org.fatefield.viz.chart.ChartFiles;
+import org.hipparchus.complex.Complex;
+import org.jfree.chart.JFreeChart;
+
+/** Writes the tables and figures of {@code fatefield analyze} into a folder. */
+public final class AnalysisWriter {
+
+    private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get();
+
+    private final RunFolder folder;
+    private final ReactionNetwork network;
+    private final AnalysisPlan plan;
+    private final List<String> species;
+    private final List<String> written = new ArrayList<>();
+
+    /** A writer into {@code folder}. */
+    public AnalysisWriter(RunFolder folder, ReactionNetwork network, AnalysisPlan plan) {
+        this.folder = folder;
+        this.network = network;
+        this.plan = plan;
+        this.species = network.speciesNames();
+    }
+
+    /** Files written so far. */
+    public List<String> written() {
+        return written;
+    }
+
+    /** Writes every table and figure of {@code result}. */
+    public void write(AnalysisResult result, CircuitAnalysis analysis) throws IOException {
+        steadyStates(result.steadyStates());
+        branches(result.branches());
+        if (plan.hasSecond()) {
+            foldCurves(result.foldCurves());
+        }
+        basins(result);
+        landscape(result);
+        switching(result);
+        String xName = species.get(plan.xSpecies());
+        String yName = species.get(plan.ySpecies());
+        figure("bifurcation", BifurcationDiagramChart.create(result.branches(), plan.xSpecies(), plan.parameter(), xName));
+        if (plan.hasSecond()) {
+            figure("bistable-region", BistableRegionChart.create(result.foldCurves(), plan.parameter(), plan.second()));
+        }
+        double[] upper = analysis.upperCorner();
+        figure("phase-portrait", PhasePortraitChart.create(network, analysis.parametersAt(plan.at()),
+                new double[species.size()], plan.xSpecies(), plan.ySpecies(), new double[2],
+                new double[] {upper[plan.xSpecies()], upper[plan.ySpecies()]}, result.steadyStates()));
+        String[] names = result.basins().attractors().stream().map(s -> describe(s.state())).toArray(String[]::new);
+        figure("basins", GridMapChart.basins(result.basins().xs(), result.basins().ys(), result.basins().attractor(),
+                names, xName, yName));
+        figure("landscape", GridMapChart.landscape(result.landscape().xs(), result.landscape().ys(),
+                result.landscape().u(), 8, xName, yName, "Quasi-potential landscape at " + plan.parameter() + " = "
+                        + RunTables.number(plan.at())));
+        double[][] along = new double[result.parameterValues().length][];
+        for (int k = 0; k < along.length; k++) {
+            along[k] = result.alongParameter().get(k).u()[0];
+        }
+        figure("landscape-along-parameter", GridMapChart.landscape(result.alongParameter().get(0).xs(),
+                result.parameterValues(), along, 8, xName, plan.parameter(),
+                "Landscape along " + plan.parameter() + " (one row per value)"));
+    }
+
+    private String describe(double[] state) {
+        List<String> parts = new ArrayList<>();
+        for (int i = 0; i < state.length; i++) {
+            parts.add(species.get(i) + " " + RunTables.number(Math.round(state[i] * 1000) / 1000.0));
+        }
+        return "attractor (" + String.join(", ", parts) + ")";
+    }
+
+    private void steadyStates(List<SteadyState> states) throws IOException {
+        List<String> header = new ArrayList<>(List.of(plan.parameter()));
+        header.addAll(species);
+        header.addAll(List.of("type", "stable", "eigenvalues"));
+        table("steady-states.csv", header, rows -> {
+            for (SteadyState s : states) {
+                List<String> row = new ArrayList<>(List.of(RunTables.number(plan.at())));
+                for (double v : s.state()) {
+                    row.add(RunTables.number(v));
+                }
+                row.addAll(List.of(s.type().label(), Boolean.toString(s.isStable()), eigenvalues(s.eigenvalues())));
+                rows.add(row);
+            }
+        });
+    }
+
+    private void branches(List<Branch> branches) throws IOException {
+        List<String> header = new ArrayList<>(List.of("branch", "point", plan.parameter()));
+        header.addAll(species);
+        header.addAll(List.of("stable", "leading_eigenvalue_re", "leading_eigenvalue_im"));
+        table("branches.csv", header, rows -> {
+            for (Branch b : branches) {
+                int k = 0;
+                for (BranchPoint p : b.points()) {
+                    List<String> row = new ArrayList<>(List.of(Integer.toString(b.id()), Integer.toString(k++),
+                            RunTables.number(p.parameter())));
+                    for (double v : p.state()) {
+                        row.add(RunTables.number(v));
+                    }
+                    row.addAll(List.of(Boolean.toString(p.stable()), RunTables.number(p.eigenvalues()[0].getReal()),
+                            RunTables.number(p.eigenvalues()[0].getImaginary())));
+                    rows.add(row);
+                }
+            }
+        });
+        List<String> special = new ArrayList<>(List.of("branch", "type", plan.parameter()));
+        special.addAll(species);
+        special.addAll(List.of("frequency", "eigenvalues"));
+        table("special-points.csv", special, rows -> {
+            for (Branch b : branches) {
+                for (SpecialPoint s : b.specials()) {
+                    List<String> row = new ArrayList<>(List.of(Integer.toString(b.id()), s.type().label(),
+                            RunTables.number(s.parameter())));
+                    for (double v : s.state()) {
+                        row.add(RunTables.number(v));
+                    }
+                    row.addAll(List.of(RunTables.number(s.frequency()), eigenvalues(s.eigenvalues())));
+                    rows.add(row);
+                }
+            }
+        });
+    }
+
+    private void foldCurves(List<FoldCurve> curves) throws IOException {
+        List<String> header = new ArrayList<>(List.of("curve", "kind", plan.parameter(), plan.second()));
+        header.addAll(species);
+        table("fold-curve.csv", header, rows -> {
+            for (int c = 0; c < curves.size(); c++) {
+                for (String kind : List.of("saddle-node", "cusp")) {
+                    List<FoldPoint> points = kind.equals("cusp") ? curves.get(c).cusps() : curves.get(c).points();
+                    for (FoldPoint p : points) {
+                        List<String> row = new ArrayList<>(List.of(Integer.toString(c), kind,
+                                RunTables.number(p.mu()), RunTables.number(p.nu())));
+                        for (double v : p.state()) {
+                            row.add(RunTables.number(v));
+                        }
+                        rows.add(row);
+                    }
+                }
+            }
+        });
+    }
+
+    private void basins(AnalysisResult result) throws IOException {
+        var map = result.basins();
+        List<String> header = new ArrayList<>(List.of(species.get(plan.xSpecies()), species.get(plan.ySpecies()),
+                "attractor"));
+        for (String s : species) {
+            header.add("attractor_" + s);
+        }
+        table("basins.csv", header, rows -> {
+            for (int j = 0; j < map.ys().length; j++) {
+                for (int i = 0; i < map.xs().length; i++) {
+                    int a = map.attractor()[j][i];
+                    List<String> row = new ArrayList<>(List.of(RunTables.number(map.xs()[i]),
+                            RunTables.number(map.ys()[j]), Integer.toString(a)));
+                    for (int s = 0; s < species.size(); s++) {
+                        row.add(a < 0 ? "NaN" : RunTables.number(map.attractors().get(a).state()[s]));
+                    }
+                    rows.add(row);
+                }
+            }
+        });
+    }
+
+    private void landscape(AnalysisResult result) throws IOException {
+        String x = species.get(plan.xSpecies());
+        String y = species.get(plan.ySpecies());
+        table("landscape.csv", List.of("section", plan.parameter(), x, y, "visits", "U"), rows -> {
+            addLandscape(rows, "plane", plan.at(), result.landscape(), true);
+            for (int k = 0; k < result.parameterValues().length; k++) {
+                addLandscape(rows, "along-parameter", result.parameterValues()[k], result.alongParameter().get(k), false);
+            }
+        });
+    }
+
+    private static void addLandscape(List<List<String>> rows, String section, double value, QuasiPotential q,
+            boolean plane) {
+        for (int j = 0; j < q.ys().length; j++) {
+            for (int i = 0; i < q.xs().length; i++) {
+                rows.add(List.of(section, RunTables.number(value), RunTables.number(q.xs()[i]),
+                        plane ? RunTables.number(q.ys()[j]) : "", Long.toString(q.counts()[j][i]),
+                        RunTables.number(q.u()[j][i])));
+            }
+        }
+    }
+
+    private void switching(AnalysisResult result) throws IOException {
+        table("switching.csv", List.of("system_size", "mean_first_passage_h", "sd_h", "ci95_low_h", "ci95_high_h",
+                "arrived", "censored"), rows -> {
+                    for (int k = 0; k < result.passages().size(); k++) {
+                        Switching.FirstPassage f = result.passages().get(k);
+                        rows.add(List.of(RunTables.number(result.systemSizes()[k]), RunTables.number(f.mean()),
+                                RunTables.number(f.standardDeviation()), RunTables.number(f.low95()),
+                                RunTables.number(f.high95()), Integer.toString(f.arrived()),
+                                Integer.toString(f.censored())));
+                    }
+                });
+        double[] upper = new double[] {result.basins().xs()[result.basins().xs().length - 1],
+            result.basins().ys()[result.basins().ys().length - 1]};
+        table("commitment.csv", List.of(species.get(plan.xSpecies()), species.get(plan.ySpecies()), "probability"),
+                rows -> {
+                    double[][] c = result.commitment();
+                    for (int j = 0; j < c.length; j++) {
+                        for (int i = 0; i < c[j].length; i++) {
+                            rows.add(List.of(RunTables.number(upper[0] * i / (c[j].length - 1)),
+                                    RunTables.number(upper[1] * j / (c.length - 1)), RunTables.number(c[j][i])));
+                        }
+                    }
+                });
+    }
+
+    private static String eigenvalues(Complex[] values) {
+        List<String> parts = new ArrayList<>();
+        for (Complex c : values) {
+            double im = c.getImaginary();
+            parts.add(RunTables.number(c.getReal()) + (im == 0 ? "" : (im > 0 ? "+" : "-") + RunTables.number(Math.abs(im)) + "i"));
+        }
+        return String.join(" ", parts);
+    }
+
+    private interface Rows {
+        void fill(List<List<String>> rows);
+    }
+
+    private void table(String name, List<String> header, Rows rows) throws IOException {
+        List<List<String>> body = new ArrayList<>();
+        rows.fill(body);
+        folder.writeText(name, (Writer w) -> {
+            CSVPrinter printer = new CSVPrinter(w, FORMAT);
+            printer.printRecord(header);
+            for (List<String> row : body) {
+                printer.printRecord(row);
+            }
+            printer.flush();
+        });
+        written.add(name);
+    }
+
+    private void figure(String name, JFreeChart chart) throws IOException {
+        folder.write(name + ".png", out -> ChartFiles.png(chart, 960, 640, out));
+        folder.write(name + ".svg", out -> ChartFiles.svg(chart, 960, 640, out));
+        written.addAll(Arrays.asList(name + ".png", name + ".svg"));
+    }
+}

@@ -1,0 +1,256 @@
+package org.fatefield.scenarios.analysis;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.fatefield.circuits.analysis.BasinMap;
+import org.fatefield.circuits.analysis.QuasiPotential;
+import org.fatefield.circuits.analysis.SteadyState;
+import org.fatefield.circuits.analysis.StationaryFokkerPlanck;
+import org.fatefield.circuits.analysis.SteadyStateFinder;
+import org.fatefield.circuits.analysis.Switching;
+import org.fatefield.circuits.analysis.continuation.Branch;
+import org.fatefield.circuits.analysis.continuation.BranchPoint;
+import org.fatefield.circuits.analysis.continuation.ContinuationSettings;
+import org.fatefield.circuits.analysis.continuation.EquilibriumContinuation;
+import org.fatefield.circuits.analysis.continuation.FoldCurveContinuation;
+import org.fatefield.circuits.analysis.continuation.FoldCurveContinuation.FoldCurve;
+import org.fatefield.circuits.analysis.continuation.FoldCurveContinuation.FoldPoint;
+import org.fatefield.circuits.analysis.continuation.NetworkSystem;
+import org.fatefield.circuits.analysis.continuation.SpecialPoint;
+import org.fatefield.circuits.analysis.continuation.SpecialPointType;
+import org.fatefield.circuits.analysis.continuation.TwoParameterSystem;
+import org.fatefield.circuits.model.ReactionNetwork;
+
+/** Runs the single-cell analyses of {@code fatefield analyze} on one circuit. */
+public final class CircuitAnalysis {
+
+    private static final int GRID = 41;
+    private static final int COMMITMENT_GRID = 11;
+    private static final int LANDSCAPE_SLICES = 16;
+    /** Points closer than this to a traced branch's polyline lie on it (chords of curved branches stray a little). */
+    private static final double SAME_BRANCH = 5e-3;
+
+    private final ReactionNetwork network;
+    private final double[] base;
+    private final AnalysisPlan plan;
+    private final double[] lower;
+    private final double[] upper;
+
+    /**
+     * @param network the circuit
+     * @param base    its parameters (the plan's parameter is overwritten as needed)
+     */
+    public CircuitAnalysis(ReactionNetwork network, double[] base, AnalysisPlan plan) {
+        this.network = network;
+        this.base = base.clone();
+        this.plan = plan;
+        this.lower = new double[network.speciesCount()];
+        this.upper = boxUpper();
+    }
+
+    /** The box of concentrations every analysis searches. */
+    public double[] upperCorner() {
+        return upper.clone();
+    }
+
+    /** The parameters with the plan's parameter at {@code value}. */
+    public double[] parametersAt(double value) {
+        double[] p = base.clone();
+        for (int i : plan.indices()) {
+            p[i] = value;
+        }
+        return p;
+    }
+
+    /** Runs everything. */
+    public AnalysisResult run() {
+        double[] p = parametersAt(plan.at());
+        List<SteadyState> states = SteadyStateFinder.of(network).find(p, lower, upper);
+        List<Branch> branches = continuation();
+        List<FoldCurve> folds = plan.hasSecond() ? foldCurves(branches) : List.of();
+        List<SteadyState> stable = states.stream().filter(SteadyState::isStable).toList();
+        double[] corner = {upper[plan.xSpecies()], upper[plan.ySpecies()]};
+        BasinMap basins = BasinMap.compute(network, p, new double[network.speciesCount()], stable, plan.xSpecies(),
+                plan.ySpecies(), new double[2], corner, GRID);
+        double[] start = stable.isEmpty() ? states.get(0).state() : stable.get(0).state();
+        QuasiPotential landscape = landscape(p, stable.isEmpty() ? List.of(start)
+                : stable.stream().map(SteadyState::state).toList(), corner, plan.seed());
+        double[] values = new double[LANDSCAPE_SLICES];
+        List<QuasiPotential> slices = new ArrayList<>();
+        for (int k = 0; k < LANDSCAPE_SLICES; k++) {
+            values[k] = plan.min() + (plan.max() - plan.min()) * k / (LANDSCAPE_SLICES - 1);
+            double[] pk = parametersAt(values[k]);
+            List<double[]> wells = SteadyStateFinder.of(network).withStartsPerAxis(12).find(pk, lower, upper).stream()
+                    .filter(SteadyState::isStable).map(SteadyState::state).toList();
+            slices.add(landscape(pk, wells.isEmpty() ? List.of(start) : wells, corner, plan.seed() + k).marginalX());
+        }
+        double[] sizes = {plan.systemSize() / 8, plan.systemSize() / 4, plan.systemSize() / 2, plan.systemSize()};
+        List<Switching.FirstPassage> passages = new ArrayList<>();
+        double[][] commitment = new double[0][0];
+        if (stable.size() >= 2) {
+            double[] a = stable.get(0).state();
+            double[] b = stable.get(stable.size() - 1).state();
+            double radius = 0.25 * distance(a, b);
+            for (double omega : sizes) {
+                passages.add(Switching.meanFirstPassage(network, p, omega, a, b, radius, plan.trajectories(), 0.01,
+                        2000, plan.seed()));
+            }
+            commitment = new double[COMMITMENT_GRID][COMMITMENT_GRID];
+            for (int j = 0; j < COMMITMENT_GRID; j++) {
+                for (int i = 0; i < COMMITMENT_GRID; i++) {
+                    double[] x = new double[network.speciesCount()];
+                    x[plan.xSpecies()] = corner[0] * i / (COMMITMENT_GRID - 1);
+                    x[plan.ySpecies()] = corner[1] * j / (COMMITMENT_GRID - 1);
+                    commitment[j][i] = Switching.commitment(network, p, plan.systemSize(), x, b, a, radius,
+                            plan.trajectories(), 0.01, 500, plan.seed() + j * COMMITMENT_GRID + i);
+                }
+            }
+        }
+        return new AnalysisResult(states, branches, folds, basins, landscape, slices, values, passages, sizes,
+                commitment);
+    }
+
+    /**
+     * The landscape over the state plane: solved on a grid when the circuit has exactly the two
+     * plotted species (exact relative well depths), else sampled from trajectories started in
+     * each well.
+     */
+    private QuasiPotential landscape(double[] p, List<double[]> wells, double[] corner, long seed) {
+        if (network.speciesCount() == 2) {
+            return StationaryFokkerPlanck.solve(network, p, plan.systemSize(), plan.xSpecies(), plan.ySpecies(),
+                    new double[2], corner, 160);
+        }
+        return QuasiPotential.estimateFrom(network, p, plan.systemSize(), wells, plan.xSpecies(), plan.ySpecies(),
+                new double[2], corner, GRID, new QuasiPotential.Sampling(plan.trajectories(), 20, 200, 0.01, seed));
+    }
+
+    /** Branches through every steady state at both ends of the range, without repeats. */
+    private List<Branch> continuation() {
+        NetworkSystem system = new NetworkSystem(network, base, plan.indices());
+        double span = plan.max() - plan.min();
+        ContinuationSettings settings = ContinuationSettings.defaults().withMaxStep(Math.max(1e-3, span / 40));
+        EquilibriumContinuation continuation = EquilibriumContinuation.of(system, settings);
+        List<Branch> branches = new ArrayList<>();
+        for (double value : new double[] {plan.min(), plan.max(), plan.at()}) {
+            for (SteadyState s : SteadyStateFinder.of(network).find(parametersAt(value), lower, upper)) {
+                if (onKnownBranch(s.state(), value, branches)) {
+                    continue;
+                }
+                for (Branch b : continuation.diagram(s.state(), value, plan.min(), plan.max(), true, 2)) {
+                    if (b.points().size() > 1 && !duplicate(b, branches)) {
+                        branches.add(new Branch(branches.size(), b.points(), b.specials()));
+                    }
+                }
+            }
+        }
+        return branches;
+    }
+
+    /**
+     * Fold curves through the folds of the one-parameter diagram. A symmetric circuit has a
+     * pitchfork and no fold; then the diagram is recomputed with the second parameter nudged by
+     * 5% of its range, which unfolds the pitchfork into a fold to start from.
+     */
+    private List<FoldCurve> foldCurves(List<Branch> branches) {
+        TwoParameterSystem plane = new TwoParameterSystem(network, base, plan.indices(), plan.secondIndices());
+        double secondValue = base[plan.secondIndices()[0]];
+        boolean anyFold = branches.stream().flatMap(b -> b.specials().stream())
+                .anyMatch(s -> s.type() == SpecialPointType.SADDLE_NODE);
+        if (!anyFold) {
+            double nudge = 0.05 * (plan.secondMax() - plan.secondMin());
+            secondValue = secondValue + nudge <= plan.secondMax() ? secondValue + nudge : secondValue - nudge;
+            double[] nudged = base.clone();
+            for (int i : plan.secondIndices()) {
+                nudged[i] = secondValue;
+            }
+            branches = new CircuitAnalysis(network, nudged, plan).continuation();
+        }
+        List<FoldCurve> curves = new ArrayList<>();
+        for (Branch branch : branches) {
+            for (SpecialPoint s : branch.specials()) {
+                if (s.type() != SpecialPointType.SADDLE_NODE || onKnownCurve(s, curves)) {
+                    continue;
+                }
+                try {
+                    curves.add(FoldCurveContinuation.of(plane, ContinuationSettings.defaults()
+                            .withMaxStep(Math.max(1e-3, (plan.secondMax() - plan.secondMin()) / 40)))
+                            .trace(s.state(), s.parameter(), secondValue, plan.min(), plan.max(), plan.secondMin(),
+                                    plan.secondMax()));
+                } catch (IllegalArgumentException | IllegalStateException e) {
+                    // A fold the curve tracer cannot start from (degenerate there): skip it.
+                    continue;
+                }
+            }
+        }
+        return curves;
+    }
+
+    private static boolean onKnownCurve(SpecialPoint fold, List<FoldCurve> curves) {
+        for (FoldCurve curve : curves) {
+            for (FoldPoint p : curve.points()) {
+                if (Math.abs(p.mu() - fold.parameter()) < 1e-4 && distance(p.state(), fold.state()) < 1e-3) {
+                    return true;
+                }
+            }
+        }
+        return false;
+    }
+
+    private static boolean onKnownBranch(double[] state, double value, List<Branch> branches) {
+        return branches.stream().anyMatch(b -> b.distanceTo(value, state) < SAME_BRANCH);
+    }
+
+    /** A branch is a repeat if three of its points (at a quarter, half, three quarters) lie on one known branch. */
+    private static boolean duplicate(Branch candidate, List<Branch> branches) {
+        List<BranchPoint> points = candidate.points();
+        for (Branch b : branches) {
+            boolean all = true;
+            for (int q = 1; q <= 3 && all; q++) {
+                BranchPoint p = points.get(q * (points.size() - 1) / 4);
+                all = b.distanceTo(p.parameter(), p.state()) < SAME_BRANCH;
+            }
+            if (all) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * A box holding every steady state over the range: searched in [0, L]^n with L doubled from 4
+     * until the largest steady-state concentration is well inside, then 1.3 times that (at least 1).
+     */
+    private double[] boxUpper() {
+        int n = network.speciesCount();
+        double side = 4.0;
+        double largest = 0.0;
+        for (int attempt = 0; attempt < 6; attempt++) {
+            double[] box = new double[n];
+            java.util.Arrays.fill(box, side);
+            largest = 0.0;
+            for (double value : new double[] {plan.min(), plan.at(), plan.max()}) {
+                for (SteadyState s : SteadyStateFinder.of(network).withStartsPerAxis(12)
+                        .find(parametersAt(value), new double[n], box)) {
+                    for (double c : s.state()) {
+                        largest = Math.max(largest, c);
+                    }
+                }
+            }
+            if (largest < 0.6 * side) {
+                break;
+            }
+            side *= 2;
+        }
+        double[] out = new double[n];
+        java.util.Arrays.fill(out, Math.max(1.0, 1.3 * largest));
+        return out;
+    }
+
+    private static double distance(double[] a, double[] b) {
+        double s = 0;
+        for (int i = 0; i < a.length; i++) {
+            s += (a[i] - b[i]) * (a[i] - b[i]);
+        }
+        return Math.sqrt(s);
+    }
+}

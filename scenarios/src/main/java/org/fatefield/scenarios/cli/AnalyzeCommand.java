@@ -1,0 +1,194 @@
+package org.fatefield.scenarios.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.fatefield.circuits.model.ReactionNetwork;
+import org.fatefield.engine.coupling.SignalCoupling;
+import org.fatefield.scenarios.analysis.AnalysisPlan;
+import org.fatefield.scenarios.analysis.AnalysisResult;
+import org.fatefield.scenarios.analysis.AnalysisWriter;
+import org.fatefield.scenarios.analysis.CircuitAnalysis;
+import org.fatefield.scenarios.format.Scenario;
+import org.fatefield.scenarios.format.ScenarioException;
+import org.fatefield.scenarios.output.RunFolder;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code fatefield analyze}: the single-cell analyses of a scenario's circuit. */
+@Command(name = "analyze", mixinStandardHelpOptions = true,
+        description = {"Analyse a scenario's circuit on its own, before it goes into a tissue.",
+            "Steady states and their stability, the bifurcation diagram along one parameter (folds, branch"
+                    + " points, Hopf points), the bistable region in a plane of two parameters, phase portrait,"
+                    + " basins of attraction, the quasi-potential landscape (also along the parameter), and"
+                    + " switching statistics (mean first-passage times against system size, commitment"
+                    + " probabilities). Writes CSV tables and PNG + SVG figures."})
+final class AnalyzeCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", paramLabel = "SCENARIO", description = "a scenario file, or a built-in name (demo)")
+    private String scenario;
+
+    @Option(names = "--parameter", paramLabel = "NAME",
+            description = "parameter to vary (default: the scenario's first coupled parameter)")
+    private String parameter;
+
+    @Option(names = "--range", paramLabel = "MIN:MAX",
+            description = "range of the parameter (default: the coupling's range, else half to twice its value)")
+    private String range;
+
+    @Option(names = "--at", paramLabel = "VALUE",
+            description = "parameter value for steady states, portrait, basins, landscape, switching (default: mid-range)")
+    private Double at;
+
+    @Option(names = "--second", paramLabel = "NAME", description = "second parameter: draws the bistable region")
+    private String second;
+
+    @Option(names = "--second-range", paramLabel = "MIN:MAX", description = "range of the second parameter"
+            + " (default: half to twice its value)")
+    private String secondRange;
+
+    @Option(names = "--x", paramLabel = "SPECIES", description = "species on the horizontal axis (default: the first)")
+    private String xSpecies;
+
+    @Option(names = "--y", paramLabel = "SPECIES", description = "species on the vertical axis (default: the second)")
+    private String ySpecies;
+
+    @Option(names = "--system-size", paramLabel = "OMEGA", description = "molecules per unit concentration"
+            + " for the stochastic analyses (default: the scenario's)")
+    private Double systemSize;
+
+    @Option(names = "--trajectories", paramLabel = "N", defaultValue = "40",
+            description = "trajectories per stochastic estimate (default: ${DEFAULT-VALUE}); more is slower and tighter")
+    private int trajectories;
+
+    @Option(names = "--seed", paramLabel = "N", description = "random seed (default: the scenario's)")
+    private Long seed;
+
+    @Option(names = "--out", paramLabel = "DIR", description = "output folder (default: <scenario name>-analysis)")
+    private Path out;
+
+    @Option(names = "--force", description = "overwrite the files in an output folder that already holds files")
+    private boolean force;
+
+    @CommandLine.Spec
+    private CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter err = spec.commandLine().getErr();
+        Scenario loaded;
+        try {
+            loaded = ScenarioArgument.load(scenario);
+        } catch (ScenarioException e) {
+            err.println(e.getMessage());
+            return FatefieldCommand.INVALID_INPUT;
+        }
+        AnalysisPlan plan;
+        try {
+            plan = plan(loaded);
+        } catch (IllegalArgumentException e) {
+            err.println(e.getMessage());
+            return FatefieldCommand.INVALID_INPUT;
+        }
+        ReactionNetwork network = loaded.tissue().circuit().network();
+        Path folder = out != null ? out : Path.of(loaded.name() + "-analysis");
+        try {
+            RunFolder.checkUsable(folder, force);
+            CircuitAnalysis analysis = new CircuitAnalysis(network, loaded.tissue().mapping().base(), plan);
+            AnalysisResult result = analysis.run();
+            AnalysisWriter writer = new AnalysisWriter(RunFolder.open(folder), network, plan);
+            writer.write(result, analysis);
+            PrintWriter o = spec.commandLine().getOut();
+            o.printf("Analysed %s along %s in [%s, %s]: %d steady states at %s = %s, %d branches, %d special points.%n",
+                    loaded.name(), plan.parameter(), plan.min(), plan.max(), result.steadyStates().size(),
+                    plan.parameter(), plan.at(), result.branches().size(),
+                    result.branches().stream().mapToInt(b -> b.specials().size()).sum());
+            o.printf("Results are in %s%n", folder.toAbsolutePath().normalize());
+            o.flush();
+            return 0;
+        } catch (IOException e) {
+            err.println("Cannot write results: " + e.getMessage());
+            return FatefieldCommand.OUTPUT_ERROR;
+        }
+    }
+
+    private AnalysisPlan plan(Scenario loaded) {
+        ReactionNetwork network = loaded.tissue().circuit().network();
+        double[] base = loaded.tissue().mapping().base();
+        List<SignalCoupling> couplings = loaded.tissue().mapping().couplings();
+        String name = parameter != null ? parameter : couplings.isEmpty() ? null : couplings.get(0).label();
+        if (name == null) {
+            throw new IllegalArgumentException("the scenario couples no parameter; name one with --parameter"
+                    + " (parameters: " + String.join(", ", network.parameterNames()) + ")");
+        }
+        int[] indices = indices(network, name, "--parameter");
+        double[] r;
+        if (range != null) {
+            r = parseRange(range, "--range");
+        } else if (parameter == null && !couplings.isEmpty()) {
+            SignalCoupling c = couplings.get(0);
+            r = new double[] {Math.min(c.base(), c.base() + c.gain()), Math.max(c.base(), c.base() + c.gain())};
+        } else {
+            r = around(base[indices[0]]);
+        }
+        int[] secondIndices = new int[0];
+        double[] r2 = {0, 1};
+        if (second != null) {
+            secondIndices = indices(network, second, "--second");
+            r2 = secondRange != null ? parseRange(secondRange, "--second-range") : around(base[secondIndices[0]]);
+        }
+        int x = species(network, xSpecies, 0, "--x");
+        int y = species(network, ySpecies, 1, "--y");
+        return new AnalysisPlan(name, indices, r[0], r[1], at != null ? at : 0.5 * (r[0] + r[1]), second,
+                secondIndices, r2[0], r2[1], x, y,
+                systemSize != null ? systemSize : loaded.tissue().circuit().systemSize(), trajectories,
+                seed != null ? seed : loaded.seed());
+    }
+
+    private static int[] indices(ReactionNetwork network, String name, String option) {
+        int[] indices = network.parameterGroup(name);
+        if (indices.length == 0) {
+            throw new IllegalArgumentException(option + " " + name + " is not a parameter of this circuit; use one of "
+                    + String.join(", ", network.parameterNames()) + ", or a kinetic key shared by all genes");
+        }
+        return indices;
+    }
+
+    private static int species(ReactionNetwork network, String name, int fallback, String option) {
+        if (name == null) {
+            if (fallback >= network.speciesCount()) {
+                throw new IllegalArgumentException("the circuit has one species; state-plane analyses need two");
+            }
+            return fallback;
+        }
+        int index = network.speciesNames().indexOf(name);
+        if (index < 0) {
+            throw new IllegalArgumentException(option + " " + name + " is not a species; species are "
+                    + String.join(", ", network.speciesNames()));
+        }
+        return index;
+    }
+
+    private static double[] parseRange(String text, String option) {
+        String[] parts = text.split(":");
+        IllegalArgumentException problem = new IllegalArgumentException(option
+                + " must be MIN:MAX with two numbers, got '" + text + "'");
+        if (parts.length != 2) {
+            throw problem;
+        }
+        try {
+            return new double[] {Double.parseDouble(parts[0]), Double.parseDouble(parts[1])};
+        } catch (NumberFormatException e) {
+            problem.initCause(e);
+            throw problem;
+        }
+    }
+
+    private static double[] around(double value) {
+        return value > 0 ? new double[] {0.5 * value, 2 * value} : new double[] {0, 1};
+    }
+}
