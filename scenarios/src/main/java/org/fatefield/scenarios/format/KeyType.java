@@ -15,7 +15,9 @@ public enum KeyType {
     /** A list of numbers. */
     NUMBERS("list of numbers"),
     /** An inline table from species name to number. */
-    SPECIES_NUMBERS("table of species name = number");
+    SPECIES_NUMBERS("table of species name = number"),
+    /** A list of rows, each a list of numbers. */
+    MATRIX("list of rows of numbers, like [[0, -1], [-1, 0]]");
 
     private final String description;
 

@@ -87,7 +87,15 @@ final class ScenarioChecker {
 
     private void checkTable(Section section, TomlTable table, String path, TomlPosition header) {
         for (String key : table.keySet()) {
-            if (section.key(key).isPresent()) {
+            if (section.open()) {
+                Double v = asNumber(table.get(key));
+                if (v == null || !Double.isFinite(v)) {
+                    problems.add(at(table, key, path + "." + key, render(table.get(key)), "must be a number"));
+                } else if (!key.matches("[A-Za-z_][A-Za-z0-9_]*")) {
+                    problems.add(at(table, key, path + "." + key, null,
+                            "is not a usable name: letters, digits and _, starting with a letter or _"));
+                }
+            } else if (section.key(key).isPresent()) {
                 checkValue(section.key(key).get(), table, key, path + "." + key);
             } else if (!isSubSection(section.path() + "." + key) && !isGeneKinetics(section, table, key)) {
                 List<String> names = section.keys().stream().map(Key::name).toList();
@@ -129,6 +137,7 @@ final class ScenarioChecker {
             case NUMBERS -> isNumberList(value) ? null : "a list of numbers, like [0.1, 0.2]";
             case SPECIES_NUMBERS -> isSpeciesNumbers(value) ? null
                     : "an inline table of gene = number, like { A = 0.8 }";
+            case MATRIX -> isMatrix(value) ? null : "a list of rows of numbers, like [[0, -1], [-1, 0]]";
         };
         if (problem != null) {
             problems.add(at(table, name, path, render(value), "must be " + problem + unitText(key)));
@@ -165,6 +174,18 @@ final class ScenarioChecker {
         for (int i = 0; i < array.size(); i++) {
             Double v = asNumber(array.get(i));
             if (v == null || !Double.isFinite(v)) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static boolean isMatrix(Object value) {
+        if (!(value instanceof TomlArray rows) || rows.isEmpty()) {
+            return false;
+        }
+        for (int i = 0; i < rows.size(); i++) {
+            if (!isNumberList(rows.get(i))) {
                 return false;
             }
         }

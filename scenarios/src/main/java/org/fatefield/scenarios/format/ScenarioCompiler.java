@@ -7,7 +7,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
-import org.fatefield.circuits.model.GeneKinetics;
+import org.fatefield.circuits.model.ReactionNetwork;
 import org.fatefield.circuits.model.SelfActivatingSwitch;
 import org.fatefield.engine.coupling.CouplingForm;
 import org.fatefield.engine.coupling.ParameterMapping;
@@ -20,7 +20,6 @@ import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.field.SourceRegion;
 import org.fatefield.engine.tissue.CircuitSetup;
 import org.fatefield.engine.tissue.GrowthSpec;
-import org.fatefield.engine.tissue.NoiseMode;
 import org.fatefield.engine.tissue.TissueSpec;
 import org.fatefield.engine.tissue.Timing;
 import org.tomlj.TomlArray;
@@ -40,11 +39,13 @@ final class ScenarioCompiler {
     private final TomlParseResult toml;
     private final ScenarioChecker locator;
     private final List<Problem> problems = new ArrayList<>();
+    private final TomlValues values;
 
     ScenarioCompiler(String file, TomlParseResult toml, ScenarioChecker locator) {
         this.file = file;
         this.toml = toml;
         this.locator = locator;
+        this.values = new TomlValues(file, locator, problems);
     }
 
     List<Problem> problems() {
@@ -55,28 +56,28 @@ final class ScenarioCompiler {
         TomlTable scenario = toml.getTableOrEmpty("scenario");
         TomlTable run = toml.getTableOrEmpty("run");
         TomlTable tissue = toml.getTableOrEmpty("tissue");
-        double duration = number(run, "run", "duration");
-        double step = number(run, "run", "step");
-        double recordEvery = number(run, "run", "record_every");
+        double duration = values.number(run, "run", "duration");
+        double step = values.number(run, "run", "step");
+        double recordEvery = values.number(run, "run", "record_every");
         if (step > duration) {
-            fail(run, "run", "step", "must not exceed run.duration (" + duration + " h)");
+            values.fail(run, "run", "step", "must not exceed run.duration (" + duration + " h)");
         }
         if (recordEvery < step) {
-            fail(run, "run", "record_every", "must be at least one step (" + step + " h)");
+            values.fail(run, "run", "record_every", "must be at least one step (" + step + " h)");
         }
-        double width = number(tissue, "tissue", "width");
-        double height = number(tissue, "tissue", "height");
-        double radius = number(tissue, "tissue", "cell_radius");
-        double repulsion = number(tissue, "tissue", "repulsion");
+        double width = values.number(tissue, "tissue", "width");
+        double height = values.number(tissue, "tissue", "height");
+        double radius = values.number(tissue, "tissue", "cell_radius");
+        double repulsion = values.number(tissue, "tissue", "repulsion");
         if (2 * radius > Math.min(width, height)) {
-            fail(tissue, "tissue", "cell_radius", "a cell this size does not fit in a " + width + " x " + height
+            values.fail(tissue, "tissue", "cell_radius", "a cell this size does not fit in a " + width + " x " + height
                     + " µm domain");
         }
         if (repulsion * step > 0.5) {
-            fail(tissue, "tissue", "repulsion", "repulsion * run.step = " + repulsion * step
+            values.fail(tissue, "tissue", "repulsion", "repulsion * run.step = " + repulsion * step
                     + " makes the mechanics unstable; keep it below 0.5 (lower repulsion or run.step)");
         }
-        CircuitParts circuit = circuit();
+        CircuitSetup circuit = new CircuitCompiler(toml, values).compile();
         MorphogenSpec morphogen = morphogen(width, height);
         ParameterMapping mapping = mapping(circuit);
         FateClassifier fates = fates(circuit);
@@ -85,7 +86,7 @@ final class ScenarioCompiler {
             return null;
         }
         try {
-            TissueSpec spec = new TissueSpec(circuit.setup, mapping, morphogen, width, height, growth, fates,
+            TissueSpec spec = new TissueSpec(circuit, mapping, morphogen, width, height, growth, fates,
                     new Timing(duration, step, recordEvery));
             String name = scenario.contains("name") ? scenario.getString("name") : fallbackName;
             String description = scenario.contains("description") ? scenario.getString("description") : "";
@@ -97,54 +98,11 @@ final class ScenarioCompiler {
         }
     }
 
-    private record CircuitParts(SelfActivatingSwitch network, CircuitSetup setup) {
-    }
-
-    private CircuitParts circuit() {
-        TomlTable table = toml.getTable("circuit");
-        List<String> genes = names(table, "genes", List.of("A", "B"));
-        if (genes.size() != 2 || genes.get(0).equals(genes.get(1))
-                || genes.stream().anyMatch(g -> g.isBlank() || g.contains(".") || g.contains(" "))) {
-            fail(table, "circuit", "genes", "must name exactly two different genes, without dots or spaces");
-            return null;
-        }
-        TomlTable shared = toml.getTableOrEmpty("circuit.kinetics");
-        for (String key : shared.keySet()) {
-            if (shared.isTable(key) && !genes.contains(key)) {
-                problems.add(locator.at(shared, key, "circuit.kinetics." + key, null,
-                        "is not a gene of this circuit; genes are " + String.join(", ", genes)));
-            }
-        }
-        GeneKinetics[] kinetics = new GeneKinetics[2];
-        for (int g = 0; g < 2; g++) {
-            TomlTable own = shared.isTable(genes.get(g)) ? shared.getTable(genes.get(g)) : null;
-            double[] values = new double[ScenarioSchema.KINETICS.size()];
-            for (int k = 0; k < values.length; k++) {
-                Key key = ScenarioSchema.KINETICS.get(k);
-                Double value = own != null ? ScenarioChecker.asNumber(own.get(key.name())) : null;
-                if (value == null) {
-                    value = ScenarioChecker.asNumber(shared.get(key.name()));
-                }
-                values[k] = value != null ? value : Double.parseDouble(key.defaultValue());
-            }
-            kinetics[g] = GeneKinetics.fromArray(values, 0);
-        }
-        SelfActivatingSwitch network = SelfActivatingSwitch.of(genes.get(0), genes.get(1), kinetics[0], kinetics[1]);
-        double[] initial = numbers(table, "initial", new double[] {0.3, 0.3});
-        if (initial.length != 2 || Arrays.stream(initial).anyMatch(v -> v < 0)) {
-            fail(table, "circuit", "initial", "must give 2 concentrations of at least 0, one per gene");
-            return null;
-        }
-        NoiseMode noise = NoiseMode.fromWord(text(table, "circuit", "noise"));
-        return new CircuitParts(network,
-                new CircuitSetup(network, noise, number(table, "circuit", "system_size"), initial));
-    }
-
     private MorphogenSpec morphogen(double width, double height) {
         TomlTable table = toml.getTable("morphogen");
-        double spacing = number(table, "morphogen", "grid_spacing");
+        double spacing = values.number(table, "morphogen", "grid_spacing");
         if (width / spacing > MAX_GRID || height / spacing > MAX_GRID) {
-            fail(table, "morphogen", "grid_spacing", "gives more than " + MAX_GRID
+            values.fail(table, "morphogen", "grid_spacing", "gives more than " + MAX_GRID
                     + " grid squares along a side; use at least " + Math.max(width, height) / MAX_GRID + " µm");
         }
         List<SourceRegion> sources = new ArrayList<>();
@@ -152,7 +110,7 @@ final class ScenarioCompiler {
         for (int i = 0; i < array.size(); i++) {
             TomlTable source = array.getTable(i);
             String path = "morphogen.source[" + (i + 1) + "]";
-            double[] r = numbers(source, "region", new double[0]);
+            double[] r = TomlValues.numbers(source, "region", new double[0]);
             if (r.length != 4 || !(r[2] > r[0]) || !(r[3] > r[1])) {
                 problems.add(locator.at(source, "region", path + ".region", ScenarioChecker.render(source.get("region")),
                         "must be [x0, y0, x1, y1] in µm with x1 > x0 and y1 > y0"));
@@ -163,43 +121,45 @@ final class ScenarioCompiler {
                         "lies outside the " + width + " x " + height + " µm domain"));
                 continue;
             }
-            sources.add(new SourceRegion(r[0], r[1], r[2], r[3], number(source, "morphogen.source", "rate")));
+            sources.add(new SourceRegion(r[0], r[1], r[2], r[3], values.number(source, "morphogen.source", "rate")));
         }
-        return new MorphogenSpec(number(table, "morphogen", "diffusion"), number(table, "morphogen", "decay"),
-                spacing, number(table, "morphogen", "initial"), sources);
+        return new MorphogenSpec(values.number(table, "morphogen", "diffusion"), values.number(table, "morphogen", "decay"),
+                spacing, values.number(table, "morphogen", "initial"), sources);
     }
 
-    private ParameterMapping mapping(CircuitParts circuit) {
+    private ParameterMapping mapping(CircuitSetup circuit) {
         if (circuit == null) {
             return null;
         }
-        List<String> parameterNames = circuit.network.parameterNames();
+        ReactionNetwork network = circuit.network();
+        List<String> parameterNames = network.parameterNames();
         List<SignalCoupling> couplings = new ArrayList<>();
         TomlArray array = toml.getArrayOrEmpty("coupling");
         for (int i = 0; i < array.size(); i++) {
             TomlTable table = array.getTable(i);
             String parameter = table.getString("parameter");
-            int[] indices = circuit.network.parameterGroup(parameter);
+            int[] indices = network.parameterGroup(parameter);
             if (indices.length == 0) {
                 List<String> options = new ArrayList<>(ScenarioSchema.KINETICS.stream().map(Key::name).toList());
                 options.addAll(parameterNames);
                 problems.add(locator.at(table, "parameter", "coupling[" + (i + 1) + "].parameter", "\"" + parameter + "\"",
-                        "is not a kinetic key" + ScenarioChecker.suggestion(parameter, options) + "; use one of "
-                                + String.join(", ", ScenarioSchema.KINETICS.stream().map(Key::name).toList())
-                                + ", optionally prefixed by a gene name and a dot"));
+                        "is not a parameter of this circuit" + ScenarioChecker.suggestion(parameter, options)
+                                + "; use one of " + String.join(", ", parameterNames)
+                                + (network instanceof SelfActivatingSwitch ? ", or a kinetic key without the gene"
+                                        + " prefix for both genes" : "")));
                 continue;
             }
-            CouplingForm form = CouplingForm.valueOf(text(table, "coupling", "form").toUpperCase(Locale.ROOT));
-            couplings.add(new SignalCoupling(parameter, indices, form, number(table, "coupling", "base"),
-                    number(table, "coupling", "gain"), number(table, "coupling", "half_max"),
-                    number(table, "coupling", "hill")));
+            CouplingForm form = CouplingForm.valueOf(values.text(table, "coupling", "form").toUpperCase(Locale.ROOT));
+            couplings.add(new SignalCoupling(parameter, indices, form, values.number(table, "coupling", "base"),
+                    values.number(table, "coupling", "gain"), values.number(table, "coupling", "half_max"),
+                    values.number(table, "coupling", "hill")));
         }
-        return new ParameterMapping(circuit.network.defaultParameters(), couplings);
+        return new ParameterMapping(network.defaultParameters(), couplings);
     }
 
-    private FateClassifier fates(CircuitParts circuit) {
+    private FateClassifier fates(CircuitSetup circuit) {
         TomlTable table = toml.getTable("fates");
-        String defaultName = text(table, "fates", "default");
+        String defaultName = values.text(table, "fates", "default");
         TomlArray rules = toml.getArrayOrEmpty("fates.rule");
         if (rules.isEmpty()) {
             problems.add(new Problem(file, 0, 0, "fates.rule", null, "at least one [[fates.rule]] is needed"));
@@ -219,8 +179,8 @@ final class ScenarioCompiler {
             if (circuit == null) {
                 continue;
             }
-            double[] min = bounds(rule, "above", path, circuit.network.speciesNames());
-            double[] max = bounds(rule, "below", path, circuit.network.speciesNames());
+            double[] min = bounds(rule, "above", path, circuit.network().speciesNames());
+            double[] max = bounds(rule, "below", path, circuit.network().speciesNames());
             if (min != null && max != null) {
                 try {
                     list.add(new FateRule(name, min, max));
@@ -262,77 +222,17 @@ final class ScenarioCompiler {
     private GrowthSpec growth(TomlTable tissue) {
         TomlTable division = toml.getTableOrEmpty("division");
         CycleTimeDistribution.Kind kind = CycleTimeDistribution.Kind.valueOf(
-                text(division, "division", "cycle").toUpperCase(Locale.ROOT));
-        double cv = number(division, "division", "cycle_cv");
+                values.text(division, "division", "cycle").toUpperCase(Locale.ROOT));
+        double cv = values.number(division, "division", "cycle_cv");
         if (kind != CycleTimeDistribution.Kind.FIXED && !(cv > 0)) {
-            fail(division, "division", "cycle_cv", "must be greater than 0 for a " + kind.name().toLowerCase(Locale.ROOT)
+            values.fail(division, "division", "cycle_cv", "must be greater than 0 for a " + kind.name().toLowerCase(Locale.ROOT)
                     + " cycle (or set cycle = \"fixed\")");
             return null;
         }
-        PartitionMode partition = PartitionMode.valueOf(text(division, "division", "partition").toUpperCase(Locale.ROOT));
-        return new GrowthSpec((int) tissue.getLong("founders", () -> 200L), number(tissue, "tissue", "cell_radius"),
-                number(tissue, "tissue", "repulsion"),
-                new CycleTimeDistribution(kind, number(division, "division", "cycle_mean"), cv), partition);
+        PartitionMode partition = PartitionMode.valueOf(values.text(division, "division", "partition").toUpperCase(Locale.ROOT));
+        return new GrowthSpec((int) tissue.getLong("founders", () -> 200L), values.number(tissue, "tissue", "cell_radius"),
+                values.number(tissue, "tissue", "repulsion"),
+                new CycleTimeDistribution(kind, values.number(division, "division", "cycle_mean"), cv), partition);
     }
 
-    /**
-     * The number at {@code key}, or the default when it is absent or invalid (an invalid value
-     * was already reported by the checker; the default keeps later checks from cascading).
-     */
-    private double number(TomlTable table, String section, String key) {
-        Key spec = schemaKey(section, key);
-        Double value = ScenarioChecker.asNumber(table.get(key));
-        if (value != null && spec.inRange(value)) {
-            return value;
-        }
-        return spec.required() ? 1.0 : Double.parseDouble(spec.defaultValue());
-    }
-
-    private String text(TomlTable table, String section, String key) {
-        Key spec = schemaKey(section, key);
-        Object value = table.get(key);
-        if (value instanceof String s && (spec.choices().isEmpty() || spec.choices().contains(s))) {
-            return s;
-        }
-        return spec.required() ? spec.choices().get(0) : spec.defaultValue().replace("\"", "");
-    }
-
-    private static List<String> names(TomlTable table, String key, List<String> fallback) {
-        TomlArray array = table.getArray(key);
-        if (array == null) {
-            return fallback;
-        }
-        List<String> out = new ArrayList<>();
-        for (int i = 0; i < array.size(); i++) {
-            out.add(array.getString(i));
-        }
-        return out;
-    }
-
-    private static double[] numbers(TomlTable table, String key, double[] fallback) {
-        TomlArray array = table.getArray(key);
-        if (array == null) {
-            return fallback;
-        }
-        double[] out = new double[array.size()];
-        for (int i = 0; i < out.length; i++) {
-            out[i] = ScenarioChecker.asNumber(array.get(i));
-        }
-        return out;
-    }
-
-    private static Key schemaKey(String section, String key) {
-        return ScenarioSchema.section(section).flatMap(s -> s.key(key))
-                .orElseThrow(() -> new IllegalStateException("undocumented key " + section + "." + key));
-    }
-
-    private void fail(TomlTable table, String section, String key, String message) {
-        Object value = table.get(key);
-        if (value == null) {
-            problems.add(new Problem(file, 0, 0, section + "." + key, schemaKey(section, key).defaultValue()
-                    + " (default)", message));
-        } else {
-            problems.add(locator.at(table, key, section + "." + key, ScenarioChecker.render(value), message));
-        }
-    }
 }

@@ -21,6 +21,10 @@ public final class ScenarioReference {
             out.append("\n## `").append(section.header()).append("`");
             out.append(section.required() ? " (required)" : " (optional)").append("\n\n");
             out.append(capitalise(section.description())).append(".\n\n");
+            if (section.open()) {
+                out.append("Any key names (letters, digits and _), each a number.\n");
+                continue;
+            }
             out.append("| key | unit | default | allowed | meaning |\n|---|---|---|---|---|\n");
             for (Key key : section.keys()) {
                 out.append("| `").append(key.name()).append("` | ")

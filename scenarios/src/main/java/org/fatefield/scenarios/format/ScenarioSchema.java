@@ -14,6 +14,10 @@ public final class ScenarioSchema {
 
     /** Words of {@code circuit.type}. */
     public static final String SWITCH = "self-activating-switch";
+    /** The general n-gene Hill network. */
+    public static final String HILL_NETWORK = "hill-network";
+    /** A circuit written as reactions with rate laws. */
+    public static final String CUSTOM = "custom";
 
     /** Kinetic keys shared by {@code [circuit.kinetics]} and its per-gene tables. */
     public static final List<Key> KINETICS = List.of(
@@ -56,19 +60,50 @@ public final class ScenarioSchema {
                                     + " probability 1/2) or equal (exact halves: no partitioning noise)")),
                     "growth and division"),
             new Section("circuit", false, true, List.of(
-                    Key.choice("type", null, List.of(SWITCH), "the circuit family"),
-                    Key.of("genes", KeyType.NAMES, "", "[\"A\", \"B\"]", "names of the two genes (species)"),
+                    Key.choice("type", null, List.of(SWITCH, HILL_NETWORK, CUSTOM),
+                            "the circuit family: the two-gene self-activating switch, a general n-gene Hill network,"
+                                    + " or a custom circuit of reactions with rate laws"),
+                    Key.of("genes", KeyType.NAMES, "", "[\"A\", \"B\"]",
+                            "names of the genes (two for the switch, any number for a Hill network)"),
+                    Key.of("species", KeyType.NAMES, "", "*required for custom*", "names of the species of a custom circuit"),
                     Key.choice("noise", "langevin", List.of("langevin", "none", "exact", "tau-leap"),
                             "langevin: chemical Langevin equation (Euler-Maruyama); none: deterministic rate equations"
                                     + " (RK4); exact: Gillespie's direct method in molecule counts; tau-leap:"
                                     + " tau-leaping with Cao-Gillespie-Petzold step selection"),
                     Key.positive("system_size", "molecules per unit concentration", "100",
                             "converts concentrations to molecule numbers in a newborn cell; sets the noise level"),
-                    Key.of("initial", KeyType.NUMBERS, "", "[0.3, 0.3]", "concentrations of every founder cell, one per gene")),
+                    Key.of("initial", KeyType.NUMBERS, "", "0.3 for each species",
+                            "concentrations of every founder cell, one per gene or species")),
                     "the circuit every cell carries"),
             new Section("circuit.kinetics", false, false, KINETICS,
                     "kinetics shared by both genes; a sub-table [circuit.kinetics.<gene>] with the same keys"
                             + " overrides them for one gene"),
+            new Section("circuit.network", false, false, List.of(
+                    Key.choice("combine", "additive", List.of("additive", "multiplicative"),
+                            "how a gene's inputs combine: additive (production = basal + max_rate * mean of the input"
+                                    + " Hill terms: OR-like) or multiplicative (basal + max_rate * product: AND-like)"),
+                    Key.of("interaction", KeyType.MATRIX, "", null,
+                            "row i, column j: +1 if gene j activates gene i, -1 if it represses it, 0 if neither"),
+                    Key.of("basal", KeyType.NUMBERS, "1/h", "0.05 for each gene", "basal production per gene"),
+                    Key.of("max_rate", KeyType.NUMBERS, "1/h", "1 for each gene", "regulated production per gene"),
+                    Key.of("degradation", KeyType.NUMBERS, "1/h", "1 for each gene", "loss rate per gene"),
+                    Key.of("threshold", KeyType.MATRIX, "", "0.5 for every interaction",
+                            "half-effect concentration of gene j acting on gene i"),
+                    Key.of("hill", KeyType.MATRIX, "", "4 for every interaction", "Hill coefficient of gene j acting on gene i")),
+                    "a general Hill network (circuit.type = \"hill-network\"); parameters are then named"
+                            + " <gene>.basal, <gene>.max_rate, <gene>.degradation, <target>.<source>.threshold and"
+                            + " <target>.<source>.hill"),
+            new Section("circuit.parameters", false, false, List.of(),
+                    "parameters of a custom circuit (circuit.type = \"custom\"): name = value, any names", true),
+            new Section("circuit.reaction", true, false, List.of(
+                    Key.of("name", KeyType.TEXT, "", null, "reaction name used in messages"),
+                    Key.of("change", KeyType.SPECIES_NUMBERS, "", null,
+                            "species = whole number: net change when the reaction fires once, like { A = 1 }"),
+                    Key.of("rate", KeyType.TEXT, "concentration/h", null,
+                            "rate law in ordinary math notation: numbers, species and parameter names, + - * / ^,"
+                                    + " parentheses, exp, log, sqrt, abs, min, max, hill_act(x, K, n) = x^n/(K^n+x^n),"
+                                    + " hill_rep(x, K, n) = K^n/(K^n+x^n)")),
+                    "a reaction of a custom circuit; repeat for each"),
             new Section("morphogen", false, true, List.of(
                     Key.nonNegative("diffusion", "µm²/h", "3600", "diffusion coefficient"),
                     Key.nonNegative("decay", "1/h", "0.2", "first-order decay rate"),

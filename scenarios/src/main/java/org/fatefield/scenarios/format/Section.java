@@ -12,8 +12,15 @@ import java.util.Optional;
  * @param required    true if the section must be present
  * @param keys        the keys it may contain
  * @param description what the section describes
+ * @param open        true if it takes keys of the user's choosing (each a number)
  */
-public record Section(String path, boolean repeated, boolean required, List<Key> keys, String description) {
+public record Section(String path, boolean repeated, boolean required, List<Key> keys, String description,
+        boolean open) {
+
+    /** A section with a fixed set of keys. */
+    public Section(String path, boolean repeated, boolean required, List<Key> keys, String description) {
+        this(path, repeated, required, keys, description, false);
+    }
 
     /** The key called {@code name}, if documented here. */
     public Optional<Key> key(String name) {

@@ -1,0 +1,132 @@
+package org.fatefield.scenarios.format;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.charset.StandardCharsets;
+import java.util.List;
+import org.fatefield.circuits.model.CustomNetwork;
+import org.fatefield.circuits.model.HillNetwork;
+import org.fatefield.circuits.model.ReactionNetwork;
+import org.fatefield.scenarios.builtin.BuiltinScenarios;
+import org.junit.jupiter.api.Test;
+
+/** Hill-network and custom circuits written in a scenario. */
+class CircuitTypesTest {
+
+    private static final String CUSTOM_CIRCUIT = """
+            [circuit]
+            type = "custom"
+            species = ["Lum", "Ark"]
+            noise = "langevin"
+            system_size = 100.0
+            initial = [0.3, 0.3]
+
+            [circuit.parameters]
+            b = 0.05
+            s = 0.2
+            K = 0.5
+            n = 4
+            repression = 1.0
+            d = 1.0
+
+            [[circuit.reaction]]
+            name = "make Lum"
+            change = { Lum = 1 }
+            rate = "b + s * hill_act(Lum, K, n) + repression * hill_rep(Ark, K, n)"
+
+            [[circuit.reaction]]
+            name = "lose Lum"
+            change = { Lum = -1 }
+            rate = "d * Lum"
+
+            [[circuit.reaction]]
+            name = "make Ark"
+            change = { Ark = 1 }
+            rate = "b + s * hill_act(Ark, K, n) + repression * hill_rep(Lum, K, n)"
+
+            [[circuit.reaction]]
+            name = "lose Ark"
+            change = { Ark = -1 }
+            rate = "d * Ark"
+            """;
+
+    private static String demoWithCircuit(String circuit) {
+        String demo = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8);
+        int start = demo.indexOf("[circuit]");
+        int end = demo.indexOf("[morphogen]");
+        return demo.substring(0, start) + circuit + "\n" + demo.substring(end);
+    }
+
+    private static Scenario read(String text) throws ScenarioException {
+        return ScenarioReader.parse("t.toml", "t", text.getBytes(StandardCharsets.UTF_8));
+    }
+
+    @Test
+    void customCircuitEquivalentToTheDemoSwitchGivesTheSameDrift() throws ScenarioException {
+        Scenario custom = read(demoWithCircuit(CUSTOM_CIRCUIT));
+        Scenario builtIn = read(new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8));
+        ReactionNetwork a = custom.tissue().circuit().network();
+        ReactionNetwork b = builtIn.tissue().circuit().network();
+        assertTrue(a instanceof CustomNetwork);
+        double[] pa = custom.tissue().mapping().base();
+        double[] pb = builtIn.tissue().mapping().base();
+        // The coupling "repression" resolves to the custom parameter of that name.
+        custom.tissue().mapping().parametersAt(0.8, pa);
+        builtIn.tissue().mapping().parametersAt(0.8, pb);
+        double[] x = {0.4, 0.9};
+        double[] fa = a.drift(x, pa);
+        double[] fb = b.drift(x, pb);
+        assertEquals(fb[0], fa[0], 1e-14);
+        assertEquals(fb[1], fa[1], 1e-14);
+    }
+
+    @Test
+    void rateLawErrorsNameTheReactionLineAndColumn() {
+        String text = demoWithCircuit(CUSTOM_CIRCUIT.replace("rate = \"d * Ark\"", "rate = \"d * Ark )\""));
+        ScenarioException e = assertThrows(ScenarioException.class, () -> read(text));
+        Problem p = e.problems().get(0);
+        assertEquals("circuit.reaction[4].rate", p.keyPath());
+        assertTrue(p.message().contains("reaction 'lose Ark'") || p.message().contains("column 9"), p.message());
+        assertTrue(p.message().contains("column 9"), p.message());
+        List<String> lines = List.of(text.split("\n", -1));
+        assertEquals(lines.indexOf("rate = \"d * Ark )\"") + 1, p.line());
+    }
+
+    @Test
+    void ratesCannotReachCode() {
+        String text = demoWithCircuit(CUSTOM_CIRCUIT.replace("rate = \"d * Ark\"",
+                "rate = \"java.lang.Runtime.getRuntime().exit(3)\""));
+        ScenarioException e = assertThrows(ScenarioException.class, () -> read(text));
+        assertTrue(e.getMessage().contains("unknown name 'java'"), e.getMessage());
+    }
+
+    @Test
+    void hillNetworkOfThreeGenes() throws ScenarioException {
+        String circuit = """
+                [circuit]
+                type = "hill-network"
+                genes = ["Lum", "Ark", "Tov"]
+                initial = [0.3, 0.3, 0.1]
+
+                [circuit.network]
+                combine = "multiplicative"
+                interaction = [[0, -1, 1], [-1, 0, 0], [1, 0, 0]]
+                basal = [0.05, 0.05, 0.02]
+                """;
+        Scenario s = read(demoWithCircuit(circuit).replace("parameter = \"repression\"", "parameter = \"Ark.max_rate\""));
+        ReactionNetwork network = s.tissue().circuit().network();
+        assertTrue(network instanceof HillNetwork);
+        assertEquals(List.of("Lum", "Ark", "Tov"), network.speciesNames());
+        assertTrue(network.parameterNames().contains("Lum.Tov.threshold"));
+    }
+
+    @Test
+    void sectionsOfAnotherTypeAreRejected() {
+        String text = demoWithCircuit(CUSTOM_CIRCUIT.replace("type = \"custom\"", "type = \"self-activating-switch\""));
+        ScenarioException e = assertThrows(ScenarioException.class, () -> read(text));
+        assertTrue(e.problems().stream().anyMatch(p -> p.keyPath().equals("circuit.reaction")
+                && p.message().contains("custom")), e.getMessage());
+    }
+}
