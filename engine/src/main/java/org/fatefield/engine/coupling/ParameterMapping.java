@@ -11,6 +11,7 @@ public final class ParameterMapping {
 
     private final double[] base;
     private final List<SignalCoupling> couplings;
+    private final SignalCoupling[] applied;
 
     /**
      * @param base      default parameter vector of the circuit (copied)
@@ -19,6 +20,7 @@ public final class ParameterMapping {
     public ParameterMapping(double[] base, List<SignalCoupling> couplings) {
         this.base = base.clone();
         this.couplings = List.copyOf(couplings);
+        this.applied = this.couplings.toArray(new SignalCoupling[0]);
         for (SignalCoupling coupling : this.couplings) {
             for (int index : coupling.parameterIndices()) {
                 if (index < 0 || index >= base.length) {
@@ -41,8 +43,8 @@ public final class ParameterMapping {
      * since the uncoupled entries never change.
      */
     public void applySignal(double c, double[] out) {
-        for (int k = 0; k < couplings.size(); k++) {
-            couplings.get(k).apply(c, out);
+        for (SignalCoupling coupling : applied) {
+            coupling.apply(c, out);
         }
     }
 

@@ -48,8 +48,9 @@ public record SignalCoupling(String label, int[] parameterIndices, CouplingForm 
     /** Writes the value at {@code c} into every coupled entry of {@code params}. */
     void apply(double c, double[] params) {
         double value = valueAt(c);
-        for (int index : parameterIndices) {
-            params[index] = value;
+        int[] indices = parameterIndices;
+        for (int i = 0; i < indices.length; i++) {
+            params[indices[i]] = value;
         }
     }
 

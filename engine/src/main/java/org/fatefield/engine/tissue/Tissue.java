@@ -6,6 +6,7 @@ import org.fatefield.circuits.random.RandomStreams;
 import org.fatefield.circuits.sim.CircuitStepper;
 import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.cell.CellPopulation;
+import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.field.MorphogenField;
 import org.fatefield.engine.mechanics.OverlapRepulsion;
 import org.fatefield.engine.record.TimeSeries;
@@ -101,12 +102,16 @@ public final class Tissue extends SimState {
 
     private void stepCells(double dt) {
         int n = population.size();
+        MorphogenField morphogen = field;
+        ParameterMapping mapping = spec.mapping();
+        CircuitStepper circuit = stepper;
+        double[] p = params;
         for (int i = 0; i < n; i++) {
             Cell cell = population.get(i);
-            double c = field.sample(cell.x(), cell.y());
+            double c = morphogen.sample(cell.x(), cell.y());
             cell.setSignal(c);
-            spec.mapping().applySignal(c, params);
-            stepper.advance(cell.liveState(), params, dt, cell.random());
+            mapping.applySignal(c, p);
+            circuit.advance(cell.liveState(), p, dt, cell.random());
             cell.grow(dt);
         }
     }

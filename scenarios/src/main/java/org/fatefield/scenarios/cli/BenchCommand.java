@@ -3,7 +3,10 @@ package org.fatefield.scenarios.cli;
 import java.io.PrintWriter;
 import java.util.List;
 import java.util.concurrent.Callable;
+import org.fatefield.circuits.model.SelfActivatingSwitch;
+import org.fatefield.engine.bench.CircuitBenchmark;
 import org.fatefield.engine.bench.TissueBenchmark;
+import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
 import picocli.CommandLine;
@@ -61,6 +64,18 @@ final class BenchCommand implements Callable<Integer> {
             out.flush();
         }
         out.println("Rates are cell-steps per second on one thread. loop/bare = 1 means no overhead over the bare loop.");
+        if (loaded.tissue().circuit().network() instanceof SelfActivatingSwitch sw) {
+            SignalCoupling c = loaded.tissue().mapping().couplings().get(0);
+            CircuitBenchmark.Result r = CircuitBenchmark.measure(sw, loaded.tissue().circuit().systemSize(),
+                    c.parameterIndices(), Math.min(c.base(), c.base() + c.gain()), Math.max(c.base(), c.base() + c.gain()),
+                    10_000, steps);
+            out.println();
+            out.printf("Single cell: Langevin step, built-in switch %.4g /s, equivalent custom circuit %.4g /s,"
+                    + " custom/built-in %.2f%n", r.builtInRate(), r.customRate(), r.customRatio());
+            out.printf("Gillespie direct method: %.4g events/s on one core%n", r.ssaEventsPerSecond());
+            out.printf("Continuation of the switch over %s with branch switching: %.1f ms, %d special points%n",
+                    c.label(), r.continuationMillis(), r.specialPoints());
+        }
         out.flush();
         return 0;
     }

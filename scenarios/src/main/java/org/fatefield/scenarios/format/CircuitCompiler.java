@@ -7,6 +7,8 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
+import org.fatefield.circuits.expr.ExpressionException;
+import org.fatefield.circuits.expr.ExpressionParser;
 import org.fatefield.circuits.model.CustomNetwork;
 import org.fatefield.circuits.model.GeneKinetics;
 import org.fatefield.circuits.model.HillNetwork;
@@ -213,20 +215,21 @@ final class CircuitCompiler {
                     change[index] = (int) v;
                 }
             }
-            definitions.add(new CustomNetwork.ReactionDefinition(reaction.getString("name"), change,
-                    reaction.getString("rate")));
+            String rate = reaction.getString("rate");
+            try {
+                ExpressionParser.parse(rate, species, names);
+            } catch (ExpressionException e) {
+                values.problem(reaction, "rate", path + ".rate", ScenarioChecker.render(rate),
+                        "rate law of reaction '" + reaction.getString("name") + "': " + e.getMessage());
+                ok = false;
+            }
+            definitions.add(new CustomNetwork.ReactionDefinition(reaction.getString("name"), change, rate));
         }
         if (!ok) {
             return null;
         }
         try {
             return CustomNetwork.of(species, names, defaults, definitions);
-        } catch (CustomNetwork.RateLawException e) {
-            int r = definitions.stream().map(CustomNetwork.ReactionDefinition::name).toList().indexOf(e.reaction());
-            TomlTable reaction = reactions.getTable(Math.max(r, 0));
-            values.problem(reaction, "rate", "circuit.reaction[" + (r + 1) + "].rate",
-                    ScenarioChecker.render(reaction.getString("rate")), "rate law " + e.getCause().getMessage());
-            return null;
         } catch (IllegalArgumentException e) {
             values.problem(table, "species", "circuit", null, e.getMessage());
             return null;
