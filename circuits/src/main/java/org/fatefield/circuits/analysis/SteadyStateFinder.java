@@ -16,9 +16,10 @@ import org.hipparchus.linear.RealVector;
  * Finds every steady state of a circuit inside a box of concentrations, with its stability.
  *
  * <p>Damped Newton iterations start from a regular grid of points in the box; converged points
- * are deduplicated and classified by the eigenvalues of the Jacobian (Hipparchus
- * {@link Spectra}). A grid fine enough to put a start in every basin of
- * Newton's method finds every root in practice; the number of starts per axis is a setting.
+ * are deduplicated and classified by the eigenvalues of the Jacobian ({@link Spectra}). For
+ * two species a grid check follows: on a grid four times finer than the starts, every cell in
+ * which both drift components change sign (both nullclines pass through it) must hold a found
+ * root, and Newton's method is started again from any such cell that does not.
  */
 public final class SteadyStateFinder {
 
@@ -85,12 +86,57 @@ public final class SteadyStateFinder {
                 roots.add(root);
             }
         }
+        if (n == 2) {
+            gridCheck(params, lower, upper, roots);
+        }
         List<SteadyState> result = new ArrayList<>();
         for (double[] root : roots) {
             result.add(classify(root, params));
         }
         result.sort(Comparator.comparingDouble(s -> s.state()[0]));
         return result;
+    }
+
+    private void gridCheck(double[] params, double[] lower, double[] upper, List<double[]> roots) {
+        int cells = 4 * startsPerAxis;
+        double hx = (upper[0] - lower[0]) / cells;
+        double hy = (upper[1] - lower[1]) / cells;
+        double[][][] f = new double[cells + 1][cells + 1][];
+        double[] work = new double[network.reactionCount()];
+        for (int j = 0; j <= cells; j++) {
+            for (int i = 0; i <= cells; i++) {
+                double[] out = new double[2];
+                network.drift(new double[] {lower[0] + i * hx, lower[1] + j * hy}, params, out, work);
+                f[j][i] = out;
+            }
+        }
+        for (int j = 0; j < cells; j++) {
+            for (int i = 0; i < cells; i++) {
+                if (!changesSign(f, i, j, 0) || !changesSign(f, i, j, 1)) {
+                    continue;
+                }
+                double x0 = lower[0] + i * hx;
+                double y0 = lower[1] + j * hy;
+                boolean covered = roots.stream().anyMatch(r -> r[0] >= x0 - hx && r[0] <= x0 + 2 * hx
+                        && r[1] >= y0 - hy && r[1] <= y0 + 2 * hy);
+                if (!covered) {
+                    double[] root = newton(new double[] {x0 + hx / 2, y0 + hy / 2}, params, lower, upper);
+                    if (root != null && inside(root, lower, upper) && isNew(root, roots)) {
+                        roots.add(root);
+                    }
+                }
+            }
+        }
+    }
+
+    private static boolean changesSign(double[][][] f, int i, int j, int component) {
+        double a = f[j][i][component];
+        double b = f[j][i + 1][component];
+        double c = f[j + 1][i][component];
+        double d = f[j + 1][i + 1][component];
+        double min = Math.min(Math.min(a, b), Math.min(c, d));
+        double max = Math.max(Math.max(a, b), Math.max(c, d));
+        return min <= 0 && max >= 0;
     }
 
     /**

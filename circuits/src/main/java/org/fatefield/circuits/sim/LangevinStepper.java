@@ -25,12 +25,14 @@ public final class LangevinStepper implements CircuitStepper {
     private final double systemSize;
     private final ReactionTable table;
     private final double[] propensity;
+    private final double[] normals;
 
     private LangevinStepper(ReactionNetwork network, double systemSize) {
         this.network = network;
         this.systemSize = systemSize;
         this.table = new ReactionTable(network);
         this.propensity = new double[network.reactionCount()];
+        this.normals = new double[network.reactionCount()];
     }
 
     /**
@@ -54,11 +56,25 @@ public final class LangevinStepper implements CircuitStepper {
     @Override
     public void advance(double[] state, double[] params, double dt, UniformRandomProvider rng) {
         ZigguratSampler.NormalizedGaussian gaussian = ZigguratSampler.NormalizedGaussian.of(rng);
+        for (int j = 0; j < normals.length; j++) {
+            normals[j] = gaussian.sample();
+        }
+        advance(state, params, dt, normals);
+    }
+
+    /**
+     * One step driven by given standard normal increments, one per reaction (the Wiener increment
+     * of reaction j over the step is {@code sqrt(dt) xi_j}): lets callers reuse one Brownian path
+     * at several step sizes, as convergence studies need.
+     *
+     * @param xi standard normals, one per reaction, not modified
+     */
+    public void advance(double[] state, double[] params, double dt, double[] xi) {
         network.propensities(state, params, propensity);
         double noiseScale = dt / systemSize;
         for (int j = 0; j < propensity.length; j++) {
             double a = Math.max(propensity[j], 0.0);
-            double increment = a * dt + Math.sqrt(a * noiseScale) * gaussian.sample();
+            double increment = a * dt + Math.sqrt(a * noiseScale) * xi[j];
             table.fire(j, increment, 1.0, state);
         }
         for (int i = 0; i < state.length; i++) {

@@ -45,5 +45,13 @@ class RungeKutta4StepperTest {
         // Global error of RK4 is O(dt^4): about 1e-10 here (Hairer, Norsett & Wanner 1993, II.3).
         assertEquals(end.getPrimaryState()[0], x[0], 1e-8);
         assertEquals(end.getPrimaryState()[1], x[1], 1e-8);
+
+        double[] y = x0.clone();
+        DormandPrinceStepper adaptive = DormandPrinceStepper.of(circuit, 1e-11);
+        for (int i = 0; i < 5; i++) {
+            adaptive.advance(y, p, 1.0, null);
+        }
+        assertEquals(end.getPrimaryState()[0], y[0], 1e-8);
+        assertEquals(end.getPrimaryState()[1], y[1], 1e-8);
     }
 }

@@ -16,11 +16,12 @@ package org.fatefield.scenarios.analysis;
  * @param ySpecies       species on the vertical axis
  * @param systemSize     molecules per unit concentration for the stochastic analyses
  * @param trajectories   trajectories per landscape, per first-passage estimate and per commitment start
+ * @param grid           cells per axis of the landscape grid
  * @param seed           seed of every stochastic analysis
  */
 public record AnalysisPlan(String parameter, int[] indices, double min, double max, double at, String second,
         int[] secondIndices, double secondMin, double secondMax, int xSpecies, int ySpecies, double systemSize,
-        int trajectories, long seed) {
+        int trajectories, int grid, long seed) {
 
     /** Validates ranges and effort. */
     public AnalysisPlan {
@@ -32,6 +33,9 @@ public record AnalysisPlan(String parameter, int[] indices, double min, double m
         }
         if (trajectories < 2) {
             throw new IllegalArgumentException("--trajectories must be at least 2, got " + trajectories);
+        }
+        if (grid < 10 || grid > 400) {
+            throw new IllegalArgumentException("--grid must be from 10 to 400, got " + grid);
         }
         if (xSpecies == ySpecies) {
             throw new IllegalArgumentException("--x and --y must name different species");

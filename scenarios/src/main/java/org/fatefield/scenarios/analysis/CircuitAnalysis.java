@@ -118,7 +118,7 @@ public final class CircuitAnalysis {
     private QuasiPotential landscape(double[] p, List<double[]> wells, double[] corner, long seed) {
         if (network.speciesCount() == 2) {
             return StationaryFokkerPlanck.solve(network, p, plan.systemSize(), plan.xSpecies(), plan.ySpecies(),
-                    new double[2], corner, 160);
+                    new double[2], corner, plan.grid());
         }
         return QuasiPotential.estimateFrom(network, p, plan.systemSize(), wells, plan.xSpecies(), plan.ySpecies(),
                 new double[2], corner, GRID, new QuasiPotential.Sampling(plan.trajectories(), 20, 200, 0.01, seed));

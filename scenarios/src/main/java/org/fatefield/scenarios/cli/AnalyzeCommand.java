@@ -65,6 +65,10 @@ final class AnalyzeCommand implements Callable<Integer> {
             description = "trajectories per stochastic estimate (default: ${DEFAULT-VALUE}); more is slower and tighter")
     private int trajectories;
 
+    @Option(names = "--grid", paramLabel = "N", defaultValue = "160",
+            description = "cells per axis of the landscape grid (default: ${DEFAULT-VALUE})")
+    private int grid;
+
     @Option(names = "--seed", paramLabel = "N", description = "random seed (default: the scenario's)")
     private Long seed;
 
@@ -145,7 +149,7 @@ final class AnalyzeCommand implements Callable<Integer> {
         int y = species(network, ySpecies, 1, "--y");
         return new AnalysisPlan(name, indices, r[0], r[1], at != null ? at : 0.5 * (r[0] + r[1]), second,
                 secondIndices, r2[0], r2[1], x, y,
-                systemSize != null ? systemSize : loaded.tissue().circuit().systemSize(), trajectories,
+                systemSize != null ? systemSize : loaded.tissue().circuit().systemSize(), trajectories, grid,
                 seed != null ? seed : loaded.seed());
     }
 

@@ -1,0 +1,92 @@
+package org.fatefield.scenarios.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.Reader;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import javax.xml.parsers.DocumentBuilderFactory;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVRecord;
+import org.fatefield.circuits.model.Hill;
+import org.hipparchus.analysis.solvers.BrentSolver;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.w3c.dom.Document;
+
+class AnalyzeCommandTest {
+
+    @TempDir
+    Path tmp;
+
+    private static List<CSVRecord> csv(Path file) throws IOException {
+        try (Reader in = Files.newBufferedReader(file)) {
+            return CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get().parse(in).getRecords();
+        }
+    }
+
+    /**
+     * The demo switch (basal b = 0.05, self-activation s = 0.2, thresholds 0.5, Hill 4,
+     * degradation 1) loses its symmetric state where the antisymmetric eigenvalue
+     * s act'(S) + r act'(S) - 1 vanishes on the symmetric state S (derived by hand, as in the
+     * circuits module's pitchfork test), solved here with Hipparchus' Brent solver.
+     */
+    private static double pitchforkRepression() {
+        double b = 0.05;
+        double s = 0.2;
+        double theta = 0.5;
+        double n = 4;
+        java.util.function.DoubleUnaryOperator r = x -> (1 - s * Hill.activationSlope(x, theta, n))
+                / Hill.activationSlope(x, theta, n);
+        double state = new BrentSolver(1e-15, 1e-15, 1e-15).solve(1000,
+                x -> b + s * Hill.activation(x, theta, n) + r.applyAsDouble(x) * Hill.repression(x, theta, n) - x,
+                0.3, 0.45);
+        return r.applyAsDouble(state);
+    }
+
+    @Test
+    void demoAnalysisFindsThePitchforkAndWritesEveryFile() throws Exception {
+        Path out = tmp.resolve("analysis");
+        StringWriter err = new StringWriter();
+        int code = FatefieldCommand.execute(new PrintWriter(new StringWriter()), new PrintWriter(err), "analyze", "demo",
+                "--out", out.toString(), "--trajectories", "4", "--grid", "40", "--second", "Lum.basal",
+                "--second-range", "0:0.2");
+        assertEquals(0, code, err.toString());
+        for (String name : List.of("steady-states.csv", "branches.csv", "special-points.csv", "fold-curve.csv",
+                "basins.csv", "landscape.csv", "switching.csv", "commitment.csv")) {
+            assertTrue(Files.size(out.resolve(name)) > 0, name);
+        }
+        CSVRecord pitchfork = csv(out.resolve("special-points.csv")).stream()
+                .filter(r -> r.get("type").equals("branch point (pitchfork)")).findFirst().orElseThrow();
+        assertEquals(pitchforkRepression(), Double.parseDouble(pitchfork.get("repression")), 1e-8);
+        List<CSVRecord> states = csv(out.resolve("steady-states.csv"));
+        assertEquals(List.of("stable node", "saddle", "stable node"), states.stream().map(r -> r.get("type")).toList());
+        assertTrue(csv(out.resolve("fold-curve.csv")).stream().anyMatch(r -> r.get("kind").equals("cusp")));
+        for (String figure : List.of("bifurcation", "bistable-region", "phase-portrait", "basins", "landscape",
+                "landscape-along-parameter")) {
+            assertTrue(Files.size(out.resolve(figure + ".png")) > 1000, figure);
+            DocumentBuilderFactory factory = DocumentBuilderFactory.newInstance();
+            factory.setFeature("http://apache.org/xml/features/nonvalidating/load-external-dtd", false);
+            Document svg = factory.newDocumentBuilder().parse(out.resolve(figure + ".svg").toFile());
+            assertEquals("svg", svg.getDocumentElement().getNodeName(), figure);
+        }
+        String bifurcation = Files.readString(out.resolve("bifurcation.svg"));
+        assertTrue(bifurcation.contains("branch point (pitchfork)"), "the special point is labelled in the SVG");
+    }
+
+    @Test
+    void unknownParameterIsExplained() {
+        StringWriter err = new StringWriter();
+        int code = FatefieldCommand.execute(new PrintWriter(new StringWriter()), new PrintWriter(err), "analyze", "demo",
+                "--parameter", "speed", "--out", tmp.resolve("x").toString());
+        assertNotEquals(0, code);
+        assertTrue(err.toString().contains("Lum.repression"), err.toString());
+        assertTrue(Files.notExists(tmp.resolve("x")));
+    }
+}
