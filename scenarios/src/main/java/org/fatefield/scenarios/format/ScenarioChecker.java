@@ -20,12 +20,27 @@ import org.tomlj.TomlTable;
  */
 final class ScenarioChecker {
 
+    /** What a checked file may hold. */
+    enum Scope {
+        /** A whole scenario. */
+        SCENARIO,
+        /** A circuit file included by a scenario: only {@code [circuit]} and its sub-sections. */
+        CIRCUIT_FILE
+    }
+
     private final String file;
+    private final Scope scope;
     private final List<Problem> problems = new ArrayList<>();
     private TomlParseResult toml;
+    private boolean circuitIncluded;
 
     ScenarioChecker(String file) {
+        this(file, Scope.SCENARIO);
+    }
+
+    ScenarioChecker(String file, Scope scope) {
         this.file = file;
+        this.scope = scope;
     }
 
     /** Parses and checks {@code text}; returns the parse result (null after a syntax error). */
@@ -40,8 +55,13 @@ final class ScenarioChecker {
             }
             return null;
         }
-        Set<String> roots = ScenarioSchema.sections().stream()
+        Set<String> roots = ScenarioSchema.sections().stream().filter(this::inScope)
                 .map(s -> s.path().split("\\.")[0]).collect(Collectors.toCollection(java.util.LinkedHashSet::new));
+        circuitIncluded = scope == Scope.SCENARIO && toml.contains("circuit.file");
+        if (scope == Scope.CIRCUIT_FILE && toml.contains("circuit.file")) {
+            problems.add(at(toml.getTable("circuit"), "file", "circuit.file", null,
+                    "a circuit file cannot include another one"));
+        }
         for (String key : toml.keySet()) {
             if (!roots.contains(key)) {
                 problems.add(at(toml, key, key, null, "unknown section" + suggestion(key, roots)
@@ -49,9 +69,45 @@ final class ScenarioChecker {
             }
         }
         for (Section section : ScenarioSchema.sections()) {
-            checkSection(section);
+            if (!inScope(section)) {
+                continue;
+            }
+            if (circuitIncluded && section.path().startsWith("circuit")) {
+                checkIncludeOnly(section);
+            } else {
+                checkSection(section);
+            }
         }
         return toml;
+    }
+
+    private boolean inScope(Section section) {
+        return scope == Scope.SCENARIO || section.path().startsWith("circuit");
+    }
+
+    /** With {@code circuit.file}, the scenario's own [circuit] holds nothing else. */
+    private void checkIncludeOnly(Section section) {
+        if (!section.path().equals("circuit")) {
+            if (toml.get(section.path()) != null) {
+                problems.add(at(toml, section.path(), section.path(), null,
+                        "belongs in the circuit file named by circuit.file, not in the scenario"));
+            }
+            return;
+        }
+        TomlTable circuit = toml.getTable("circuit");
+        for (String key : circuit.keySet()) {
+            if (key.equals("file")) {
+                checkValue(section.key("file").orElseThrow(), circuit, key, "circuit.file");
+            } else if (!circuit.isTable(key) && !circuit.isArray(key)) {
+                problems.add(at(circuit, key, "circuit." + key, render(circuit.get(key)),
+                        "belongs in the circuit file named by circuit.file, not in the scenario"));
+            }
+        }
+    }
+
+    /** True if the scenario takes its circuit from another file. */
+    boolean circuitIncluded() {
+        return circuitIncluded;
     }
 
     List<Problem> problems() {

@@ -41,11 +41,14 @@ final class ScenarioCompiler {
     private final List<Problem> problems = new ArrayList<>();
     private final TomlValues values;
 
-    ScenarioCompiler(String file, TomlParseResult toml, ScenarioChecker locator) {
+    private final CircuitDocument circuitDocument;
+
+    ScenarioCompiler(String file, TomlParseResult toml, ScenarioChecker locator, CircuitDocument circuitDocument) {
         this.file = file;
         this.toml = toml;
         this.locator = locator;
         this.values = new TomlValues(file, locator, problems);
+        this.circuitDocument = circuitDocument;
     }
 
     List<Problem> problems() {
@@ -77,7 +80,8 @@ final class ScenarioCompiler {
             values.fail(tissue, "tissue", "repulsion", "repulsion * run.step = " + repulsion * step
                     + " makes the mechanics unstable; keep it below 0.5 (lower repulsion or run.step)");
         }
-        CircuitSetup circuit = new CircuitCompiler(toml, values).compile();
+        CircuitSetup circuit = new CircuitCompiler(circuitDocument.toml(),
+                new TomlValues(circuitDocument.label(), circuitDocument.locator(), problems)).compile();
         MorphogenSpec morphogen = morphogen(width, height);
         ParameterMapping mapping = mapping(circuit);
         FateClassifier fates = fates(circuit);

@@ -34,7 +34,13 @@ public final class ScenarioReader {
                     "cannot read the file: " + e.getMessage())));
         }
         String fallbackName = path.getFileName().toString().replaceFirst("\\.toml$", "");
-        return parse(path.toString(), fallbackName, bytes);
+        Path folder = path.toAbsolutePath().getParent();
+        return parse(path.toString(), fallbackName, bytes, folder);
+    }
+
+    /** Validates scenario text that cannot include a circuit file (no folder to find it in). */
+    public static Scenario parse(String label, String fallbackName, byte[] bytes) throws ScenarioException {
+        return parse(label, fallbackName, bytes, null);
     }
 
     /**
@@ -43,8 +49,9 @@ public final class ScenarioReader {
      * @param label        how the file is named in messages and provenance
      * @param fallbackName scenario name when the file gives none
      * @param bytes        the file's UTF-8 bytes
+     * @param folder       folder a {@code circuit.file} is looked up in, or null if none may be included
      */
-    public static Scenario parse(String label, String fallbackName, byte[] bytes) throws ScenarioException {
+    public static Scenario parse(String label, String fallbackName, byte[] bytes, Path folder) throws ScenarioException {
         String text = new String(bytes, StandardCharsets.UTF_8);
         ScenarioChecker checker = new ScenarioChecker(label);
         TomlParseResult toml = checker.check(text);
@@ -52,10 +59,18 @@ public final class ScenarioReader {
         if (toml == null) {
             throw new ScenarioException(sorted(problems));
         }
-        ScenarioCompiler compiler = new ScenarioCompiler(label, toml, checker);
+        CircuitDocument circuit = new CircuitDocument(label, toml, checker, bytes);
+        if (checker.circuitIncluded() && problems.isEmpty()) {
+            circuit = CircuitDocument.include(label, toml, folder, problems);
+            if (circuit == null) {
+                throw new ScenarioException(sorted(problems));
+            }
+        }
+        byte[] provenance = circuit.bytes() == bytes ? bytes : concat(bytes, circuit.bytes());
+        ScenarioCompiler compiler = new ScenarioCompiler(label, toml, checker, circuit);
         Scenario scenario = null;
         try {
-            scenario = compiler.compile(fallbackName, sha256(bytes));
+            scenario = compiler.compile(fallbackName, sha256(provenance));
         } catch (RuntimeException e) {
             if (problems.isEmpty()) {
                 throw e;
@@ -84,6 +99,12 @@ public final class ScenarioReader {
 
     private static int lineKey(Problem p) {
         return p.line() == 0 ? Integer.MAX_VALUE : p.line();
+    }
+
+    private static byte[] concat(byte[] a, byte[] b) {
+        byte[] out = java.util.Arrays.copyOf(a, a.length + b.length);
+        System.arraycopy(b, 0, out, a.length, b.length);
+        return out;
     }
 
     static String sha256(byte[] bytes) {

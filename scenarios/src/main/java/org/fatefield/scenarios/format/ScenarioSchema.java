@@ -60,6 +60,9 @@ public final class ScenarioSchema {
                                     + " probability 1/2) or equal (exact halves: no partitioning noise)")),
                     "growth and division"),
             new Section("circuit", false, true, List.of(
+                    Key.of("file", KeyType.TEXT, "", "none",
+                            "a circuit file (TOML holding [circuit] and its sub-sections) in this scenario's folder;"
+                                    + " when given, [circuit] holds nothing else"),
                     Key.choice("type", null, List.of(SWITCH, HILL_NETWORK, CUSTOM),
                             "the circuit family: the two-gene self-activating switch, a general n-gene Hill network,"
                                     + " or a custom circuit of reactions with rate laws"),

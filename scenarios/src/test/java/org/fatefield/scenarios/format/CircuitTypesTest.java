@@ -123,6 +123,32 @@ class CircuitTypesTest {
     }
 
     @Test
+    void aCircuitFileCanBeIncluded(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir) throws Exception {
+        java.nio.file.Files.writeString(dir.resolve("lum-ark.toml"), CUSTOM_CIRCUIT);
+        java.nio.file.Path scenario = dir.resolve("fold.toml");
+        java.nio.file.Files.writeString(scenario, demoWithCircuit("[circuit]\nfile = \"lum-ark.toml\"\n"));
+        Scenario s = ScenarioReader.read(scenario);
+        assertTrue(s.tissue().circuit().network() instanceof CustomNetwork);
+        assertEquals(List.of("Lum", "Ark"), s.tissue().circuit().network().speciesNames());
+
+        java.nio.file.Files.writeString(dir.resolve("lum-ark.toml"), CUSTOM_CIRCUIT.replace("d = 1.0", "d = \"one\""));
+        ScenarioException bad = assertThrows(ScenarioException.class, () -> ScenarioReader.read(scenario));
+        Problem p = bad.problems().get(0);
+        assertTrue(p.file().endsWith("lum-ark.toml"), p.format());
+        assertEquals("circuit.parameters.d", p.keyPath());
+        assertEquals(List.of(CUSTOM_CIRCUIT.split("\n")).indexOf("d = 1.0") + 1, p.line());
+
+        java.nio.file.Files.writeString(scenario, demoWithCircuit("[circuit]\nfile = \"../elsewhere.toml\"\n"));
+        ScenarioException outside = assertThrows(ScenarioException.class, () -> ScenarioReader.read(scenario));
+        assertTrue(outside.getMessage().contains("in this scenario's folder"), outside.getMessage());
+
+        java.nio.file.Files.writeString(scenario,
+                demoWithCircuit("[circuit]\nfile = \"lum-ark.toml\"\nnoise = \"none\"\n"));
+        ScenarioException mixed = assertThrows(ScenarioException.class, () -> ScenarioReader.read(scenario));
+        assertTrue(mixed.problems().stream().anyMatch(q -> q.keyPath().equals("circuit.noise")), mixed.getMessage());
+    }
+
+    @Test
     void sectionsOfAnotherTypeAreRejected() {
         String text = demoWithCircuit(CUSTOM_CIRCUIT.replace("type = \"custom\"", "type = \"self-activating-switch\""));
         ScenarioException e = assertThrows(ScenarioException.class, () -> read(text));

@@ -1,0 +1,54 @@
+package org.fatefield.scenarios.format;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.tomlj.TomlParseResult;
+
+/**
+ * Where a scenario's circuit is written: in the scenario itself, or in a circuit file it names
+ * with {@code circuit.file}. An included file must sit in the scenario's folder (or below it), end
+ * in {@code .toml} and hold only {@code [circuit]} and its sub-sections; it is read as data, like
+ * the scenario.
+ *
+ * @param label   the file's name in messages
+ * @param toml    its parse result
+ * @param locator its checker, which locates keys in it
+ * @param bytes   its bytes, for provenance
+ */
+record CircuitDocument(String label, TomlParseResult toml, ScenarioChecker locator, byte[] bytes) {
+
+    /**
+     * Reads and checks the circuit file named by the scenario, or returns null after adding
+     * problems.
+     */
+    static CircuitDocument include(String scenarioLabel, TomlParseResult scenario, Path folder, List<Problem> problems) {
+        String name = scenario.getString("circuit.file");
+        if (folder == null) {
+            problems.add(new Problem(scenarioLabel, scenario.inputPositionOf("circuit.file").line(), 0, "circuit.file",
+                    "\"" + name + "\"", "a built-in scenario cannot include a circuit file"));
+            return null;
+        }
+        Path target = folder.resolve(name).normalize();
+        if (Path.of(name).isAbsolute() || !target.startsWith(folder.normalize()) || !name.endsWith(".toml")) {
+            problems.add(new Problem(scenarioLabel, scenario.inputPositionOf("circuit.file").line(), 0, "circuit.file",
+                    "\"" + name + "\"", "must name a .toml file in this scenario's folder or below it"));
+            return null;
+        }
+        byte[] bytes;
+        try {
+            bytes = Files.readAllBytes(target);
+        } catch (IOException e) {
+            problems.add(new Problem(scenarioLabel, scenario.inputPositionOf("circuit.file").line(), 0, "circuit.file",
+                    "\"" + name + "\"", "cannot read the circuit file " + target + ": " + e.getMessage()));
+            return null;
+        }
+        String label = target.toString();
+        ScenarioChecker checker = new ScenarioChecker(label, ScenarioChecker.Scope.CIRCUIT_FILE);
+        TomlParseResult toml = checker.check(new String(bytes, StandardCharsets.UTF_8));
+        problems.addAll(checker.problems());
+        return toml == null || !checker.problems().isEmpty() ? null : new CircuitDocument(label, toml, checker, bytes);
+    }
+}
