@@ -46,6 +46,16 @@ class RungeKutta4StepperTest {
         assertEquals(end.getPrimaryState()[0], x[0], 1e-8);
         assertEquals(end.getPrimaryState()[1], x[1], 1e-8);
 
+        // Langevin with the noise switched off (a huge system size) is explicit Euler: error O(dt).
+        double[] z = x0.clone();
+        LangevinStepper euler = LangevinStepper.of(circuit, 1e30);
+        org.apache.commons.rng.UniformRandomProvider rng = org.fatefield.circuits.random.RandomStreams.of(1).stream(1);
+        for (int i = 0; i < 50_000; i++) {
+            euler.advance(z, p, 1e-4, rng);
+        }
+        assertEquals(end.getPrimaryState()[0], z[0], 1e-4);
+        assertEquals(end.getPrimaryState()[1], z[1], 1e-4);
+
         double[] y = x0.clone();
         DormandPrinceStepper adaptive = DormandPrinceStepper.of(circuit, 1e-11);
         for (int i = 0; i < 5; i++) {

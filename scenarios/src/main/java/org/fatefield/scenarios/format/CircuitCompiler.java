@@ -44,7 +44,8 @@ final class CircuitCompiler {
         ReactionNetwork network = switch (type) {
             case ScenarioSchema.HILL_NETWORK -> hillNetwork(table);
             case ScenarioSchema.CUSTOM -> custom(table);
-            default -> selfActivatingSwitch(table);
+            case ScenarioSchema.TOGGLE -> selfActivatingSwitch(table, true);
+            default -> selfActivatingSwitch(table, false);
         };
         if (network == null) {
             return null;
@@ -66,7 +67,8 @@ final class CircuitCompiler {
         Map<String, String> owner = Map.of("kinetics", ScenarioSchema.SWITCH, "network", ScenarioSchema.HILL_NETWORK,
                 "parameters", ScenarioSchema.CUSTOM, "reaction", ScenarioSchema.CUSTOM, "species", ScenarioSchema.CUSTOM);
         for (Map.Entry<String, String> e : owner.entrySet()) {
-            if (table.contains(e.getKey()) && !e.getValue().equals(type)) {
+            boolean toggleKinetics = e.getKey().equals("kinetics") && type.equals(ScenarioSchema.TOGGLE);
+            if (table.contains(e.getKey()) && !e.getValue().equals(type) && !toggleKinetics) {
                 values.problem(table, e.getKey(), "circuit." + e.getKey(), null,
                         "belongs to circuit.type = \"" + e.getValue() + "\", but this circuit is \"" + type + "\"");
             }
@@ -89,12 +91,20 @@ final class CircuitCompiler {
         return genes;
     }
 
-    private ReactionNetwork selfActivatingSwitch(TomlTable table) {
+    private ReactionNetwork selfActivatingSwitch(TomlTable table, boolean toggle) {
         List<String> genes = geneNames(table, 2);
         if (genes == null) {
             return null;
         }
         TomlTable shared = toml.getTableOrEmpty("circuit.kinetics");
+        if (toggle) {
+            rejectSelfKeys(shared, "circuit.kinetics");
+            for (String g : genes) {
+                if (shared.isTable(g)) {
+                    rejectSelfKeys(shared.getTable(g), "circuit.kinetics." + g);
+                }
+            }
+        }
         for (String key : shared.keySet()) {
             if (shared.isTable(key) && !genes.contains(key)) {
                 values.problem(shared, key, "circuit.kinetics." + key, null,
@@ -112,10 +122,22 @@ final class CircuitCompiler {
                     value = ScenarioChecker.asNumber(shared.get(key.name()));
                 }
                 v[k] = value != null && key.inRange(value) ? value : Double.parseDouble(key.defaultValue());
+                if (toggle && key.name().equals("self_activation")) {
+                    v[k] = 0.0;
+                }
             }
             kinetics[g] = GeneKinetics.fromArray(v, 0);
         }
         return SelfActivatingSwitch.of(genes.get(0), genes.get(1), kinetics[0], kinetics[1]);
+    }
+
+    private void rejectSelfKeys(TomlTable kinetics, String path) {
+        for (String key : kinetics.keySet()) {
+            if (key.startsWith("self_")) {
+                values.problem(kinetics, key, path + "." + key, ScenarioChecker.render(kinetics.get(key)),
+                        "a toggle has no self-activation; use circuit.type = \"self-activating-switch\" for it");
+            }
+        }
     }
 
     private ReactionNetwork hillNetwork(TomlTable table) {

@@ -14,6 +14,8 @@ public final class ScenarioSchema {
 
     /** Words of {@code circuit.type}. */
     public static final String SWITCH = "self-activating-switch";
+    /** The pure mutual-repression toggle: the switch without self-activation. */
+    public static final String TOGGLE = "toggle";
     /** The general n-gene Hill network. */
     public static final String HILL_NETWORK = "hill-network";
     /** A circuit written as reactions with rate laws. */
@@ -63,9 +65,10 @@ public final class ScenarioSchema {
                     Key.of("file", KeyType.TEXT, "", "none",
                             "a circuit file (TOML holding [circuit] and its sub-sections) in this scenario's folder;"
                                     + " when given, [circuit] holds nothing else"),
-                    Key.choice("type", null, List.of(SWITCH, HILL_NETWORK, CUSTOM),
-                            "the circuit family: the two-gene self-activating switch, a general n-gene Hill network,"
-                                    + " or a custom circuit of reactions with rate laws"),
+                    Key.choice("type", null, List.of(SWITCH, TOGGLE, HILL_NETWORK, CUSTOM),
+                            "the circuit family: the two-gene self-activating switch, the toggle (the same without"
+                                    + " self-activation; [circuit.kinetics] without the self_ keys), a general n-gene"
+                                    + " Hill network, or a custom circuit of reactions with rate laws"),
                     Key.of("genes", KeyType.NAMES, "", "[\"A\", \"B\"]",
                             "names of the genes (two for the switch, any number for a Hill network)"),
                     Key.of("species", KeyType.NAMES, "", "*required for custom*", "names of the species of a custom circuit"),

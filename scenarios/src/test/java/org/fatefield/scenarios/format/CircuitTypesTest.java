@@ -149,6 +149,18 @@ class CircuitTypesTest {
     }
 
     @Test
+    void toggleIsTheSwitchWithoutSelfActivation() throws ScenarioException {
+        String demo = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8);
+        String toggle = demo.replace("type = \"self-activating-switch\"", "type = \"toggle\"")
+                .replace("self_activation = 0.2\n", "").replace("self_threshold = 0.5\n", "").replace("self_hill = 4\n", "");
+        ReactionNetwork network = read(toggle).tissue().circuit().network();
+        assertEquals(0.0, network.defaultParameters()[network.parameterIndex("Lum.self_activation")], 0.0);
+        ScenarioException e = assertThrows(ScenarioException.class,
+                () -> read(demo.replace("type = \"self-activating-switch\"", "type = \"toggle\"")));
+        assertTrue(e.getMessage().contains("a toggle has no self-activation"), e.getMessage());
+    }
+
+    @Test
     void sectionsOfAnotherTypeAreRejected() {
         String text = demoWithCircuit(CUSTOM_CIRCUIT.replace("type = \"custom\"", "type = \"self-activating-switch\""));
         ScenarioException e = assertThrows(ScenarioException.class, () -> read(text));
