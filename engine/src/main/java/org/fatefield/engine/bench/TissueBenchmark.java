@@ -40,6 +40,11 @@ public final class TissueBenchmark {
      * the median of {@code repeats} timings of {@code steps} steps each.
      */
     public static Result measure(TissueSpec template, int cells, int steps, int repeats, long seed) {
+        return measure(template, cells, steps, repeats, seed, 1);
+    }
+
+    /** As {@link #measure(TissueSpec, int, int, int, long)}, the tissue stepped on {@code threads} threads. */
+    public static Result measure(TissueSpec template, int cells, int steps, int repeats, long seed, int threads) {
         double scale = Math.sqrt((double) cells / template.growth().initialCells());
         double width = template.width() * scale;
         double height = template.height() * scale;
@@ -48,7 +53,7 @@ public final class TissueBenchmark {
         double dt = template.timing().step();
         TissueSpec spec = new TissueSpec(template.circuit(), template.mapping(), template.morphogen(), width, height,
                 growth, template.fates(), new Timing(dt * (repeats + 1) * steps * 3, dt, dt * steps));
-        Tissue tissue = new Tissue(spec, seed);
+        Tissue tissue = new Tissue(spec, seed, threads);
         tissue.start();
         SignalCoupling coupling = template.mapping().couplings().get(0);
         BareSwitchLoop bare = new BareSwitchLoop(cells, template.mapping().base(), template.circuit().systemSize(),
@@ -82,6 +87,7 @@ public final class TissueBenchmark {
         if (Double.isNaN(sink)) {
             throw new IllegalStateException("benchmark state became NaN");
         }
+        tissue.finish();
         return new Result(tissue.cells().size(), median(tick), median(cellsOnly), median(bareLoop));
     }
 

@@ -1,5 +1,7 @@
 package org.fatefield.engine.field;
 
+import org.fatefield.engine.parallel.BlockParallel;
+
 /**
  * A morphogen concentration on a cell-centred square grid, advanced by the explicit
  * (forward-time, centred-space) scheme for {@code dc/dt = D lap(c) - k c + s(x)} with no-flux
@@ -67,21 +69,34 @@ public final class MorphogenField {
         return Math.max(1, (int) Math.ceil(dt / (SAFETY * stableStepLimit())));
     }
 
-    /** Advances the field by {@code dt} hours in stable sub-steps. */
+    /** Advances the field by {@code dt} hours in stable sub-steps, on the caller's thread. */
     public void advance(double dt) {
-        int steps = subStepsFor(dt);
-        double tau = dt / steps;
-        for (int s = 0; s < steps; s++) {
-            explicitStep(tau);
+        try (BlockParallel serial = new BlockParallel(1)) {
+            advance(dt, serial);
         }
     }
 
-    private void explicitStep(double tau) {
+    /**
+     * Advances the field by {@code dt} hours in stable sub-steps, rows split among the pool's
+     * workers (each row's update reads only the previous buffer, so the result is the same for any
+     * number of workers).
+     */
+    public void advance(double dt, BlockParallel pool) {
+        int steps = subStepsFor(dt);
+        double tau = dt / steps;
+        for (int s = 0; s < steps; s++) {
+            double[] c = current;
+            double[] out = next;
+            pool.forEach(ny, (from, to, worker) -> explicitRows(tau, c, out, from, to));
+            current = out;
+            next = c;
+        }
+    }
+
+    private void explicitRows(double tau, double[] c, double[] out, int fromRow, int toRow) {
         double diffusionNumber = spec.diffusion() * tau / (h * h);
         double decayFactor = 1.0 - spec.decay() * tau;
-        double[] c = current;
-        double[] out = next;
-        for (int j = 0; j < ny; j++) {
+        for (int j = fromRow; j < toRow; j++) {
             int row = j * nx;
             int down = j > 0 ? row - nx : row;
             int up = j < ny - 1 ? row + nx : row;
@@ -94,8 +109,6 @@ public final class MorphogenField {
                 out[k] = decayFactor * centre + diffusionNumber * laplacian + tau * synthesis[k];
             }
         }
-        current = out;
-        next = c;
     }
 
     /**

@@ -3,6 +3,7 @@ package org.fatefield.engine.mechanics;
 import java.util.Arrays;
 import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.cell.CellPopulation;
+import org.fatefield.engine.parallel.BlockParallel;
 
 /**
  * Overdamped relaxation of overlapping discs inside a rectangle with walls.
@@ -43,22 +44,47 @@ public final class OverlapRepulsion {
         this.newbornRadius = newbornRadius;
     }
 
-    /** Moves every cell by one overdamped step of {@code dt} hours. */
+    /** Moves every cell by one overdamped step of {@code dt} hours, on the caller's thread. */
     public void relax(CellPopulation population, double dt) {
+        try (BlockParallel serial = new BlockParallel(1)) {
+            relax(population, dt, serial);
+        }
+    }
+
+    /**
+     * Moves every cell by one overdamped step of {@code dt} hours; the forces on disjoint blocks
+     * of cells are computed in parallel from the same snapshot, so the result does not depend on
+     * the number of workers.
+     */
+    public void relax(CellPopulation population, double dt, BlockParallel pool) {
         int n = population.size();
         ensureCapacity(n);
-        for (int i = 0; i < n; i++) {
-            Cell c = population.get(i);
-            px[i] = c.x();
-            py[i] = c.y();
-            pr[i] = c.radius(newbornRadius);
-        }
+        pool.forEach(n, (from, to, worker) -> {
+            for (int i = from; i < to; i++) {
+                Cell c = population.get(i);
+                px[i] = c.x();
+                py[i] = c.y();
+                pr[i] = c.radius(newbornRadius);
+            }
+        });
         double side = 2.0 * Math.sqrt(2.0) * newbornRadius;
         int gx = Math.max(1, (int) Math.ceil(width / side));
         int gy = Math.max(1, (int) Math.ceil(height / side));
         fillBuckets(n, gx, gy, side);
         double step = 0.5 * rate * dt;
-        for (int i = 0; i < n; i++) {
+        pool.forEach(n, (from, to, worker) -> forces(from, to, gx, gy, side, step));
+        pool.forEach(n, (from, to, worker) -> {
+            for (int i = from; i < to; i++) {
+                double r = Math.min(pr[i], 0.5 * Math.min(width, height));
+                double nxp = Math.min(Math.max(px[i] + dx[i], r), width - r);
+                double nyp = Math.min(Math.max(py[i] + dy[i], r), height - r);
+                population.get(i).moveTo(nxp, nyp);
+            }
+        });
+    }
+
+    private void forces(int from, int to, int gx, int gy, double side, double step) {
+        for (int i = from; i < to; i++) {
             double fx = 0;
             double fy = 0;
             int bx = bucketOf(px[i], side, gx);
@@ -92,12 +118,6 @@ public final class OverlapRepulsion {
             }
             dx[i] = step * fx;
             dy[i] = step * fy;
-        }
-        for (int i = 0; i < n; i++) {
-            double r = Math.min(pr[i], 0.5 * Math.min(width, height));
-            double nxp = Math.min(Math.max(px[i] + dx[i], r), width - r);
-            double nyp = Math.min(Math.max(py[i] + dy[i], r), height - r);
-            population.get(i).moveTo(nxp, nyp);
         }
     }
 

@@ -9,6 +9,7 @@ import org.fatefield.engine.cell.CellPopulation;
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.field.MorphogenField;
 import org.fatefield.engine.mechanics.OverlapRepulsion;
+import org.fatefield.engine.parallel.BlockParallel;
 import org.fatefield.engine.record.TimeSeries;
 import sim.engine.Schedule;
 import sim.engine.SimState;
@@ -37,19 +38,32 @@ public final class Tissue extends SimState {
     private CellPopulation population;
     private MorphogenField field;
     private TimeSeries series;
-    private CircuitStepper stepper;
+    private final int threads;
+    private BlockParallel pool;
+    private CircuitStepper[] steppers;
     private OverlapRepulsion mechanics;
-    private double[] params;
+    private double[][] params;
     private double[] firstDaughter;
     private double[] secondDaughter;
     private long steps;
     private double blockSide;
 
-    /** A tissue following {@code spec}, reproducible from {@code seed}. */
+    /** A tissue following {@code spec}, reproducible from {@code seed}, stepped on one thread. */
     public Tissue(TissueSpec spec, long seed) {
+        this(spec, seed, 1);
+    }
+
+    /**
+     * A tissue stepped on {@code threads} threads; the result is the same for any thread count.
+     */
+    public Tissue(TissueSpec spec, long seed, int threads) {
         super(seed);
+        if (threads < 1) {
+            throw new IllegalArgumentException("threads must be at least 1, got " + threads);
+        }
         this.spec = spec;
         this.streams = RandomStreams.of(seed);
+        this.threads = threads;
     }
 
     @Override
@@ -60,9 +74,18 @@ public final class Tissue extends SimState {
         population = new CellPopulation();
         field = new MorphogenField(spec.morphogen(), spec.width(), spec.height());
         series = new TimeSeries(spec.fates().fateNames());
-        stepper = circuit.noise().stepper(circuit.network(), circuit.systemSize());
+        if (pool != null) {
+            pool.close();
+        }
+        pool = new BlockParallel(threads);
+        steppers = new CircuitStepper[threads];
+        params = new double[threads][];
+        CircuitStepper prototype = circuit.noise().stepper(circuit.network(), circuit.systemSize());
+        for (int w = 0; w < threads; w++) {
+            steppers[w] = w == 0 ? prototype : prototype.copy();
+            params[w] = spec.mapping().base();
+        }
         mechanics = new OverlapRepulsion(spec.width(), spec.height(), growth.repulsionRate(), growth.cellRadius());
-        params = spec.mapping().base();
         int species = circuit.network().speciesCount();
         firstDaughter = new double[species];
         secondDaughter = new double[species];
@@ -87,11 +110,11 @@ public final class Tissue extends SimState {
     /** One time step; called by {@link TissueTick}. */
     void tick() {
         double dt = spec.timing().step();
-        field.advance(dt);
+        field.advance(dt, pool);
         stepCells(dt);
         steps++;
         divide();
-        mechanics.relax(population, dt);
+        mechanics.relax(population, dt, pool);
         if (steps % REORDER_EVERY == 0) {
             population.sortByBlock(blockSide, spec.width(), spec.height());
         }
@@ -101,19 +124,21 @@ public final class Tissue extends SimState {
     }
 
     private void stepCells(double dt) {
-        int n = population.size();
         MorphogenField morphogen = field;
         ParameterMapping mapping = spec.mapping();
-        CircuitStepper circuit = stepper;
-        double[] p = params;
-        for (int i = 0; i < n; i++) {
-            Cell cell = population.get(i);
-            double c = morphogen.sample(cell.x(), cell.y());
-            cell.setSignal(c);
-            mapping.applySignal(c, p);
-            circuit.advance(cell.liveState(), p, dt, cell.random());
-            cell.grow(dt);
-        }
+        CellPopulation cells = population;
+        pool.forEach(cells.size(), (from, to, worker) -> {
+            CircuitStepper circuit = steppers[worker];
+            double[] p = params[worker];
+            for (int i = from; i < to; i++) {
+                Cell cell = cells.get(i);
+                double c = morphogen.sample(cell.x(), cell.y());
+                cell.setSignal(c);
+                mapping.applySignal(c, p);
+                circuit.advance(cell.liveState(), p, dt, cell.random());
+                cell.grow(dt);
+            }
+        });
     }
 
     private void divide() {
@@ -172,6 +197,21 @@ public final class Tissue extends SimState {
         while (!finished()) {
             schedule.step(this);
         }
+    }
+
+    /** Stops the worker threads (also stopped by {@link #start()} before new ones). */
+    @Override
+    public void finish() {
+        super.finish();
+        if (pool != null) {
+            pool.close();
+            pool = null;
+        }
+    }
+
+    /** Threads the cells are stepped on. */
+    public int threads() {
+        return threads;
     }
 
     /** True once the run's duration has been simulated. */

@@ -79,6 +79,37 @@ class TissueTest {
     }
 
     @Test
+    void resultsAreBitIdenticalForOneTwoAndFourThreads() {
+        // Each cell draws only from its own stream and forces come from one snapshot, so the
+        // thread count must not change a single bit (the design's promise).
+        CycleTimeDistribution gamma = new CycleTimeDistribution(CycleTimeDistribution.Kind.GAMMA, 2.0, 0.3);
+        List<Tissue> runs = new java.util.ArrayList<>();
+        for (int threads : new int[] {1, 2, 4}) {
+            Tissue t = new Tissue(spec(300, new double[] {0.5, 0.5}, gamma, 5.0, 60.0), 31, threads);
+            t.start();
+            t.runToEnd();
+            t.finish();
+            runs.add(t);
+        }
+        Tissue serial = runs.get(0);
+        assertTrue(serial.cells().size() > 1000);
+        for (Tissue other : runs.subList(1, runs.size())) {
+            assertEquals(serial.cells().size(), other.cells().size());
+            for (int i = 0; i < serial.cells().size(); i++) {
+                Cell a = serial.cells().get(i);
+                Cell b = other.cells().get(i);
+                assertEquals(a.id(), b.id());
+                assertEquals(a.x(), b.x(), 0.0);
+                assertEquals(a.y(), b.y(), 0.0);
+                assertArrayEquals(a.state(), b.state(), 0.0);
+            }
+            for (int r = 0; r < serial.series().rows().size(); r++) {
+                assertArrayEquals(serial.series().rows().get(r).fateCounts(), other.series().rows().get(r).fateCounts());
+            }
+        }
+    }
+
+    @Test
     void sameSeedGivesTheSameTissue() {
         CycleTimeDistribution gamma = new CycleTimeDistribution(CycleTimeDistribution.Kind.GAMMA, 3.0, 0.3);
         Tissue first = new Tissue(spec(100, new double[] {0.5, 0.5}, gamma, 6.0, 80.0), 77);

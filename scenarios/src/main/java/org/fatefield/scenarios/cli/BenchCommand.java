@@ -35,6 +35,10 @@ final class BenchCommand implements Callable<Integer> {
             description = "timings per size; the median is reported (default: ${DEFAULT-VALUE})")
     private int repeats;
 
+    @Option(names = "--threads", split = ",", paramLabel = "N", defaultValue = "1,2",
+            description = "thread counts for the tissue (default: ${DEFAULT-VALUE}); the bare loop runs on one")
+    private List<Integer> threadCounts;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
@@ -55,15 +59,22 @@ final class BenchCommand implements Callable<Integer> {
         out.printf("Fatefield benchmark, scenario %s, Java %s, %d processors; median of %d timings of %d steps%n",
                 loaded.name(), System.getProperty("java.version"), Runtime.getRuntime().availableProcessors(),
                 repeats, steps);
-        out.printf("%10s %18s %18s %18s %12s%n", "cells", "full tick /s", "cell loop /s", "bare loop /s",
-                "loop/bare");
+        out.printf("%10s %8s %16s %16s %16s %10s %10s%n", "cells", "threads", "full tick /s", "cell loop /s",
+                "bare loop /s", "loop/bare", "speed-up");
         for (int cells : sizes) {
-            TissueBenchmark.Result r = TissueBenchmark.measure(loaded.tissue(), cells, steps, repeats, 1L);
-            out.printf("%10d %18.4g %18.4g %18.4g %12.2f%n", r.cells(), r.tickRate(), r.cellStepRate(), r.bareRate(),
-                    r.ratio());
-            out.flush();
+            double single = Double.NaN;
+            for (int threads : threadCounts) {
+                TissueBenchmark.Result r = TissueBenchmark.measure(loaded.tissue(), cells, steps, repeats, 1L, threads);
+                if (Double.isNaN(single)) {
+                    single = r.tickRate();
+                }
+                out.printf("%10d %8d %16.4g %16.4g %16.4g %10.2f %10.2f%n", r.cells(), threads, r.tickRate(),
+                        r.cellStepRate(), r.bareRate(), r.ratio(), r.tickRate() / single);
+                out.flush();
+            }
         }
-        out.println("Rates are cell-steps per second on one thread. loop/bare = 1 means no overhead over the bare loop.");
+        out.println("Rates are cell-steps per second. loop/bare = 1 means no overhead over the one-thread bare loop;"
+                + " speed-up is the full tick against the first thread count.");
         if (loaded.tissue().circuit().network() instanceof SelfActivatingSwitch sw) {
             SignalCoupling c = loaded.tissue().mapping().couplings().get(0);
             CircuitBenchmark.Result r = CircuitBenchmark.measure(sw, loaded.tissue().circuit().systemSize(),

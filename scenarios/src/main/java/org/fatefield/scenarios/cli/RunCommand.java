@@ -36,6 +36,10 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--force", description = "overwrite the run files in an output folder that already holds files")
     private boolean force;
 
+    @Option(names = "--threads", paramLabel = "N", description = "threads to step cells on (default: all processors);"
+            + " results do not depend on it")
+    private Integer threads;
+
     @Option(names = "--quiet", description = "print nothing but errors")
     private boolean quiet;
 
@@ -63,7 +67,12 @@ final class RunCommand implements Callable<Integer> {
         Progress progress = quiet ? Progress.silent()
                 : Progress.forConsole(loaded.name(), loaded.tissue().timing().totalSteps(), System.err);
         try {
-            Tissue tissue = ScenarioRunner.run(loaded, runSeed, folder, force, progress);
+            int workers = threads != null ? threads : Runtime.getRuntime().availableProcessors();
+            if (workers < 1) {
+                err.println("--threads must be at least 1, got " + workers);
+                return FatefieldCommand.INVALID_INPUT;
+            }
+            Tissue tissue = ScenarioRunner.run(loaded, runSeed, workers, folder, force, progress);
             if (!quiet) {
                 TimeSeries.Row last = tissue.series().last();
                 List<String> fates = tissue.series().fateNames();

@@ -37,16 +37,17 @@ public final class ScenarioRunner {
     /**
      * Runs {@code scenario} with {@code seed} into folder {@code out}.
      *
-     * @param force overwrite run files in a folder that already holds files
+     * @param threads threads to step cells on (the result does not depend on it)
+     * @param force   overwrite run files in a folder that already holds files
      * @return the finished tissue
      * @throws IOException if the folder may not be used or a file cannot be written
      */
-    public static Tissue run(Scenario scenario, long seed, Path out, boolean force, Progress progress)
+    public static Tissue run(Scenario scenario, long seed, int threads, Path out, boolean force, Progress progress)
             throws IOException {
         RunFolder.checkUsable(out, force);
         Instant started = Instant.now();
         long startNanos = System.nanoTime();
-        Tissue tissue = new Tissue(scenario.tissue(), seed);
+        Tissue tissue = new Tissue(scenario.tissue(), seed, threads);
         tissue.start();
         long total = scenario.tissue().timing().totalSteps();
         try (progress) {
@@ -54,6 +55,8 @@ public final class ScenarioRunner {
                 tissue.schedule.step(tissue);
                 progress.update(tissue.steps(), total);
             }
+        } finally {
+            tissue.finish();
         }
         RunFolder folder = RunFolder.open(out);
         List<String> files = new ArrayList<>();
