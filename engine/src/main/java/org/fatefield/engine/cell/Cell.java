@@ -22,7 +22,10 @@ public final class Cell {
     private double y;
     private double age;
     private double signal;
-    private int fate;
+    private int fate = -1;
+    private double fateSince = Double.NaN;
+    private final double birthX;
+    private final double birthY;
 
     /**
      * @param id         unique id, never reused
@@ -48,6 +51,8 @@ public final class Cell {
         this.x = x;
         this.y = y;
         this.age = age;
+        this.birthX = x;
+        this.birthY = y;
     }
 
     /** Unique id. */
@@ -150,8 +155,29 @@ public final class Cell {
         this.signal = value;
     }
 
-    /** Records the cell's fate index. */
-    public void setFate(int value) {
+    /** Records the cell's fate index at time {@code now}; notes when it last changed. */
+    public void setFate(int value, double now) {
+        if (value != fate) {
+            fateSince = now;
+        }
         this.fate = value;
+    }
+
+    /**
+     * Time since when the cell has had its current fate, as seen at the recordings (the time it
+     * last entered that fate's region of states, to the recording interval); NaN before any.
+     */
+    public double fateSince() {
+        return fateSince;
+    }
+
+    /** Position along x at birth (µm). */
+    public double birthX() {
+        return birthX;
+    }
+
+    /** Position along y at birth (µm). */
+    public double birthY() {
+        return birthY;
     }
 }

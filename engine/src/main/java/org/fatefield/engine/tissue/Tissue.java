@@ -8,6 +8,9 @@ import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.cell.CellPopulation;
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.field.MorphogenField;
+import org.fatefield.engine.lineage.Ancestry;
+import org.fatefield.engine.lineage.LineageRecord;
+import org.fatefield.engine.lineage.LineageSink;
 import org.fatefield.engine.mechanics.OverlapRepulsion;
 import org.fatefield.engine.parallel.BlockParallel;
 import org.fatefield.engine.record.TimeSeries;
@@ -47,6 +50,9 @@ public final class Tissue extends SimState {
     private double[] secondDaughter;
     private long steps;
     private double blockSide;
+    private LineageSink lineage = LineageSink.NONE;
+    private Ancestry ancestry;
+    private boolean lineageClosed;
 
     /** A tissue following {@code spec}, reproducible from {@code seed}, stepped on one thread. */
     public Tissue(TissueSpec spec, long seed) {
@@ -90,6 +96,8 @@ public final class Tissue extends SimState {
         firstDaughter = new double[species];
         secondDaughter = new double[species];
         steps = 0;
+        ancestry = new Ancestry();
+        lineageClosed = false;
         blockSide = 4 * spec.morphogen().gridSpacing();
         UniformRandomProvider placement = streams.stream(PLACEMENT_STREAM);
         double r = growth.cellRadius();
@@ -101,6 +109,7 @@ public final class Tissue extends SimState {
             double cycle = growth.cycle().sample(rng);
             double age = cycle * rng.nextDouble();
             population.add(new Cell(id, -1, 0, -age, cycle, circuit.initialState(), rng, x, y, age));
+            ancestry.add(id, -1);
         }
         population.sortByBlock(blockSide, spec.width(), spec.height());
         record();
@@ -151,6 +160,8 @@ public final class Tissue extends SimState {
             if (!mother.readyToDivide()) {
                 continue;
             }
+            lineage.accept(new LineageRecord(mother.id(), mother.parentId(), mother.generation(), mother.birthTime(),
+                    now, mother.birthX(), mother.birthY(), spec.fates().classify(mother.liveState()), -1, Double.NaN));
             UniformRandomProvider rng = mother.random();
             growth.partition().split(mother.liveState(), spec.circuit().systemSize(), rng, firstDaughter, secondDaughter);
             double angle = 2 * Math.PI * rng.nextDouble();
@@ -163,6 +174,7 @@ public final class Tissue extends SimState {
 
     private Cell daughter(Cell mother, double[] state, double now, double x, double y) {
         long id = population.newId();
+        ancestry.add(id, mother.id());
         UniformRandomProvider rng = streams.stream(id);
         double cycle = spec.growth().cycle().sample(rng);
         double r = spec.growth().cellRadius();
@@ -170,6 +182,7 @@ public final class Tissue extends SimState {
         double cy = Math.min(Math.max(y, r), spec.height() - r);
         Cell cell = new Cell(id, mother.id(), mother.generation() + 1, now, cycle, state.clone(), rng, cx, cy, 0.0);
         cell.setSignal(mother.signal());
+        cell.setFate(mother.fate(), mother.fateSince());
         return cell;
     }
 
@@ -178,7 +191,7 @@ public final class Tissue extends SimState {
         for (Cell cell : population.view()) {
             cell.setSignal(field.sample(cell.x(), cell.y()));
             int fate = spec.fates().classify(cell.liveState());
-            cell.setFate(fate);
+            cell.setFate(fate, time());
             counts[fate]++;
         }
         series.add(new TimeSeries.Row(time(), counts, population.size(), field.mean()));
@@ -197,6 +210,31 @@ public final class Tissue extends SimState {
         while (!finished()) {
             schedule.step(this);
         }
+    }
+
+    /**
+     * Sends lineage records to {@code sink}: one per division as it happens and, on
+     * {@link #closeLineage()}, one per live cell. Set before {@link #start()}.
+     */
+    public void setLineageSink(LineageSink sink) {
+        this.lineage = sink;
+    }
+
+    /** Emits the records of the cells alive now (call once, at the end of a run). */
+    public void closeLineage() {
+        if (lineageClosed) {
+            return;
+        }
+        lineageClosed = true;
+        for (Cell cell : population.view()) {
+            lineage.accept(new LineageRecord(cell.id(), cell.parentId(), cell.generation(), cell.birthTime(),
+                    Double.NaN, cell.birthX(), cell.birthY(), -1, cell.fate(), cell.fateSince()));
+        }
+    }
+
+    /** Mother of every cell ever born. */
+    public Ancestry ancestry() {
+        return ancestry;
     }
 
     /** Stops the worker threads (also stopped by {@link #start()} before new ones). */

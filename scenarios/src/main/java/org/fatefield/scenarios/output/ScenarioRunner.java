@@ -15,8 +15,9 @@ import org.fatefield.viz.tissue.TissueRenderer;
 
 /**
  * Runs a scenario to the end and writes its run folder: {@code timeseries.csv},
- * {@code cells.csv}, {@code fate-proportions.png}, {@code tissue.png} and, last, {@code run.json}
- * (so a folder with {@code run.json} holds a finished run).
+ * {@code cells.csv}, {@code lineage.csv} (streamed during the run), {@code lineage.nwk}, the
+ * metrics of {@link RunMetrics}, {@code fate-proportions.png}, {@code tissue.png} and, last,
+ * {@code run.json} (so a folder with {@code run.json} holds a finished run).
  */
 public final class ScenarioRunner {
 
@@ -48,6 +49,9 @@ public final class ScenarioRunner {
         Instant started = Instant.now();
         long startNanos = System.nanoTime();
         Tissue tissue = new Tissue(scenario.tissue(), seed, threads);
+        RunFolder folder = RunFolder.open(out);
+        LineageFiles lineage = new LineageFiles(out, scenario.tissue().fates().fateNames());
+        tissue.setLineageSink(lineage);
         tissue.start();
         long total = scenario.tissue().timing().totalSteps();
         try (progress) {
@@ -55,11 +59,17 @@ public final class ScenarioRunner {
                 tissue.schedule.step(tissue);
                 progress.update(tissue.steps(), total);
             }
+            tissue.closeLineage();
         } finally {
             tissue.finish();
+            lineage.close();
         }
-        RunFolder folder = RunFolder.open(out);
         List<String> files = new ArrayList<>();
+        files.add(LineageFiles.TABLE);
+        folder.writeText(LineageFiles.TREES, w -> LineageFiles.writeTrees(out.resolve(LineageFiles.TABLE), tissue.time(), w));
+        files.add(LineageFiles.TREES);
+        files.addAll(RunMetrics.of(tissue).write(folder, tissue.series().fateNames(), seed,
+                scenario.tissue().growth().partition().name().toLowerCase(java.util.Locale.ROOT)));
         folder.writeText(TIMESERIES, w -> RunTables.writeTimeSeries(tissue.series(), w));
         files.add(TIMESERIES);
         folder.writeText(CELLS, w -> RunTables.writeCells(tissue, w));

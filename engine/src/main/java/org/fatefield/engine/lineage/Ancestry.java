@@ -1,0 +1,48 @@
+package org.fatefield.engine.lineage;
+
+import java.util.Arrays;
+
+/**
+ * The mother of every cell ever born, by id (ids are dense from 0), kept in memory for lineage
+ * statistics: eight bytes per cell ever born, while the full records go to disk.
+ */
+public final class Ancestry {
+
+    private long[] parent = new long[1024];
+    private long size;
+
+    /** Records that cell {@code id} is a daughter of {@code parentId} (-1 for a founder). */
+    public void add(long id, long parentId) {
+        if (id >= parent.length) {
+            parent = Arrays.copyOf(parent, (int) Math.max(id + 1, 2L * parent.length));
+        }
+        parent[(int) id] = parentId;
+        size = Math.max(size, id + 1);
+    }
+
+    /** The mother of {@code id}, -1 for a founder. */
+    public long parent(long id) {
+        if (id < 0 || id >= size) {
+            throw new IllegalArgumentException("no cell with id " + id);
+        }
+        return parent[(int) id];
+    }
+
+    /** The ancestor {@code k} generations above {@code id} (0: itself), -1 if the lineage is shorter. */
+    public long ancestor(long id, int k) {
+        long a = id;
+        for (int i = 0; i < k && a >= 0; i++) {
+            a = parent(a);
+        }
+        return a;
+    }
+
+    /** The founder of {@code id}'s clone. */
+    public long founder(long id) {
+        long a = id;
+        while (parent(a) >= 0) {
+            a = parent(a);
+        }
+        return a;
+    }
+}

@@ -1,0 +1,19 @@
+package org.fatefield.engine.lineage;
+
+/**
+ * The life of one cell, written when it divides or when the run ends.
+ *
+ * @param id             the cell's id
+ * @param parentId       its mother's id, -1 for a founder
+ * @param generation     divisions since its founder
+ * @param birthTime      time of birth (h; founders were born before time 0)
+ * @param divisionTime   time of division (h), NaN if alive at the end
+ * @param birthX         position at birth (µm)
+ * @param birthY         position at birth (µm)
+ * @param fateAtDivision fate index when it divided, -1 if it did not
+ * @param fateAtEnd      fate index at the end of the run, -1 if it divided
+ * @param commitmentTime time it last entered its final fate (to the recording interval), NaN if unknown
+ */
+public record LineageRecord(long id, long parentId, int generation, double birthTime, double divisionTime,
+        double birthX, double birthY, int fateAtDivision, int fateAtEnd, double commitmentTime) {
+}

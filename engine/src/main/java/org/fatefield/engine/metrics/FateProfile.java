@@ -1,0 +1,92 @@
+package org.fatefield.engine.metrics;
+
+import java.util.List;
+import org.fatefield.engine.cell.Cell;
+
+/**
+ * Fractions of each fate in bins along the gradient axis (x): the pattern a modeler reads off a
+ * tissue, and the input of boundary estimates.
+ *
+ * @param centres   bin centres along x (µm)
+ * @param counts    cells per bin
+ * @param fractions {@code fractions[f][b]}: fraction of bin b's cells in fate f (NaN for empty bins)
+ */
+public record FateProfile(double[] centres, int[] counts, double[][] fractions) {
+
+    /**
+     * Bins {@code [0, width)} into {@code bins} equal bins and counts each fate.
+     *
+     * @param fateCount number of fates (cells' fate indices run below it)
+     */
+    public static FateProfile of(List<Cell> cells, int fateCount, double width, int bins) {
+        if (bins < 2) {
+            throw new IllegalArgumentException("a profile needs at least 2 bins, got " + bins);
+        }
+        double w = width / bins;
+        int[] counts = new int[bins];
+        int[][] byFate = new int[fateCount][bins];
+        for (Cell cell : cells) {
+            int b = Math.min(bins - 1, Math.max(0, (int) (cell.x() / w)));
+            counts[b]++;
+            if (cell.fate() >= 0) {
+                byFate[cell.fate()][b]++;
+            }
+        }
+        return fromCounts(width, counts, byFate);
+    }
+
+    /** Builds a profile from counts per bin ({@code byFate[f][b]}) over {@code [0, width)}. */
+    public static FateProfile fromCounts(double width, int[] counts, int[][] byFate) {
+        int bins = counts.length;
+        double w = width / bins;
+        double[] centres = new double[bins];
+        double[][] fractions = new double[byFate.length][bins];
+        for (int b = 0; b < bins; b++) {
+            centres[b] = (b + 0.5) * w;
+            for (int f = 0; f < byFate.length; f++) {
+                fractions[f][b] = counts[b] == 0 ? Double.NaN : (double) byFate[f][b] / counts[b];
+            }
+        }
+        return new FateProfile(centres, counts.clone(), fractions);
+    }
+
+    /**
+     * Where fate {@code f}'s fraction crosses {@code level}, by linear interpolation between bin
+     * centres (empty bins skipped). With several crossings (noise), the mean of the first and the
+     * last; NaN if there is none.
+     */
+    public double crossing(int f, double level) {
+        double first = Double.NaN;
+        double last = Double.NaN;
+        int previous = -1;
+        for (int b = 0; b < centres.length; b++) {
+            double v = fractions[f][b];
+            if (Double.isNaN(v)) {
+                continue;
+            }
+            if (previous >= 0) {
+                double u = fractions[f][previous];
+                if ((u - level) * (v - level) < 0 || (v == level && u != level)) {
+                    double t = (level - u) / (v - u);
+                    double x = centres[previous] + t * (centres[b] - centres[previous]);
+                    if (Double.isNaN(first)) {
+                        first = x;
+                    }
+                    last = x;
+                }
+            }
+            previous = b;
+        }
+        return Double.isNaN(first) ? Double.NaN : 0.5 * (first + last);
+    }
+
+    /** Boundary of fate {@code f}: where its fraction crosses 1/2. */
+    public double boundary(int f) {
+        return crossing(f, 0.5);
+    }
+
+    /** Width of fate {@code f}'s boundary: distance between its 10% and 90% crossings. */
+    public double width(int f) {
+        return Math.abs(crossing(f, 0.9) - crossing(f, 0.1));
+    }
+}

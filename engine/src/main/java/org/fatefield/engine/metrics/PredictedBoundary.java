@@ -1,0 +1,71 @@
+package org.fatefield.engine.metrics;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.fatefield.circuits.analysis.continuation.Branch;
+import org.fatefield.circuits.analysis.continuation.ContinuationSettings;
+import org.fatefield.circuits.analysis.continuation.EquilibriumContinuation;
+import org.fatefield.circuits.analysis.continuation.NetworkSystem;
+import org.fatefield.circuits.analysis.continuation.SpecialPoint;
+import org.fatefield.circuits.analysis.continuation.SpecialPointType;
+import org.fatefield.engine.coupling.SignalCoupling;
+import org.fatefield.engine.field.MorphogenField;
+import org.fatefield.engine.tissue.TissueSpec;
+
+/**
+ * The boundary the single-cell analysis predicts: the critical values of the control parameter
+ * (folds and branch points of the circuit over the coupling's range, by continuation) and the
+ * positions along x where the local control parameter, from the row-averaged morphogen, crosses
+ * each of them.
+ *
+ * @param criticalValues control-parameter values of the circuit's folds and branch points
+ * @param positions      positions along x (µm) where the local control parameter crosses them (NaN if it does not)
+ */
+public record PredictedBoundary(double[] criticalValues, double[] positions) {
+
+    /** Computes the prediction for the tissue of {@code spec} with morphogen {@code field}. */
+    public static PredictedBoundary of(TissueSpec spec, MorphogenField field) {
+        if (spec.mapping().couplings().isEmpty()) {
+            return new PredictedBoundary(new double[0], new double[0]);
+        }
+        SignalCoupling coupling = spec.mapping().couplings().get(0);
+        double lo = Math.min(coupling.base(), coupling.base() + coupling.gain());
+        double hi = Math.max(coupling.base(), coupling.base() + coupling.gain());
+        NetworkSystem system = new NetworkSystem(spec.circuit().network(), spec.mapping().base(),
+                coupling.parameterIndices());
+        List<Branch> branches = EquilibriumContinuation.of(system,
+                ContinuationSettings.defaults().withMaxStep(Math.max(1e-3, (hi - lo) / 40)))
+                .diagram(spec.circuit().initialState(), lo, lo, hi, true, 2);
+        List<Double> critical = new ArrayList<>();
+        for (Branch b : branches) {
+            for (SpecialPoint s : b.specials()) {
+                boolean relevant = s.type() == SpecialPointType.SADDLE_NODE || s.type() == SpecialPointType.BRANCH_POINT;
+                if (relevant && critical.stream().noneMatch(c -> Math.abs(c - s.parameter()) < 1e-6)) {
+                    critical.add(s.parameter());
+                }
+            }
+        }
+        double[] values = critical.stream().mapToDouble(Double::doubleValue).sorted().toArray();
+        double[] control = new double[field.columns()];
+        for (int i = 0; i < field.columns(); i++) {
+            double sum = 0;
+            for (int j = 0; j < field.rows(); j++) {
+                sum += field.value(i, j);
+            }
+            control[i] = spec.mapping().controlAt(sum / field.rows());
+        }
+        double[] positions = new double[values.length];
+        for (int k = 0; k < values.length; k++) {
+            positions[k] = Double.NaN;
+            for (int i = 0; i + 1 < control.length; i++) {
+                double a = control[i] - values[k];
+                double b = control[i + 1] - values[k];
+                if (a * b <= 0 && a != b) {
+                    positions[k] = (i + 0.5 + a / (a - b)) * field.spacing();
+                    break;
+                }
+            }
+        }
+        return new PredictedBoundary(values, positions);
+    }
+}

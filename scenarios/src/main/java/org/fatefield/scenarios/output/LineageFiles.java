@@ -1,0 +1,138 @@
+package org.fatefield.scenarios.output;
+
+import java.io.BufferedWriter;
+import java.io.IOException;
+import java.io.Reader;
+import java.io.UncheckedIOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Deque;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVRecord;
+import org.fatefield.engine.lineage.LineageRecord;
+import org.fatefield.engine.lineage.LineageSink;
+import org.fatefield.engine.record.RunTables;
+
+/**
+ * {@code lineage.csv}, streamed to disk as cells divide (so memory does not grow with history;
+ * written under a temporary name and renamed when complete), and {@code lineage.nwk}, the family
+ * trees in Newick format, one tree per founder, labelled {@code c<id>_<fate>} with lifetimes (h)
+ * as branch lengths.
+ */
+public final class LineageFiles implements LineageSink, AutoCloseable {
+
+    /** Final name of the lineage table. */
+    public static final String TABLE = "lineage.csv";
+    /** Final name of the trees. */
+    public static final String TREES = "lineage.nwk";
+
+    private static final String HEADER = "id,parent_id,generation,birth_time_h,division_time_h,birth_x_um,birth_y_um,"
+            + "fate_at_division,fate_at_end,commitment_time_h";
+
+    private final Path folder;
+    private final Path partial;
+    private final BufferedWriter out;
+    private final List<String> fates;
+
+    /** Starts streaming into {@code folder} for a run with these fate names. */
+    public LineageFiles(Path folder, List<String> fates) throws IOException {
+        this.folder = folder;
+        this.partial = folder.resolve("." + TABLE + ".partial");
+        this.out = Files.newBufferedWriter(partial, StandardCharsets.UTF_8);
+        this.fates = List.copyOf(fates);
+        out.write(HEADER);
+        out.write('\n');
+    }
+
+    @Override
+    public void accept(LineageRecord r) {
+        try {
+            out.write(r.id() + "," + r.parentId() + "," + r.generation() + "," + RunTables.number(r.birthTime()) + ","
+                    + RunTables.number(r.divisionTime()) + "," + RunTables.number(r.birthX()) + ","
+                    + RunTables.number(r.birthY()) + "," + name(r.fateAtDivision()) + "," + name(r.fateAtEnd()) + ","
+                    + RunTables.number(r.commitmentTime()) + "\n");
+        } catch (IOException e) {
+            throw new UncheckedIOException("cannot write " + partial, e);
+        }
+    }
+
+    private String name(int fate) {
+        return fate < 0 ? "" : fates.get(fate);
+    }
+
+    /** Completes the table (renamed into place), then writes the trees from it. */
+    @Override
+    public void close() throws IOException {
+        out.close();
+        Path table = folder.resolve(TABLE);
+        Files.move(partial, table, StandardCopyOption.REPLACE_EXISTING);
+    }
+
+    /** Writes {@code lineage.nwk} from a finished lineage table, at simulated end time {@code end}. */
+    public static void writeTrees(Path table, double end, Writer out) throws IOException {
+        Map<Long, List<Long>> children = new HashMap<>();
+        Map<Long, String> label = new HashMap<>();
+        Map<Long, Double> length = new HashMap<>();
+        List<Long> roots = new ArrayList<>();
+        try (Reader in = Files.newBufferedReader(table, StandardCharsets.UTF_8)) {
+            for (CSVRecord r : CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get().parse(in)) {
+                long id = Long.parseLong(r.get("id"));
+                long parent = Long.parseLong(r.get("parent_id"));
+                String fate = r.get("fate_at_end").isEmpty() ? r.get("fate_at_division") : r.get("fate_at_end");
+                label.put(id, "c" + id + "_" + fate.replaceAll("[^A-Za-z0-9_-]", "_"));
+                double birth = Double.parseDouble(r.get("birth_time_h"));
+                double division = Double.parseDouble(r.get("division_time_h"));
+                length.put(id, (Double.isNaN(division) ? end : division) - birth);
+                if (parent < 0) {
+                    roots.add(id);
+                } else {
+                    children.computeIfAbsent(parent, k -> new ArrayList<>()).add(id);
+                }
+            }
+        }
+        roots.sort(Long::compare);
+        for (long root : roots) {
+            out.write(newick(root, children, label, length));
+            out.write(";\n");
+        }
+    }
+
+    /** One tree in Newick form, built without recursion (trees can be deep). */
+    private static String newick(long root, Map<Long, List<Long>> children, Map<Long, String> label,
+            Map<Long, Double> length) {
+        StringBuilder sb = new StringBuilder();
+        Deque<Object> stack = new ArrayDeque<>();
+        stack.push(root);
+        while (!stack.isEmpty()) {
+            Object item = stack.pop();
+            if (item instanceof String text) {
+                sb.append(text);
+                continue;
+            }
+            long id = (Long) item;
+            List<Long> kids = children.getOrDefault(id, List.of());
+            String tail = label.get(id) + ":" + RunTables.number(length.get(id));
+            if (kids.isEmpty()) {
+                sb.append(tail);
+                continue;
+            }
+            sb.append('(');
+            stack.push(")" + tail);
+            for (int k = kids.size() - 1; k >= 0; k--) {
+                stack.push(kids.get(k));
+                if (k > 0) {
+                    stack.push(",");
+                }
+            }
+        }
+        return sb.toString();
+    }
+}

@@ -1,0 +1,116 @@
+package org.fatefield.scenarios.output;
+
+import com.google.gson.GsonBuilder;
+import com.google.gson.JsonArray;
+import com.google.gson.JsonObject;
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+import org.fatefield.engine.metrics.FateProfile;
+import org.fatefield.engine.metrics.LineageStatistics;
+import org.fatefield.engine.metrics.PredictedBoundary;
+import org.fatefield.engine.record.RunTables;
+import org.fatefield.engine.tissue.Tissue;
+
+/**
+ * The pattern and lineage metrics of a finished run: {@code profile.csv} (fate fractions along
+ * the gradient axis), {@code relatedness.csv} (same-fate fraction against lineage distance),
+ * {@code clones.csv} (fate composition per founder) and {@code metrics.json} (boundaries, widths,
+ * the predicted boundary, sister agreement; the per-run summary replicates are pooled from).
+ *
+ * @param profile   fate fractions along x
+ * @param lineage   lineage statistics
+ * @param predicted boundary predicted from the single-cell analysis
+ */
+public record RunMetrics(FateProfile profile, LineageStatistics lineage, PredictedBoundary predicted) {
+
+    private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get();
+
+    /** Computes the metrics of {@code tissue} at its end. */
+    public static RunMetrics of(Tissue tissue) {
+        double width = tissue.spec().width();
+        int bins = (int) Math.max(10, Math.min(60, Math.round(width / (4 * tissue.spec().growth().cellRadius()))));
+        int fates = tissue.spec().fates().fateCount();
+        return new RunMetrics(FateProfile.of(tissue.cells(), fates, width, bins),
+                LineageStatistics.of(tissue.cells(), tissue.ancestry(), fates),
+                PredictedBoundary.of(tissue.spec(), tissue.field()));
+    }
+
+    /** Writes the three tables and the JSON summary into {@code folder}; returns their names. */
+    public List<String> write(RunFolder folder, List<String> fateNames, long seed, String partition) throws IOException {
+        folder.writeText("profile.csv", w -> {
+            CSVPrinter printer = new CSVPrinter(w, FORMAT);
+            List<String> header = new ArrayList<>(List.of("x_um", "cells"));
+            fateNames.forEach(f -> header.add("fraction_" + f));
+            printer.printRecord(header);
+            for (int b = 0; b < profile.centres().length; b++) {
+                List<String> row = new ArrayList<>(List.of(RunTables.number(profile.centres()[b]),
+                        Integer.toString(profile.counts()[b])));
+                for (int f = 0; f < fateNames.size(); f++) {
+                    row.add(RunTables.number(profile.fractions()[f][b]));
+                }
+                printer.printRecord(row);
+            }
+            printer.flush();
+        });
+        folder.writeText("relatedness.csv", w -> {
+            CSVPrinter printer = new CSVPrinter(w, FORMAT);
+            printer.printRecord("lineage_distance_divisions", "pairs", "same_fate_fraction");
+            for (Map.Entry<Integer, Long> e : lineage.pairs().entrySet()) {
+                printer.printRecord(e.getKey(), e.getValue(), RunTables.number(lineage.sameFate().get(e.getKey())));
+            }
+            printer.flush();
+        });
+        folder.writeText("clones.csv", w -> {
+            CSVPrinter printer = new CSVPrinter(w, FORMAT);
+            List<String> header = new ArrayList<>(List.of("founder_id"));
+            fateNames.forEach(f -> header.add("cells_" + f));
+            printer.printRecord(header);
+            for (Map.Entry<Long, int[]> e : lineage.clones().entrySet()) {
+                List<String> row = new ArrayList<>(List.of(Long.toString(e.getKey())));
+                for (int count : e.getValue()) {
+                    row.add(Integer.toString(count));
+                }
+                printer.printRecord(row);
+            }
+            printer.flush();
+        });
+        folder.writeText("metrics.json", w -> w.write(json(fateNames, seed, partition)));
+        return List.of("profile.csv", "relatedness.csv", "clones.csv", "metrics.json");
+    }
+
+    /** The summary as JSON. */
+    public String json(List<String> fateNames, long seed, String partition) {
+        JsonObject root = new JsonObject();
+        root.addProperty("seed", seed);
+        root.addProperty("partition", partition);
+        JsonObject boundaries = new JsonObject();
+        for (int f = 0; f < fateNames.size(); f++) {
+            JsonObject b = new JsonObject();
+            b.addProperty("position_um", finite(profile.boundary(f)));
+            b.addProperty("width_10_90_um", finite(profile.width(f)));
+            boundaries.add(fateNames.get(f), b);
+        }
+        root.add("boundaries", boundaries);
+        JsonArray predicted = new JsonArray();
+        for (int k = 0; k < this.predicted.criticalValues().length; k++) {
+            JsonObject p = new JsonObject();
+            p.addProperty("critical_control_value", this.predicted.criticalValues()[k]);
+            p.addProperty("position_um", finite(this.predicted.positions()[k]));
+            predicted.add(p);
+        }
+        root.add("predicted_boundaries", predicted);
+        root.addProperty("sister_fate_agreement", finite(lineage.sisterAgreement()));
+        JsonObject related = new JsonObject();
+        lineage.sameFate().forEach((d, v) -> related.addProperty(Integer.toString(d), finite(v)));
+        root.add("same_fate_by_lineage_distance", related);
+        return new GsonBuilder().setPrettyPrinting().serializeNulls().create().toJson(root) + "\n";
+    }
+
+    private static Double finite(double v) {
+        return Double.isFinite(v) ? v : null;
+    }
+}
