@@ -13,7 +13,12 @@ public enum PartitionMode {
     /** Each molecule goes to either daughter independently with probability 1/2. */
     BINOMIAL,
     /** Exact halving: the control with no partitioning noise. */
-    EQUAL;
+    EQUAL,
+    /**
+     * Each division draws a share p from a Beta law around a mean, then each molecule goes to the
+     * first daughter with probability p: the daughter's count is beta-binomial.
+     */
+    ASYMMETRIC;
 
     /**
      * Shares a mother's molecules between two daughters.

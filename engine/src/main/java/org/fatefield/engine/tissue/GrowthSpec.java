@@ -1,7 +1,7 @@
 package org.fatefield.engine.tissue;
 
 import org.fatefield.engine.division.CycleTimeDistribution;
-import org.fatefield.engine.division.PartitionMode;
+import org.fatefield.engine.division.Partitioning;
 
 /**
  * Founding population, cell size, mechanics and division.
@@ -13,7 +13,7 @@ import org.fatefield.engine.division.PartitionMode;
  * @param partition     how molecules are shared at division
  */
 public record GrowthSpec(int initialCells, double cellRadius, double repulsionRate, CycleTimeDistribution cycle,
-        PartitionMode partition) {
+        Partitioning partition) {
 
     /** Validates. */
     public GrowthSpec {

@@ -75,6 +75,38 @@ class PartitionModeTest {
         }
     }
 
+    /**
+     * Asymmetric division: share p ~ Beta(m c, (1 - m) c), count ~ Binomial(N, p), so the count is
+     * beta-binomial with mean N m and variance N m (1 - m) (1 + (N - 1) / (c + 1)) (the standard
+     * beta-binomial moments; Huh &amp; Paulsson 2011 for the partitioning context). Four standard
+     * errors, the variance's taken as V sqrt(2.5 / n) to allow for the law's shape (common practice).
+     */
+    @Test
+    void asymmetricSharesAreBetaBinomial() {
+        Partitioning partitioning = new Partitioning(PartitionMode.ASYMMETRIC, 0.4, 20);
+        UniformRandomProvider rng = RandomStreams.of(5).stream(9);
+        double omega = 100;
+        double[] mother = {2.0};
+        long total = 400;
+        double[] first = new double[1];
+        double[] second = new double[1];
+        double sum = 0;
+        double sumSq = 0;
+        for (int i = 0; i < SAMPLES; i++) {
+            partitioning.split(mother, omega, rng, first, second);
+            double n = Math.round(first[0] * omega);
+            assertEquals(total, n + Math.round(second[0] * omega), 1e-9);
+            sum += n;
+            sumSq += n * n;
+        }
+        double mean = sum / SAMPLES;
+        double variance = (sumSq - SAMPLES * mean * mean) / (SAMPLES - 1);
+        double expectedMean = total * 0.4;
+        double expectedVariance = total * 0.4 * 0.6 * (1 + (total - 1) / 21.0);
+        assertEquals(expectedMean, mean, 4 * Math.sqrt(expectedVariance / SAMPLES));
+        assertEquals(expectedVariance, variance, 4 * expectedVariance * Math.sqrt(2.5 / SAMPLES));
+    }
+
     @Test
     void equalPartitionHasNoNoise() {
         double[] mother = {0.7, 2.5};

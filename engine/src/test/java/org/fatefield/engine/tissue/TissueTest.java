@@ -12,7 +12,7 @@ import org.fatefield.circuits.model.SelfActivatingSwitch;
 import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.division.CycleTimeDistribution;
-import org.fatefield.engine.division.PartitionMode;
+import org.fatefield.engine.division.Partitioning;
 import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.fate.FateRule;
 import org.fatefield.engine.field.MorphogenSpec;
@@ -35,7 +35,7 @@ class TissueTest {
                 new ParameterMapping(SWITCH.defaultParameters(), List.of()),
                 new MorphogenSpec(0, 0, 50, 0, List.of()),
                 1000, 1000,
-                new GrowthSpec(cells, 2.0, 0.0, cycle, PartitionMode.BINOMIAL),
+                new GrowthSpec(cells, 2.0, 0.0, cycle, Partitioning.binomial()),
                 fates,
                 new Timing(duration, 0.01, 1.0));
     }

@@ -14,6 +14,7 @@ import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.engine.division.CycleTimeDistribution;
 import org.fatefield.engine.division.PartitionMode;
+import org.fatefield.engine.division.Partitioning;
 import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.fate.FateRule;
 import org.fatefield.engine.field.MorphogenSpec;
@@ -233,7 +234,9 @@ final class ScenarioCompiler {
                     + " cycle (or set cycle = \"fixed\")");
             return null;
         }
-        PartitionMode partition = PartitionMode.valueOf(values.text(division, "division", "partition").toUpperCase(Locale.ROOT));
+        PartitionMode mode = PartitionMode.valueOf(values.text(division, "division", "partition").toUpperCase(Locale.ROOT));
+        Partitioning partition = new Partitioning(mode, values.number(division, "division", "asymmetry_mean"),
+                values.number(division, "division", "asymmetry_concentration"));
         return new GrowthSpec((int) tissue.getLong("founders", () -> 200L), values.number(tissue, "tissue", "cell_radius"),
                 values.number(tissue, "tissue", "repulsion"),
                 new CycleTimeDistribution(kind, values.number(division, "division", "cycle_mean"), cv), partition);

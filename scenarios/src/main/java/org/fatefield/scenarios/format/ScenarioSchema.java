@@ -57,9 +57,14 @@ public final class ScenarioSchema {
                     Key.choice("cycle", "gamma", List.of("fixed", "gamma", "lognormal"), "cycle-time distribution"),
                     Key.positive("cycle_mean", "h", "12", "mean time from birth to division"),
                     Key.nonNegative("cycle_cv", "", "0.15", "coefficient of variation of the cycle time (ignored when fixed)"),
-                    Key.choice("partition", "binomial", List.of("binomial", "equal"),
+                    Key.choice("partition", "binomial", List.of("binomial", "equal", "asymmetric"),
                             "how molecules are shared at division: binomial (each molecule to either daughter with"
-                                    + " probability 1/2) or equal (exact halves: no partitioning noise)")),
+                                    + " probability 1/2), equal (exact halves: no partitioning noise) or asymmetric"
+                                    + " (a share p drawn per division from a Beta law, then binomial with p)"),
+                    new Key("asymmetry_mean", KeyType.NUMBER, "", "0.5", 0.0, true, 1.0, List.of(),
+                            "asymmetric only: mean share of the first daughter (below 1)"),
+                    Key.positive("asymmetry_concentration", "", "20",
+                            "asymmetric only: Beta concentration alpha + beta; smaller means more variable shares")),
                     "growth and division"),
             new Section("circuit", false, true, List.of(
                     Key.of("file", KeyType.TEXT, "", "none",
