@@ -12,7 +12,8 @@ import org.fatefield.engine.parallel.BlockParallel;
  * Solution of Partial Differential Equations, 2nd ed., Cambridge, ch. 2-3; with k = 0 this is
  * the familiar h^2 / (2 d D) for d = 2). {@link #advance(double)} splits a step into equal
  * sub-steps no longer than 0.9 of that limit, so any step the tissue takes is stable.
- * Two buffers are swapped each sub-step.
+ * Two buffers are swapped each sub-step. With {@link MorphogenSpec.Solver#ADI} the field takes
+ * one unconditionally stable {@link AdiSolver} step per call instead.
  */
 public final class MorphogenField {
 
@@ -25,6 +26,8 @@ public final class MorphogenField {
     private final double[] synthesis;
     private double[] current;
     private double[] next;
+    private AdiSolver adi;
+    private int adiWorkers;
 
     /**
      * A field covering {@code width x height} µm, filled with the initial concentration.
@@ -82,6 +85,14 @@ public final class MorphogenField {
      * number of workers).
      */
     public void advance(double dt, BlockParallel pool) {
+        if (spec.solver() == MorphogenSpec.Solver.ADI) {
+            if (adi == null || adiWorkers < pool.workers()) {
+                adi = new AdiSolver(nx, ny, spec.diffusion(), spec.decay(), h, pool.workers());
+                adiWorkers = pool.workers();
+            }
+            adi.step(current, synthesis, dt, pool);
+            return;
+        }
         int steps = subStepsFor(dt);
         double tau = dt / steps;
         for (int s = 0; s < steps; s++) {

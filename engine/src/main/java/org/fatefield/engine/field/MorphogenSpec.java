@@ -11,9 +11,24 @@ import java.util.List;
  * @param gridSpacing side of a grid square (µm), greater than 0
  * @param initial     uniform initial concentration, at least 0
  * @param sources     synthesis regions
+ * @param solver      time stepping: explicit with stable sub-steps, or ADI (unconditionally stable)
  */
 public record MorphogenSpec(double diffusion, double decay, double gridSpacing, double initial,
-        List<SourceRegion> sources) {
+        List<SourceRegion> sources, Solver solver) {
+
+    /** How the field is advanced in time. */
+    public enum Solver {
+        /** Forward Euler, sub-stepped below the stability limit: the reference. */
+        EXPLICIT,
+        /** Peaceman-Rachford alternating-direction implicit: one step per tick at any step size. */
+        ADI
+    }
+
+    /** An explicit-solver spec. */
+    public MorphogenSpec(double diffusion, double decay, double gridSpacing, double initial,
+            List<SourceRegion> sources) {
+        this(diffusion, decay, gridSpacing, initial, sources, Solver.EXPLICIT);
+    }
 
     /** Validates every field. */
     public MorphogenSpec {

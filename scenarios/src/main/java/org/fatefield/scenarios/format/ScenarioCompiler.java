@@ -129,7 +129,8 @@ final class ScenarioCompiler {
             sources.add(new SourceRegion(r[0], r[1], r[2], r[3], values.number(source, "morphogen.source", "rate")));
         }
         return new MorphogenSpec(values.number(table, "morphogen", "diffusion"), values.number(table, "morphogen", "decay"),
-                spacing, values.number(table, "morphogen", "initial"), sources);
+                spacing, values.number(table, "morphogen", "initial"), sources, MorphogenSpec.Solver.valueOf(
+                        values.text(table, "morphogen", "solver").toUpperCase(Locale.ROOT)));
     }
 
     private ParameterMapping mapping(CircuitSetup circuit) {

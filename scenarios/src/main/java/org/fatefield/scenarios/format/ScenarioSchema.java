@@ -119,7 +119,10 @@ public final class ScenarioSchema {
                     Key.nonNegative("diffusion", "µm²/h", "3600", "diffusion coefficient"),
                     Key.nonNegative("decay", "1/h", "0.2", "first-order decay rate"),
                     Key.positive("grid_spacing", "µm", "10", "side of a grid square of the field"),
-                    Key.nonNegative("initial", "", "0", "uniform concentration at time 0")),
+                    Key.nonNegative("initial", "", "0", "uniform concentration at time 0"),
+                    Key.choice("solver", "explicit", List.of("explicit", "adi"),
+                            "time stepping: explicit (forward Euler, sub-stepped below its stability limit) or adi"
+                                    + " (Peaceman-Rachford alternating-direction implicit, stable at any step)")),
                     "the diffusing morphogen (no-flux walls)"),
             new Section("morphogen.source", true, false, List.of(
                     Key.of("region", KeyType.NUMBERS, "µm", null, "rectangle [x0, y0, x1, y1] where morphogen is made"),
