@@ -14,9 +14,9 @@ import org.fatefield.engine.tissue.TissueSpec;
 
 /**
  * The boundary the single-cell analysis predicts: the critical values of the control parameter
- * (folds and branch points of the circuit over the coupling's range, by continuation) and the
- * positions along x where the local control parameter, from the row-averaged morphogen, crosses
- * each of them.
+ * (folds and branch points of the circuit over the range the control parameter takes in the
+ * tissue, by continuation) and the positions along x where the local control parameter, from the
+ * row-averaged morphogen, crosses each of them.
  *
  * @param criticalValues control-parameter values of the circuit's folds and branch points
  * @param positions      positions along x (µm) where the local control parameter crosses them (NaN if it does not)
@@ -29,8 +29,21 @@ public record PredictedBoundary(double[] criticalValues, double[] positions) {
             return new PredictedBoundary(new double[0], new double[0]);
         }
         SignalCoupling coupling = spec.mapping().couplings().get(0);
-        double lo = Math.min(coupling.base(), coupling.base() + coupling.gain());
-        double hi = Math.max(coupling.base(), coupling.base() + coupling.gain());
+        double[] control = new double[field.columns()];
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < field.columns(); i++) {
+            double sum = 0;
+            for (int j = 0; j < field.rows(); j++) {
+                sum += field.value(i, j);
+            }
+            control[i] = spec.mapping().controlAt(sum / field.rows());
+            lo = Math.min(lo, control[i]);
+            hi = Math.max(hi, control[i]);
+        }
+        double margin = 0.05 * Math.max(hi - lo, 1e-9);
+        lo -= margin;
+        hi += margin;
         NetworkSystem system = new NetworkSystem(spec.circuit().network(), spec.mapping().base(),
                 coupling.parameterIndices());
         List<Branch> branches = EquilibriumContinuation.of(system,
@@ -46,14 +59,6 @@ public record PredictedBoundary(double[] criticalValues, double[] positions) {
             }
         }
         double[] values = critical.stream().mapToDouble(Double::doubleValue).sorted().toArray();
-        double[] control = new double[field.columns()];
-        for (int i = 0; i < field.columns(); i++) {
-            double sum = 0;
-            for (int j = 0; j < field.rows(); j++) {
-                sum += field.value(i, j);
-            }
-            control[i] = spec.mapping().controlAt(sum / field.rows());
-        }
         double[] positions = new double[values.length];
         for (int k = 0; k < values.length; k++) {
             positions[k] = Double.NaN;
