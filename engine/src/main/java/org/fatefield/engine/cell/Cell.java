@@ -140,6 +140,18 @@ public final class Cell {
         this.y = newY;
     }
 
+    /**
+     * Dilutes the concentrations by the cell's growth over the next {@code dt} hours: the volume
+     * grows linearly from 1 to 2 newborn volumes over the cycle, so concentrations scale by
+     * {@code V(age) / V(age + dt)} exactly.
+     */
+    public void dilute(double dt) {
+        double factor = (cycleTime + Math.min(age, cycleTime)) / (cycleTime + Math.min(age + dt, cycleTime));
+        for (int i = 0; i < state.length; i++) {
+            state[i] *= factor;
+        }
+    }
+
     /** Adds {@code dt} hours to the cell's age. */
     public void grow(double dt) {
         this.age += dt;

@@ -31,6 +31,11 @@ public final class CellPopulation {
         cells.set(index, cell);
     }
 
+    /** Removes every cell {@code test} accepts, keeping the others in order; {@code test} runs once per cell, in order. */
+    public void removeIf(java.util.function.Predicate<Cell> test) {
+        cells.removeIf(test);
+    }
+
     /** Cell at slot {@code index}. */
     public Cell get(int index) {
         return cells.get(index);

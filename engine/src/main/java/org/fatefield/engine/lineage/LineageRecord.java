@@ -13,7 +13,8 @@ package org.fatefield.engine.lineage;
  * @param fateAtDivision fate index when it divided, -1 if it did not
  * @param fateAtEnd      fate index at the end of the run, -1 if it divided
  * @param commitmentTime time it last entered its final fate (to the recording interval), NaN if unknown
+ * @param deathTime      time it died (h), NaN if it did not
  */
 public record LineageRecord(long id, long parentId, int generation, double birthTime, double divisionTime,
-        double birthX, double birthY, int fateAtDivision, int fateAtEnd, double commitmentTime) {
+        double birthX, double birthY, int fateAtDivision, int fateAtEnd, double commitmentTime, double deathTime) {
 }

@@ -11,9 +11,29 @@ import org.fatefield.engine.division.Partitioning;
  * @param repulsionRate overlap relaxation rate (1 / h), at least 0
  * @param cycle         cycle-time distribution
  * @param partition     how molecules are shared at division
+ * @param axis          direction along which daughters are placed
+ * @param deathRate     probability per hour that a cell dies and is removed (extrusion), at least 0
+ * @param dilution      if true, concentrations dilute as the cell's volume grows (volume doubles
+ *                      linearly over the cycle); if false, degradation rates are taken to include dilution
  */
 public record GrowthSpec(int initialCells, double cellRadius, double repulsionRate, CycleTimeDistribution cycle,
-        Partitioning partition) {
+        Partitioning partition, DivisionAxis axis, double deathRate, boolean dilution) {
+
+    /** Direction of the division axis. */
+    public enum DivisionAxis {
+        /** Uniformly random. */
+        RANDOM,
+        /** Along x, the gradient axis. */
+        X,
+        /** Along y, across the gradient. */
+        Y
+    }
+
+    /** Random axis, no death, dilution folded into degradation. */
+    public GrowthSpec(int initialCells, double cellRadius, double repulsionRate, CycleTimeDistribution cycle,
+            Partitioning partition) {
+        this(initialCells, cellRadius, repulsionRate, cycle, partition, DivisionAxis.RANDOM, 0.0, false);
+    }
 
     /** Validates. */
     public GrowthSpec {
@@ -25,6 +45,9 @@ public record GrowthSpec(int initialCells, double cellRadius, double repulsionRa
         }
         if (!(repulsionRate >= 0) || Double.isInfinite(repulsionRate)) {
             throw new IllegalArgumentException("repulsion rate must be finite and at least 0, got " + repulsionRate);
+        }
+        if (!(deathRate >= 0) || Double.isInfinite(deathRate)) {
+            throw new IllegalArgumentException("death rate must be finite and at least 0, got " + deathRate);
         }
     }
 }

@@ -123,6 +123,9 @@ public final class Tissue extends SimState {
         stepCells(dt);
         steps++;
         divide();
+        if (spec.growth().deathRate() > 0) {
+            removeDead(dt);
+        }
         mechanics.relax(population, dt, pool);
         if (steps % REORDER_EVERY == 0) {
             population.sortByBlock(blockSide, spec.width(), spec.height());
@@ -136,6 +139,7 @@ public final class Tissue extends SimState {
         MorphogenField morphogen = field;
         ParameterMapping mapping = spec.mapping();
         CellPopulation cells = population;
+        boolean dilute = spec.growth().dilution();
         pool.forEach(cells.size(), (from, to, worker) -> {
             CircuitStepper circuit = steppers[worker];
             double[] p = params[worker];
@@ -145,6 +149,9 @@ public final class Tissue extends SimState {
                 cell.setSignal(c);
                 mapping.applySignal(c, p);
                 circuit.advance(cell.liveState(), p, dt, cell.random());
+                if (dilute) {
+                    cell.dilute(dt);
+                }
                 cell.grow(dt);
             }
         });
@@ -161,15 +168,39 @@ public final class Tissue extends SimState {
                 continue;
             }
             lineage.accept(new LineageRecord(mother.id(), mother.parentId(), mother.generation(), mother.birthTime(),
-                    now, mother.birthX(), mother.birthY(), spec.fates().classify(mother.liveState()), -1, Double.NaN));
+                    now, mother.birthX(), mother.birthY(), spec.fates().classify(mother.liveState()), -1, Double.NaN,
+                    Double.NaN));
             UniformRandomProvider rng = mother.random();
             growth.partition().split(mother.liveState(), spec.circuit().systemSize(), rng, firstDaughter, secondDaughter);
-            double angle = 2 * Math.PI * rng.nextDouble();
+            double angle = switch (growth.axis()) {
+                case X -> 0.0;
+                case Y -> 0.5 * Math.PI;
+                case RANDOM -> 2 * Math.PI * rng.nextDouble();
+            };
             double ox = offset * Math.cos(angle);
             double oy = offset * Math.sin(angle);
             population.replace(i, daughter(mother, firstDaughter, now, mother.x() + ox, mother.y() + oy));
             population.add(daughter(mother, secondDaughter, now, mother.x() - ox, mother.y() - oy));
         }
+    }
+
+    /**
+     * Each cell dies with probability {@code deathRate * dt} per step, drawn from its own stream;
+     * the dead are removed (extruded) and their lineage records written. The survivors keep their
+     * order.
+     */
+    private void removeDead(double dt) {
+        double p = spec.growth().deathRate() * dt;
+        double now = time();
+        population.removeIf(cell -> {
+            if (cell.random().nextDouble() >= p) {
+                return false;
+            }
+            lineage.accept(new LineageRecord(cell.id(), cell.parentId(), cell.generation(), cell.birthTime(),
+                    Double.NaN, cell.birthX(), cell.birthY(), -1, spec.fates().classify(cell.liveState()),
+                    cell.fateSince(), now));
+            return true;
+        });
     }
 
     private Cell daughter(Cell mother, double[] state, double now, double x, double y) {
@@ -228,7 +259,7 @@ public final class Tissue extends SimState {
         lineageClosed = true;
         for (Cell cell : population.view()) {
             lineage.accept(new LineageRecord(cell.id(), cell.parentId(), cell.generation(), cell.birthTime(),
-                    Double.NaN, cell.birthX(), cell.birthY(), -1, cell.fate(), cell.fateSince()));
+                    Double.NaN, cell.birthX(), cell.birthY(), -1, cell.fate(), cell.fateSince(), Double.NaN));
         }
     }
 

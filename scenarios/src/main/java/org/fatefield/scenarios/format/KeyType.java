@@ -8,6 +8,8 @@ public enum KeyType {
     INTEGER("integer"),
     /** One of a fixed set of words. */
     CHOICE("text, one of the listed words"),
+    /** true or false. */
+    BOOLEAN("true or false"),
     /** Free text. */
     TEXT("text"),
     /** A list of names. */

@@ -188,6 +188,7 @@ final class ScenarioChecker {
             case INTEGER -> !(value instanceof Long l) || !key.inRange(l) ? key.allowed() : null;
             case CHOICE -> !(value instanceof String s) || !key.choices().contains(s) ? key.allowed() : null;
             case TEXT -> value instanceof String s && !s.isBlank() ? null : "non-blank text in quotes";
+            case BOOLEAN -> value instanceof Boolean ? null : "true or false (no quotes)";
             case NAMES -> value instanceof TomlArray a && all(a, String.class) ? null
                     : "a list of names in quotes, like [\"A\", \"B\"]";
             case NUMBERS -> isNumberList(value) ? null : "a list of numbers, like [0.1, 0.2]";

@@ -21,6 +21,7 @@ import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.field.SourceRegion;
 import org.fatefield.engine.tissue.CircuitSetup;
 import org.fatefield.engine.tissue.GrowthSpec;
+import org.fatefield.engine.tissue.NoiseMode;
 import org.fatefield.engine.tissue.TissueSpec;
 import org.fatefield.engine.tissue.Timing;
 import org.tomlj.TomlArray;
@@ -86,7 +87,7 @@ final class ScenarioCompiler {
         MorphogenSpec morphogen = morphogen(width, height);
         ParameterMapping mapping = mapping(circuit);
         FateClassifier fates = fates(circuit);
-        GrowthSpec growth = growth(tissue);
+        GrowthSpec growth = growth(tissue, circuit);
         if (!problems.isEmpty()) {
             return null;
         }
@@ -225,7 +226,7 @@ final class ScenarioCompiler {
         return ok ? out : null;
     }
 
-    private GrowthSpec growth(TomlTable tissue) {
+    private GrowthSpec growth(TomlTable tissue, CircuitSetup circuit) {
         TomlTable division = toml.getTableOrEmpty("division");
         CycleTimeDistribution.Kind kind = CycleTimeDistribution.Kind.valueOf(
                 values.text(division, "division", "cycle").toUpperCase(Locale.ROOT));
@@ -238,9 +239,17 @@ final class ScenarioCompiler {
         PartitionMode mode = PartitionMode.valueOf(values.text(division, "division", "partition").toUpperCase(Locale.ROOT));
         Partitioning partition = new Partitioning(mode, values.number(division, "division", "asymmetry_mean"),
                 values.number(division, "division", "asymmetry_concentration"));
+        boolean dilution = Boolean.TRUE.equals(division.getBoolean("dilution"));
+        if (dilution && circuit != null && circuit.noise() != NoiseMode.LANGEVIN && circuit.noise() != NoiseMode.NONE) {
+            values.fail(division, "division", "dilution", "needs circuit.noise = \"langevin\" or \"none\": the"
+                    + " molecule-count methods keep whole numbers of molecules between divisions");
+            return null;
+        }
         return new GrowthSpec((int) tissue.getLong("founders", () -> 200L), values.number(tissue, "tissue", "cell_radius"),
                 values.number(tissue, "tissue", "repulsion"),
-                new CycleTimeDistribution(kind, values.number(division, "division", "cycle_mean"), cv), partition);
+                new CycleTimeDistribution(kind, values.number(division, "division", "cycle_mean"), cv), partition,
+                GrowthSpec.DivisionAxis.valueOf(values.text(division, "division", "axis").toUpperCase(Locale.ROOT)),
+                values.number(division, "division", "death_rate"), dilution);
     }
 
 }

@@ -64,7 +64,13 @@ public final class ScenarioSchema {
                     new Key("asymmetry_mean", KeyType.NUMBER, "", "0.5", 0.0, true, 1.0, List.of(),
                             "asymmetric only: mean share of the first daughter (below 1)"),
                     Key.positive("asymmetry_concentration", "", "20",
-                            "asymmetric only: Beta concentration alpha + beta; smaller means more variable shares")),
+                            "asymmetric only: Beta concentration alpha + beta; smaller means more variable shares"),
+                    Key.choice("axis", "random", List.of("random", "x", "y"),
+                            "direction along which the daughters are placed: random, x (the gradient axis) or y"),
+                    Key.nonNegative("death_rate", "1/h", "0", "probability per hour that a cell dies and is removed"),
+                    Key.of("dilution", KeyType.BOOLEAN, "", "false",
+                            "true: concentrations dilute as cells grow (then degradation is the chemical loss only;"
+                                    + " langevin and none only); false: degradation includes dilution")),
                     "growth and division"),
             new Section("circuit", false, true, List.of(
                     Key.of("file", KeyType.TEXT, "", "none",

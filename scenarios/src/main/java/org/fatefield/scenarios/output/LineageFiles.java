@@ -35,7 +35,7 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
     public static final String TREES = "lineage.nwk";
 
     private static final String HEADER = "id,parent_id,generation,birth_time_h,division_time_h,birth_x_um,birth_y_um,"
-            + "fate_at_division,fate_at_end,commitment_time_h";
+            + "fate_at_division,fate_at_end,commitment_time_h,death_time_h";
 
     private final Path folder;
     private final Path partial;
@@ -58,7 +58,7 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
             out.write(r.id() + "," + r.parentId() + "," + r.generation() + "," + RunTables.number(r.birthTime()) + ","
                     + RunTables.number(r.divisionTime()) + "," + RunTables.number(r.birthX()) + ","
                     + RunTables.number(r.birthY()) + "," + name(r.fateAtDivision()) + "," + name(r.fateAtEnd()) + ","
-                    + RunTables.number(r.commitmentTime()) + "\n");
+                    + RunTables.number(r.commitmentTime()) + "," + RunTables.number(r.deathTime()) + "\n");
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write " + partial, e);
         }
@@ -90,7 +90,9 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
                 label.put(id, "c" + id + "_" + fate.replaceAll("[^A-Za-z0-9_-]", "_"));
                 double birth = Double.parseDouble(r.get("birth_time_h"));
                 double division = Double.parseDouble(r.get("division_time_h"));
-                length.put(id, (Double.isNaN(division) ? end : division) - birth);
+                double death = Double.parseDouble(r.get("death_time_h"));
+                double last = !Double.isNaN(division) ? division : !Double.isNaN(death) ? death : end;
+                length.put(id, last - birth);
                 if (parent < 0) {
                     roots.add(id);
                 } else {

@@ -1,0 +1,103 @@
+package org.fatefield.engine.tissue;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import org.fatefield.circuits.model.CustomNetwork;
+import org.fatefield.engine.cell.Cell;
+import org.fatefield.engine.coupling.ParameterMapping;
+import org.fatefield.engine.division.CycleTimeDistribution;
+import org.fatefield.engine.division.Partitioning;
+import org.fatefield.engine.fate.FateClassifier;
+import org.fatefield.engine.fate.FateRule;
+import org.fatefield.engine.field.MorphogenSpec;
+import org.fatefield.engine.lineage.LineageRecord;
+import org.hipparchus.distribution.discrete.BinomialDistribution;
+import org.junit.jupiter.api.Test;
+
+/** Division axis, death and dilution, each against a result computed by hand. */
+class GrowthOptionsTest {
+
+    /** A species that nothing makes or removes, so only division and dilution change it. */
+    private static final CustomNetwork INERT = CustomNetwork.of(List.of("X"), List.of("k"), new double[] {0},
+            List.of(new CustomNetwork.ReactionDefinition("none", new int[] {1}, "k * X")));
+
+    private static TissueSpec spec(int founders, GrowthSpec growth, double duration) {
+        return new TissueSpec(new CircuitSetup(INERT, NoiseMode.NONE, 100, new double[] {1.0}),
+                new ParameterMapping(INERT.defaultParameters(), List.of()),
+                new MorphogenSpec(0, 0, 50, 0, List.of()), 1000, 1000, growth,
+                new FateClassifier(List.of(new FateRule("any", new double[] {Double.NaN}, new double[] {Double.NaN})),
+                        "none"),
+                new Timing(duration, 0.01, 1.0));
+    }
+
+    @Test
+    void daughtersAreBornAlongTheChosenAxis() {
+        GrowthSpec growth = new GrowthSpec(200, 2, 0, new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 2, 0),
+                Partitioning.equal(), GrowthSpec.DivisionAxis.X, 0, false);
+        Tissue tissue = new Tissue(spec(200, growth, 1.9), 4);
+        List<LineageRecord> records = new ArrayList<>();
+        tissue.setLineageSink(records::add);
+        tissue.start();
+        tissue.runToEnd();
+        tissue.closeLineage();
+        Map<Long, List<LineageRecord>> sisters = new HashMap<>();
+        for (LineageRecord r : records) {
+            if (r.parentId() >= 0) {
+                sisters.computeIfAbsent(r.parentId(), k -> new ArrayList<>()).add(r);
+            }
+        }
+        assertTrue(sisters.size() > 150, "pairs " + sisters.size());
+        for (List<LineageRecord> pair : sisters.values()) {
+            assertEquals(2, pair.size());
+            assertEquals(pair.get(0).birthY(), pair.get(1).birthY(), 1e-12);
+            assertTrue(Math.abs(pair.get(0).birthX() - pair.get(1).birthX()) > 1.0);
+        }
+    }
+
+    @Test
+    void deathThinsThePopulationBinomially() {
+        // Without division, each of N cells survives n steps with probability (1 - rate dt)^n;
+        // the survivors are Binomial(N, that), checked against its 99% interval.
+        int founders = 4000;
+        double rate = 0.1;
+        GrowthSpec growth = new GrowthSpec(founders, 2, 0,
+                new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e6, 0), Partitioning.equal(),
+                GrowthSpec.DivisionAxis.RANDOM, rate, false);
+        Tissue tissue = new Tissue(spec(founders, growth, 5.0), 8);
+        tissue.start();
+        tissue.runToEnd();
+        double survive = Math.pow(1 - rate * 0.01, 500);
+        BinomialDistribution law = new BinomialDistribution(founders, survive);
+        int alive = tissue.cells().size();
+        assertTrue(alive >= law.inverseCumulativeProbability(0.005) && alive <= law.inverseCumulativeProbability(0.995),
+                "survivors " + alive + " against mean " + founders * survive);
+    }
+
+    @Test
+    void dilutionFollowsTheVolume() {
+        // Volume grows linearly from 1 to 2 over the cycle T, so a cell of initial age a0 holds
+        // (T + a0) / (T + a0 + t) of its starting concentration after t (derived by hand).
+        double cycle = 10;
+        GrowthSpec growth = new GrowthSpec(100, 2, 0,
+                new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, cycle, 0), Partitioning.equal(),
+                GrowthSpec.DivisionAxis.RANDOM, 0, true);
+        double duration = 3.0;
+        Tissue tissue = new Tissue(spec(100, growth, duration), 12);
+        tissue.start();
+        tissue.runToEnd();
+        int checked = 0;
+        for (Cell cell : tissue.cells()) {
+            if (cell.generation() == 0) {
+                double a0 = cell.age() - duration;
+                assertEquals((cycle + a0) / (cycle + a0 + duration), cell.concentration(0), 1e-9);
+                checked++;
+            }
+        }
+        assertTrue(checked > 50);
+    }
+}
