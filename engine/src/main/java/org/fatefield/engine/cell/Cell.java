@@ -26,6 +26,8 @@ public final class Cell {
     private double fateSince = Double.NaN;
     private final double birthX;
     private final double birthY;
+    private double[] scores = NO_SCORES;
+    private static final double[] NO_SCORES = new double[0];
 
     /**
      * @param id         unique id, never reused
@@ -181,6 +183,16 @@ public final class Cell {
      */
     public double fateSince() {
         return fateSince;
+    }
+
+    /** Extrinsic-noise scores, one per noisy parameter (see ExtrinsicNoise); live array. */
+    public double[] scores() {
+        return scores;
+    }
+
+    /** Sets the extrinsic-noise scores (the array is kept). */
+    public void setScores(double[] values) {
+        this.scores = values;
     }
 
     /** Position along x at birth (µm). */

@@ -13,6 +13,7 @@ import org.fatefield.engine.lineage.LineageRecord;
 import org.fatefield.engine.lineage.LineageSink;
 import org.fatefield.engine.mechanics.OverlapRepulsion;
 import org.fatefield.engine.parallel.BlockParallel;
+import org.fatefield.engine.variability.ExtrinsicNoise;
 import org.fatefield.engine.record.TimeSeries;
 import sim.engine.Schedule;
 import sim.engine.SimState;
@@ -46,6 +47,8 @@ public final class Tissue extends SimState {
     private CircuitStepper[] steppers;
     private OverlapRepulsion mechanics;
     private double[][] params;
+    private double[] baseParameters;
+    private int[] noisyIndices;
     private double[] firstDaughter;
     private double[] secondDaughter;
     private long steps;
@@ -84,6 +87,9 @@ public final class Tissue extends SimState {
             pool.close();
         }
         pool = new BlockParallel(threads);
+        baseParameters = spec.mapping().base();
+        noisyIndices = spec.extrinsic().stream().flatMapToInt(noise -> java.util.Arrays.stream(noise.indices()))
+                .distinct().toArray();
         steppers = new CircuitStepper[threads];
         params = new double[threads][];
         CircuitStepper prototype = circuit.noise().stepper(circuit.network(), circuit.systemSize());
@@ -108,7 +114,15 @@ public final class Tissue extends SimState {
             UniformRandomProvider rng = streams.stream(id);
             double cycle = growth.cycle().sample(rng);
             double age = cycle * rng.nextDouble();
-            population.add(new Cell(id, -1, 0, -age, cycle, circuit.initialState(), rng, x, y, age));
+            Cell founder = new Cell(id, -1, 0, -age, cycle, circuit.initialState(), rng, x, y, age);
+            if (!spec.extrinsic().isEmpty()) {
+                double[] scores = new double[spec.extrinsic().size()];
+                for (int k = 0; k < scores.length; k++) {
+                    scores[k] = spec.extrinsic().get(k).founderScore(rng);
+                }
+                founder.setScores(scores);
+            }
+            population.add(founder);
             ancestry.add(id, -1);
         }
         population.sortByBlock(blockSide, spec.width(), spec.height());
@@ -140,6 +154,7 @@ public final class Tissue extends SimState {
         ParameterMapping mapping = spec.mapping();
         CellPopulation cells = population;
         boolean dilute = spec.growth().dilution();
+        List<ExtrinsicNoise> extrinsic = spec.extrinsic();
         pool.forEach(cells.size(), (from, to, worker) -> {
             CircuitStepper circuit = steppers[worker];
             double[] p = params[worker];
@@ -147,7 +162,13 @@ public final class Tissue extends SimState {
                 Cell cell = cells.get(i);
                 double c = morphogen.sample(cell.x(), cell.y());
                 cell.setSignal(c);
+                if (!extrinsic.isEmpty()) {
+                    restoreNoisy(p);
+                }
                 mapping.applySignal(c, p);
+                for (int k = 0; k < extrinsic.size(); k++) {
+                    extrinsic.get(k).apply(cell.scores()[k], p);
+                }
                 circuit.advance(cell.liveState(), p, dt, cell.random());
                 if (dilute) {
                     cell.dilute(dt);
@@ -184,6 +205,13 @@ public final class Tissue extends SimState {
         }
     }
 
+    /** Resets the parameters extrinsic noise multiplies to their base values. */
+    private void restoreNoisy(double[] p) {
+        for (int index : noisyIndices) {
+            p[index] = baseParameters[index];
+        }
+    }
+
     /**
      * Each cell dies with probability {@code deathRate * dt} per step, drawn from its own stream;
      * the dead are removed (extruded) and their lineage records written. The survivors keep their
@@ -214,6 +242,13 @@ public final class Tissue extends SimState {
         Cell cell = new Cell(id, mother.id(), mother.generation() + 1, now, cycle, state.clone(), rng, cx, cy, 0.0);
         cell.setSignal(mother.signal());
         cell.setFate(mother.fate(), mother.fateSince());
+        if (!spec.extrinsic().isEmpty()) {
+            double[] scores = new double[spec.extrinsic().size()];
+            for (int k = 0; k < scores.length; k++) {
+                scores[k] = spec.extrinsic().get(k).daughterScore(mother.scores()[k], rng);
+            }
+            cell.setScores(scores);
+        }
         return cell;
     }
 

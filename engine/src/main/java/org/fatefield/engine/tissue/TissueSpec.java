@@ -2,7 +2,9 @@ package org.fatefield.engine.tissue;
 
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.fate.FateClassifier;
+import java.util.List;
 import org.fatefield.engine.field.MorphogenSpec;
+import org.fatefield.engine.variability.ExtrinsicNoise;
 
 /**
  * Everything a tissue run needs, validated: the model objects a scenario file becomes.
@@ -15,12 +17,20 @@ import org.fatefield.engine.field.MorphogenSpec;
  * @param growth    founders, size, mechanics and division
  * @param fates     the fate rules
  * @param timing    duration, step and recording interval
+ * @param extrinsic cell-to-cell parameter variability, inherited at division
  */
 public record TissueSpec(CircuitSetup circuit, ParameterMapping mapping, MorphogenSpec morphogen, double width,
-        double height, GrowthSpec growth, FateClassifier fates, Timing timing) {
+        double height, GrowthSpec growth, FateClassifier fates, Timing timing, List<ExtrinsicNoise> extrinsic) {
+
+    /** A tissue without extrinsic variability. */
+    public TissueSpec(CircuitSetup circuit, ParameterMapping mapping, MorphogenSpec morphogen, double width,
+            double height, GrowthSpec growth, FateClassifier fates, Timing timing) {
+        this(circuit, mapping, morphogen, width, height, growth, fates, timing, List.of());
+    }
 
     /** Checks that the parts fit together. */
     public TissueSpec {
+        extrinsic = List.copyOf(extrinsic);
         if (!(width > 0) || !(height > 0) || Double.isInfinite(width) || Double.isInfinite(height)) {
             throw new IllegalArgumentException("domain must be finite with positive width and height, got "
                     + width + " x " + height);

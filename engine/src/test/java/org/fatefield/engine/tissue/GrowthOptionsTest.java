@@ -100,4 +100,65 @@ class GrowthOptionsTest {
         }
         assertTrue(checked > 50);
     }
+
+    /**
+     * Extrinsic noise: the factor is lognormal with mean 1 and the chosen CV, and sisters' scores
+     * correlate as rho^2 (both are rho times the mother's score plus independent parts). Checked
+     * with 99% intervals: normal for the mean and CV, Fisher's z for the correlation (common
+     * practice).
+     */
+    @Test
+    void extrinsicFactorsHaveTheirMeanSpreadAndInheritance() {
+        double cv = 0.3;
+        double rho = 0.8;
+        org.fatefield.engine.variability.ExtrinsicNoise noise =
+                new org.fatefield.engine.variability.ExtrinsicNoise("k", new int[] {0}, cv, rho);
+        GrowthSpec growth = new GrowthSpec(3000, 2, 0, new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 2, 0),
+                Partitioning.equal(), GrowthSpec.DivisionAxis.RANDOM, 0, false);
+        TissueSpec base = spec(3000, growth, 1.99);
+        TissueSpec spec = new TissueSpec(base.circuit(), base.mapping(), base.morphogen(), base.width(), base.height(),
+                base.growth(), base.fates(), base.timing(), List.of(noise));
+        Tissue tissue = new Tissue(spec, 21);
+        tissue.start();
+        tissue.runToEnd();
+        double sum = 0;
+        double sumSq = 0;
+        Map<Long, List<Double>> sisters = new HashMap<>();
+        for (Cell cell : tissue.cells()) {
+            double f = noise.factor(cell.scores()[0]);
+            sum += f;
+            sumSq += f * f;
+            if (cell.parentId() >= 0) {
+                sisters.computeIfAbsent(cell.parentId(), k -> new ArrayList<>()).add(cell.scores()[0]);
+            }
+        }
+        int n = tissue.cells().size();
+        double mean = sum / n;
+        double sd = Math.sqrt((sumSq - n * mean * mean) / (n - 1));
+        assertEquals(1.0, mean, 2.576 * cv / Math.sqrt(n));
+        assertEquals(cv, sd, 2.576 * cv * Math.sqrt(2.0 / n) * 1.5);
+        double sx = 0;
+        double sy = 0;
+        double sxx = 0;
+        double syy = 0;
+        double sxy = 0;
+        int pairs = 0;
+        for (List<Double> pair : sisters.values()) {
+            if (pair.size() == 2) {
+                double x = pair.get(0);
+                double y = pair.get(1);
+                sx += x;
+                sy += y;
+                sxx += x * x;
+                syy += y * y;
+                sxy += x * y;
+                pairs++;
+            }
+        }
+        double r = (sxy - sx * sy / pairs) / Math.sqrt((sxx - sx * sx / pairs) * (syy - sy * sy / pairs));
+        assertTrue(pairs > 2000, "pairs " + pairs);
+        double z = 0.5 * Math.log((1 + r) / (1 - r));
+        double expected = 0.5 * Math.log((1 + rho * rho) / (1 - rho * rho));
+        assertEquals(expected, z, 2.576 / Math.sqrt(pairs - 3), "sister correlation " + r);
+    }
 }

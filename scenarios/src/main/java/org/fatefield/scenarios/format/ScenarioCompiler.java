@@ -21,6 +21,7 @@ import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.field.SourceRegion;
 import org.fatefield.engine.tissue.CircuitSetup;
 import org.fatefield.engine.tissue.GrowthSpec;
+import org.fatefield.engine.variability.ExtrinsicNoise;
 import org.fatefield.engine.tissue.NoiseMode;
 import org.fatefield.engine.tissue.TissueSpec;
 import org.fatefield.engine.tissue.Timing;
@@ -93,7 +94,7 @@ final class ScenarioCompiler {
         }
         try {
             TissueSpec spec = new TissueSpec(circuit, mapping, morphogen, width, height, growth, fates,
-                    new Timing(duration, step, recordEvery));
+                    new Timing(duration, step, recordEvery), extrinsic(circuit));
             String name = scenario.contains("name") ? scenario.getString("name") : fallbackName;
             String description = scenario.contains("description") ? scenario.getString("description") : "";
             long seed = run.contains("seed") ? run.getLong("seed") : 1L;
@@ -162,6 +163,25 @@ final class ScenarioCompiler {
                     values.number(table, "coupling", "hill")));
         }
         return new ParameterMapping(network.defaultParameters(), couplings);
+    }
+
+    private List<ExtrinsicNoise> extrinsic(CircuitSetup circuit) {
+        List<ExtrinsicNoise> out = new ArrayList<>();
+        TomlArray array = toml.getArrayOrEmpty("extrinsic");
+        for (int i = 0; i < array.size(); i++) {
+            TomlTable table = array.getTable(i);
+            String parameter = table.getString("parameter");
+            int[] indices = circuit.network().parameterGroup(parameter);
+            if (indices.length == 0) {
+                problems.add(locator.at(table, "parameter", "extrinsic[" + (i + 1) + "].parameter", "\"" + parameter
+                        + "\"", "is not a parameter of this circuit; use one of "
+                        + String.join(", ", circuit.network().parameterNames())));
+                continue;
+            }
+            out.add(new ExtrinsicNoise(parameter, indices, values.number(table, "extrinsic", "cv"),
+                    values.number(table, "extrinsic", "inheritance")));
+        }
+        return out;
     }
 
     private FateClassifier fates(CircuitSetup circuit) {

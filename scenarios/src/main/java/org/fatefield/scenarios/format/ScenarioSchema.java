@@ -145,6 +145,14 @@ public final class ScenarioSchema {
                     Key.positive("half_max", "", "1", "morphogen level of half-maximal effect (hill)"),
                     Key.positive("hill", "", "2", "Hill coefficient of the coupling (hill)")),
                     "how the local morphogen level c sets a circuit parameter in each cell"),
+            new Section("extrinsic", true, false, List.of(
+                    Key.of("parameter", KeyType.TEXT, "", null,
+                            "parameter that varies from cell to cell (a kinetic key for every gene, or <gene>.<key>)"),
+                    Key.nonNegative("cv", "", null, "coefficient of variation of the lognormal factor (mean 1)"),
+                    new Key("inheritance", KeyType.NUMBER, "", "0.9", 0.0, false, 1.0, List.of(),
+                            "mother-daughter correlation of the factor's log-score (sisters correlate as its square)")),
+                    "cell-to-cell (extrinsic) variability of a circuit parameter, inherited at division; repeat for"
+                            + " several parameters"),
             new Section("fates", false, true, List.of(
                     Key.of("default", KeyType.TEXT, "", "\"progenitor\"", "fate of a cell that matches no rule")),
                     "how a cell's state is read as a fate"),
