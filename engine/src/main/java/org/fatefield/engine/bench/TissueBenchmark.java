@@ -3,6 +3,7 @@ package org.fatefield.engine.bench;
 import java.util.Arrays;
 import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.engine.division.CycleTimeDistribution;
+import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.tissue.GrowthSpec;
 import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.engine.tissue.TissueSpec;
@@ -51,8 +52,8 @@ public final class TissueBenchmark {
         GrowthSpec growth = new GrowthSpec(cells, template.growth().cellRadius(), template.growth().repulsionRate(),
                 new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e9, 0), template.growth().partition());
         double dt = template.timing().step();
-        TissueSpec spec = new TissueSpec(template.circuit(), template.mapping(), template.morphogen(), width, height,
-                growth, template.fates(), new Timing(dt * (repeats + 1) * steps * 3, dt, dt * steps));
+        TissueSpec spec = new TissueSpec(template.circuit(), template.mapping(), scaledField(template, width, height),
+                width, height, growth, template.fates(), new Timing(dt * (repeats + 1) * steps * 3, dt, dt * steps));
         Tissue tissue = new Tissue(spec, seed, threads);
         tissue.start();
         SignalCoupling coupling = template.mapping().couplings().get(0);
@@ -89,6 +90,45 @@ public final class TissueBenchmark {
         }
         tissue.finish();
         return new Result(tissue.cells().size(), median(tick), median(cellsOnly), median(bareLoop));
+    }
+
+    /** The template's field with its grid coarsened, if needed, to at most 2048 squares a side. */
+    private static MorphogenSpec scaledField(TissueSpec template, double width, double height) {
+        MorphogenSpec m = template.morphogen();
+        double spacing = Math.max(m.gridSpacing(), Math.max(width, height) / 2048);
+        return new MorphogenSpec(m.diffusion(), m.decay(), spacing, m.initial(), m.sources(), m.solver());
+    }
+
+    /**
+     * Heap bytes per live cell of a tissue of {@code cells} founders built like {@code template}
+     * (cells, their states and streams, the field and the work buffers, divided by the cell count),
+     * measured as the change in used heap after garbage collection; approximate.
+     */
+    public static double bytesPerCell(TissueSpec template, int cells) {
+        double scale = Math.sqrt((double) cells / template.growth().initialCells());
+        double width = template.width() * scale;
+        double height = template.height() * scale;
+        GrowthSpec growth = new GrowthSpec(cells, template.growth().cellRadius(), template.growth().repulsionRate(),
+                new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e9, 0), template.growth().partition());
+        double dt = template.timing().step();
+        TissueSpec spec = new TissueSpec(template.circuit(), template.mapping(), scaledField(template, width, height),
+                width, height, growth, template.fates(), new Timing(dt * 10, dt, dt));
+        long before = usedHeap();
+        Tissue tissue = new Tissue(spec, 1L);
+        tissue.start();
+        tissue.schedule.step(tissue);
+        long after = usedHeap();
+        double perCell = (double) (after - before) / tissue.cells().size();
+        tissue.finish();
+        return perCell;
+    }
+
+    private static long usedHeap() {
+        Runtime runtime = Runtime.getRuntime();
+        for (int i = 0; i < 3; i++) {
+            System.gc();
+        }
+        return runtime.totalMemory() - runtime.freeMemory();
     }
 
     private static double median(double[] values) {

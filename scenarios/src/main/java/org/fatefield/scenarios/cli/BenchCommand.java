@@ -39,6 +39,10 @@ final class BenchCommand implements Callable<Integer> {
             description = "thread counts for the tissue (default: ${DEFAULT-VALUE}); the bare loop runs on one")
     private List<Integer> threadCounts;
 
+    @Option(names = "--memory", paramLabel = "N", description = "also measure heap bytes per live cell at N cells"
+            + " (0 to skip; default: ${DEFAULT-VALUE})", defaultValue = "0")
+    private int memoryCells;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
@@ -75,6 +79,10 @@ final class BenchCommand implements Callable<Integer> {
         }
         out.println("Rates are cell-steps per second. loop/bare = 1 means no overhead over the one-thread bare loop;"
                 + " speed-up is the full tick against the first thread count.");
+        if (memoryCells > 0) {
+            out.printf("Heap per live cell at %d cells (cells, states, streams, field and buffers): %.0f bytes%n",
+                    memoryCells, TissueBenchmark.bytesPerCell(loaded.tissue(), memoryCells));
+        }
         if (loaded.tissue().circuit().network() instanceof SelfActivatingSwitch sw) {
             SignalCoupling c = loaded.tissue().mapping().couplings().get(0);
             CircuitBenchmark.Result r = CircuitBenchmark.measure(sw, loaded.tissue().circuit().systemSize(),
