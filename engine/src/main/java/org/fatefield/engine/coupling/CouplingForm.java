@@ -5,5 +5,7 @@ public enum CouplingForm {
     /** {@code base + gain * c}. */
     LINEAR,
     /** {@code base + gain * c^n / (K^n + c^n)}: saturating, the usual receptor-occupancy form. */
-    HILL
+    HILL,
+    /** A lookup table of (c, value) points, linear between them and constant beyond. */
+    TABLE
 }

@@ -2,6 +2,7 @@ package org.fatefield.engine.coupling;
 
 import java.util.Arrays;
 import org.fatefield.circuits.model.Hill;
+import org.fatefield.engine.field.PiecewiseLinear;
 
 /**
  * Sets one or more circuit parameters from the local morphogen level.
@@ -13,9 +14,16 @@ import org.fatefield.circuits.model.Hill;
  * @param gain             slope (linear) or maximal increase (Hill), parameter units
  * @param halfMax          morphogen level of half-maximal effect (Hill only), greater than 0
  * @param hill             Hill coefficient (Hill only), greater than 0
+ * @param table            lookup table (table form only), else null
  */
 public record SignalCoupling(String label, int[] parameterIndices, CouplingForm form, double base, double gain,
-        double halfMax, double hill) {
+        double halfMax, double hill, PiecewiseLinear table) {
+
+    /** A linear or Hill coupling. */
+    public SignalCoupling(String label, int[] parameterIndices, CouplingForm form, double base, double gain,
+            double halfMax, double hill) {
+        this(label, parameterIndices, form, base, gain, halfMax, hill, null);
+    }
 
     /** Validates and copies. */
     public SignalCoupling {
@@ -25,6 +33,9 @@ public record SignalCoupling(String label, int[] parameterIndices, CouplingForm 
         parameterIndices = parameterIndices.clone();
         if (!Double.isFinite(base) || !Double.isFinite(gain)) {
             throw new IllegalArgumentException("coupling base and gain must be finite, got " + base + ", " + gain);
+        }
+        if (form == CouplingForm.TABLE && table == null) {
+            throw new IllegalArgumentException("a table coupling needs its table of (morphogen, value) points");
         }
         if (form == CouplingForm.HILL && (!(halfMax > 0) || !(hill > 0))) {
             throw new IllegalArgumentException("a Hill coupling needs half_max > 0 and hill > 0, got "
@@ -42,6 +53,7 @@ public record SignalCoupling(String label, int[] parameterIndices, CouplingForm 
         return switch (form) {
             case LINEAR -> base + gain * c;
             case HILL -> base + gain * Hill.activation(c, halfMax, hill);
+            case TABLE -> table.at(c);
         };
     }
 

@@ -27,6 +27,8 @@ public final class MorphogenField {
     private double[] current;
     private double[] next;
     private AdiSolver adi;
+    private final boolean timeVarying;
+    private double time;
     private int adiWorkers;
 
     /**
@@ -52,10 +54,22 @@ public final class MorphogenField {
         this.next = new double[nx * ny];
         java.util.Arrays.fill(current, spec.initial());
         this.synthesis = new double[nx * ny];
+        this.timeVarying = spec.sources().stream().anyMatch(s -> !s.amplitude().isConstant());
+        setSynthesis(0.0);
+    }
+
+    /** Fills the synthesis map with every source's rate times its amplitude at time {@code t}. */
+    private void setSynthesis(double t) {
+        java.util.Arrays.fill(synthesis, 0.0);
         for (SourceRegion source : spec.sources()) {
-            for (int j = 0; j < ny; j++) {
-                for (int i = 0; i < nx; i++) {
-                    synthesis[j * nx + i] += source.rate() * source.coverage(i * h, j * h, h);
+            double rate = source.rate() * source.amplitude().at(t);
+            int i0 = Math.max(0, (int) Math.floor(source.x0() / h));
+            int i1 = Math.min(nx - 1, (int) Math.floor(source.x1() / h));
+            int j0 = Math.max(0, (int) Math.floor(source.y0() / h));
+            int j1 = Math.min(ny - 1, (int) Math.floor(source.y1() / h));
+            for (int j = j0; j <= j1; j++) {
+                for (int i = i0; i <= i1; i++) {
+                    synthesis[j * nx + i] += rate * source.coverage(i * h, j * h, h);
                 }
             }
         }
@@ -85,6 +99,10 @@ public final class MorphogenField {
      * number of workers).
      */
     public void advance(double dt, BlockParallel pool) {
+        if (timeVarying) {
+            setSynthesis(time + 0.5 * dt);
+        }
+        time += dt;
         if (spec.solver() == MorphogenSpec.Solver.ADI) {
             if (adi == null || adiWorkers < pool.workers()) {
                 adi = new AdiSolver(nx, ny, spec.diffusion(), spec.decay(), h, pool.workers());

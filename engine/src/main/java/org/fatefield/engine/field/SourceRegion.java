@@ -7,9 +7,15 @@ package org.fatefield.engine.field;
  * @param y0   bottom edge (µm)
  * @param x1   right edge (µm), greater than x0
  * @param y1   top edge (µm), greater than y0
- * @param rate synthesis rate (concentration / h), at least 0
+ * @param rate      synthesis rate (concentration / h), at least 0
+ * @param amplitude factor on the rate over time
  */
-public record SourceRegion(double x0, double y0, double x1, double y1, double rate) {
+public record SourceRegion(double x0, double y0, double x1, double y1, double rate, PiecewiseLinear amplitude) {
+
+    /** A source with a constant rate. */
+    public SourceRegion(double x0, double y0, double x1, double y1, double rate) {
+        this(x0, y0, x1, y1, rate, PiecewiseLinear.CONSTANT);
+    }
 
     /** Validates the rectangle and the rate. */
     public SourceRegion {

@@ -135,7 +135,8 @@ final class AnalyzeCommand implements Callable<Integer> {
             r = parseRange(range, "--range");
         } else if (parameter == null && !couplings.isEmpty()) {
             SignalCoupling c = couplings.get(0);
-            r = new double[] {Math.min(c.base(), c.base() + c.gain()), Math.max(c.base(), c.base() + c.gain())};
+            r = c.table() != null ? new double[] {c.table().minimum(), c.table().maximum()}
+                    : new double[] {Math.min(c.base(), c.base() + c.gain()), Math.max(c.base(), c.base() + c.gain())};
         } else {
             r = around(base[indices[0]]);
         }

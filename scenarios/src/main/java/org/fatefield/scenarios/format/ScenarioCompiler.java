@@ -18,6 +18,7 @@ import org.fatefield.engine.division.Partitioning;
 import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.fate.FateRule;
 import org.fatefield.engine.field.MorphogenSpec;
+import org.fatefield.engine.field.PiecewiseLinear;
 import org.fatefield.engine.field.SourceRegion;
 import org.fatefield.engine.tissue.CircuitSetup;
 import org.fatefield.engine.tissue.GrowthSpec;
@@ -128,7 +129,19 @@ final class ScenarioCompiler {
                         "lies outside the " + width + " x " + height + " µm domain"));
                 continue;
             }
-            sources.add(new SourceRegion(r[0], r[1], r[2], r[3], values.number(source, "morphogen.source", "rate")));
+            PiecewiseLinear amplitude = PiecewiseLinear.CONSTANT;
+            if (source.contains("amplitude")) {
+                amplitude = pairs(source, "amplitude", path + ".amplitude", "[[time, factor], ...] with times increasing"
+                        + " and factors of at least 0");
+                if (amplitude == null || amplitude.minimum() < 0) {
+                    if (amplitude != null) {
+                        values.problem(source, "amplitude", path + ".amplitude", null, "factors must be at least 0");
+                    }
+                    continue;
+                }
+            }
+            sources.add(new SourceRegion(r[0], r[1], r[2], r[3], values.number(source, "morphogen.source", "rate"),
+                    amplitude));
         }
         return new MorphogenSpec(values.number(table, "morphogen", "diffusion"), values.number(table, "morphogen", "decay"),
                 spacing, values.number(table, "morphogen", "initial"), sources, MorphogenSpec.Solver.valueOf(
@@ -158,11 +171,46 @@ final class ScenarioCompiler {
                 continue;
             }
             CouplingForm form = CouplingForm.valueOf(values.text(table, "coupling", "form").toUpperCase(Locale.ROOT));
+            PiecewiseLinear lookup = null;
+            if (form == CouplingForm.TABLE) {
+                if (!table.contains("table")) {
+                    values.problem(table, "form", "coupling[" + (i + 1) + "].table", null,
+                            "form = \"table\" needs table = [[c, value], ...]");
+                    continue;
+                }
+                lookup = pairs(table, "table", "coupling[" + (i + 1) + "].table", "[[c, value], ...] with c increasing");
+                if (lookup == null) {
+                    continue;
+                }
+            }
             couplings.add(new SignalCoupling(parameter, indices, form, values.number(table, "coupling", "base"),
                     values.number(table, "coupling", "gain"), values.number(table, "coupling", "half_max"),
-                    values.number(table, "coupling", "hill")));
+                    values.number(table, "coupling", "hill"), lookup));
         }
         return new ParameterMapping(network.defaultParameters(), couplings);
+    }
+
+    /** A table of (x, y) rows at {@code key}, or null after reporting what was wrong. */
+    private PiecewiseLinear pairs(TomlTable table, String key, String path, String expected) {
+        TomlArray rows = table.getArray(key);
+        double[] xs = new double[rows.size()];
+        double[] ys = new double[rows.size()];
+        for (int k = 0; k < rows.size(); k++) {
+            TomlArray row = rows.getArray(k);
+            if (row.size() != 2) {
+                values.problem(table, key, path, ScenarioChecker.render(rows), "must be " + expected
+                        + "; row " + (k + 1) + " has " + row.size() + " numbers");
+                return null;
+            }
+            xs[k] = ScenarioChecker.asNumber(row.get(0));
+            ys[k] = ScenarioChecker.asNumber(row.get(1));
+        }
+        try {
+            return PiecewiseLinear.of(xs, ys);
+        } catch (IllegalArgumentException e) {
+            values.problem(table, key, path, ScenarioChecker.render(rows), "must be " + expected + ": " + e.getMessage());
+            return null;
+        }
     }
 
     private List<ExtrinsicNoise> extrinsic(CircuitSetup circuit) {

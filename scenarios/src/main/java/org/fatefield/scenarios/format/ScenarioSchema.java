@@ -132,16 +132,23 @@ public final class ScenarioSchema {
                     "the diffusing morphogen (no-flux walls)"),
             new Section("morphogen.source", true, false, List.of(
                     Key.of("region", KeyType.NUMBERS, "µm", null, "rectangle [x0, y0, x1, y1] where morphogen is made"),
-                    Key.nonNegative("rate", "1/h", null, "synthesis rate (concentration per hour) inside the region")),
+                    Key.nonNegative("rate", "1/h", null, "synthesis rate (concentration per hour) inside the region"),
+                    Key.of("amplitude", KeyType.MATRIX, "h, –", "constant 1",
+                            "factor on the rate over time: [[time, factor], ...], linear between the points and"
+                                    + " constant before the first and after the last")),
                     "a region that synthesises morphogen; repeat for several"),
             new Section("coupling", true, false, List.of(
                     Key.of("parameter", KeyType.TEXT, "", null,
                             "kinetic key set by the morphogen: a key of [circuit.kinetics] for both genes, or"
                                     + " <gene>.<key> for one; the first coupling is the tissue's control parameter"),
-                    Key.choice("form", "hill", List.of("hill", "linear"),
-                            "hill: base + gain * c^n / (half_max^n + c^n); linear: base + gain * c"),
-                    Key.anyNumber("base", "parameter's unit", null, "value where there is no morphogen"),
-                    Key.anyNumber("gain", "parameter's unit", null, "maximal increase (hill) or slope per unit morphogen (linear)"),
+                    Key.choice("form", "hill", List.of("hill", "linear", "table"),
+                            "hill: base + gain * c^n / (half_max^n + c^n); linear: base + gain * c; table: the"
+                                    + " lookup table below"),
+                    Key.anyNumber("base", "parameter's unit", "0", "value where there is no morphogen (hill, linear)"),
+                    Key.anyNumber("gain", "parameter's unit", "1",
+                            "maximal increase (hill) or slope per unit morphogen (linear)"),
+                    Key.of("table", KeyType.MATRIX, "–, parameter's unit", "none",
+                            "table form: [[c, value], ...] with c increasing; linear between points, constant beyond"),
                     Key.positive("half_max", "", "1", "morphogen level of half-maximal effect (hill)"),
                     Key.positive("hill", "", "2", "Hill coefficient of the coupling (hill)")),
                     "how the local morphogen level c sets a circuit parameter in each cell"),
