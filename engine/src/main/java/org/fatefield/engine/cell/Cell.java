@@ -57,6 +57,79 @@ public final class Cell {
         this.birthY = y;
     }
 
+    /**
+     * Writes everything about this cell, its random stream's state included, so that
+     * {@link #read} rebuilds an identical cell (checkpoints).
+     */
+    public void write(java.io.DataOutputStream out) throws java.io.IOException {
+        out.writeLong(id);
+        out.writeLong(parentId);
+        out.writeInt(generation);
+        out.writeDouble(birthTime);
+        out.writeDouble(cycleTime);
+        writeArray(out, state);
+        byte[] stream = ((org.apache.commons.rng.core.RandomProviderDefaultState)
+                ((org.apache.commons.rng.RestorableUniformRandomProvider) rng).saveState()).getState();
+        out.writeInt(stream.length);
+        out.write(stream);
+        out.writeDouble(x);
+        out.writeDouble(y);
+        out.writeDouble(age);
+        out.writeDouble(signal);
+        out.writeInt(fate);
+        out.writeDouble(fateSince);
+        out.writeDouble(birthX);
+        out.writeDouble(birthY);
+        writeArray(out, scores);
+    }
+
+    /** Reads a cell written by {@link #write}; {@code rng} is any stream of the same kind, overwritten. */
+    public static Cell read(java.io.DataInputStream in, UniformRandomProvider rng) throws java.io.IOException {
+        long id = in.readLong();
+        long parentId = in.readLong();
+        int generation = in.readInt();
+        double birthTime = in.readDouble();
+        double cycleTime = in.readDouble();
+        double[] state = readArray(in);
+        byte[] stream = new byte[in.readInt()];
+        in.readFully(stream);
+        ((org.apache.commons.rng.RestorableUniformRandomProvider) rng).restoreState(
+                new org.apache.commons.rng.core.RandomProviderDefaultState(stream));
+        double x = in.readDouble();
+        double y = in.readDouble();
+        double age = in.readDouble();
+        double signal = in.readDouble();
+        int fate = in.readInt();
+        double fateSince = in.readDouble();
+        double birthX = in.readDouble();
+        double birthY = in.readDouble();
+        double[] scores = readArray(in);
+        Cell cell = new Cell(id, parentId, generation, birthTime, cycleTime, state, rng, birthX, birthY, 0.0);
+        cell.x = x;
+        cell.y = y;
+        cell.age = age;
+        cell.signal = signal;
+        cell.fate = fate;
+        cell.fateSince = fateSince;
+        cell.scores = scores.length == 0 ? NO_SCORES : scores;
+        return cell;
+    }
+
+    private static void writeArray(java.io.DataOutputStream out, double[] values) throws java.io.IOException {
+        out.writeInt(values.length);
+        for (double v : values) {
+            out.writeDouble(v);
+        }
+    }
+
+    private static double[] readArray(java.io.DataInputStream in) throws java.io.IOException {
+        double[] values = new double[in.readInt()];
+        for (int i = 0; i < values.length; i++) {
+            values[i] = in.readDouble();
+        }
+        return values;
+    }
+
     /** Unique id. */
     public long id() {
         return id;

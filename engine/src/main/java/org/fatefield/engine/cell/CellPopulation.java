@@ -21,6 +21,17 @@ public final class CellPopulation {
         return nextId++;
     }
 
+    /** The next id {@link #newId()} will give. */
+    public long peekNextId() {
+        return nextId;
+    }
+
+    /** Empties the population and sets the id counter (restoring a checkpoint). */
+    public void reset(long next) {
+        cells.clear();
+        nextId = next;
+    }
+
     /** Appends a cell. */
     public void add(Cell cell) {
         cells.add(cell);

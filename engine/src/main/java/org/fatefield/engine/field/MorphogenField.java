@@ -164,6 +164,27 @@ public final class MorphogenField {
         return index < 0 ? 0 : (index >= size ? size - 1 : index);
     }
 
+    /** Writes the concentrations and the field's clock (checkpoints). */
+    public void write(java.io.DataOutputStream out) throws java.io.IOException {
+        out.writeDouble(time);
+        out.writeInt(current.length);
+        for (double v : current) {
+            out.writeDouble(v);
+        }
+    }
+
+    /** Restores what {@link #write} wrote, into a field of the same grid. */
+    public void read(java.io.DataInputStream in) throws java.io.IOException {
+        time = in.readDouble();
+        int n = in.readInt();
+        if (n != current.length) {
+            throw new java.io.IOException("checkpoint field has " + n + " squares, this grid " + current.length);
+        }
+        for (int k = 0; k < n; k++) {
+            current[k] = in.readDouble();
+        }
+    }
+
     /** Mean concentration over the grid. */
     public double mean() {
         double sum = 0.0;

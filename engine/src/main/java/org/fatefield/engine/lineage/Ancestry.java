@@ -20,6 +20,24 @@ public final class Ancestry {
         size = Math.max(size, id + 1);
     }
 
+    /** Writes the table (checkpoints). */
+    public void write(java.io.DataOutputStream out) throws java.io.IOException {
+        out.writeLong(size);
+        for (long i = 0; i < size; i++) {
+            out.writeLong(parent[(int) i]);
+        }
+    }
+
+    /** Reads a table written by {@link #write}, replacing this one's contents. */
+    public void read(java.io.DataInputStream in) throws java.io.IOException {
+        long n = in.readLong();
+        parent = new long[(int) Math.max(1024, n)];
+        size = n;
+        for (int i = 0; i < n; i++) {
+            parent[i] = in.readLong();
+        }
+    }
+
     /** The mother of {@code id}, -1 for a founder. */
     public long parent(long id) {
         if (id < 0 || id >= size) {

@@ -1,0 +1,93 @@
+package org.fatefield.engine.tissue;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.ByteArrayInputStream;
+import java.io.ByteArrayOutputStream;
+import java.io.DataInputStream;
+import java.io.DataOutputStream;
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.List;
+import org.fatefield.circuits.model.GeneKinetics;
+import org.fatefield.circuits.model.SelfActivatingSwitch;
+import org.fatefield.engine.cell.Cell;
+import org.fatefield.engine.coupling.CouplingForm;
+import org.fatefield.engine.coupling.ParameterMapping;
+import org.fatefield.engine.coupling.SignalCoupling;
+import org.fatefield.engine.division.CycleTimeDistribution;
+import org.fatefield.engine.division.Partitioning;
+import org.fatefield.engine.fate.FateClassifier;
+import org.fatefield.engine.fate.FateRule;
+import org.fatefield.engine.field.MorphogenSpec;
+import org.fatefield.engine.field.SourceRegion;
+import org.fatefield.engine.lineage.LineageRecord;
+import org.fatefield.engine.variability.ExtrinsicNoise;
+import org.junit.jupiter.api.Test;
+
+/** A run stopped at a checkpoint and resumed equals a straight run, bit for bit. */
+class CheckpointTest {
+
+    private static TissueSpec spec() {
+        SelfActivatingSwitch sw = SelfActivatingSwitch.symmetric("A", "B",
+                new GeneKinetics(0.05, 0.2, 0.5, 4, 1.0, 0.5, 4, 1.0));
+        return new TissueSpec(new CircuitSetup(sw, NoiseMode.LANGEVIN, 50, new double[] {0.3, 0.3}),
+                new ParameterMapping(sw.defaultParameters(), List.of(new SignalCoupling("repression",
+                        sw.parameterGroup("repression"), CouplingForm.HILL, 0.2, 1.8, 1, 2))),
+                new MorphogenSpec(2000, 0.3, 10, 0, List.of(new SourceRegion(0, 0, 20, 100, 3))),
+                200, 100,
+                new GrowthSpec(60, 3, 20, new CycleTimeDistribution(CycleTimeDistribution.Kind.GAMMA, 3, 0.2),
+                        Partitioning.binomial(), GrowthSpec.DivisionAxis.RANDOM, 0.02, true),
+                new FateClassifier(List.of(
+                        new FateRule("a", new double[] {0.6, Double.NaN}, new double[] {Double.NaN, 0.35}),
+                        new FateRule("b", new double[] {Double.NaN, 0.6}, new double[] {0.35, Double.NaN})), "p"),
+                new Timing(8, 0.01, 0.5),
+                List.of(new ExtrinsicNoise("degradation", sw.parameterGroup("degradation"), 0.1, 0.8)));
+    }
+
+    @Test
+    void resumedRunEqualsTheStraightRun() throws IOException {
+        List<LineageRecord> straightRecords = new ArrayList<>();
+        Tissue straight = new Tissue(spec(), 77, 2);
+        straight.setLineageSink(straightRecords::add);
+        straight.start();
+        straight.runToEnd();
+        straight.closeLineage();
+
+        List<LineageRecord> resumedRecords = new ArrayList<>();
+        Tissue first = new Tissue(spec(), 77, 1);
+        first.setLineageSink(resumedRecords::add);
+        first.start();
+        while (first.steps() < 333) {
+            first.schedule.step(first);
+        }
+        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+        first.writeCheckpoint(new DataOutputStream(bytes));
+        first.finish();
+
+        Tissue resumed = new Tissue(spec(), 77, 2);
+        resumed.setLineageSink(resumedRecords::add);
+        resumed.start();
+        resumed.readCheckpoint(new DataInputStream(new ByteArrayInputStream(bytes.toByteArray())));
+        resumed.runToEnd();
+        resumed.closeLineage();
+
+        assertTrue(straight.cells().size() > 200, "cells " + straight.cells().size());
+        assertEquals(straight.cells().size(), resumed.cells().size());
+        for (int i = 0; i < straight.cells().size(); i++) {
+            Cell a = straight.cells().get(i);
+            Cell b = resumed.cells().get(i);
+            assertEquals(a.id(), b.id());
+            assertEquals(a.x(), b.x(), 0.0);
+            assertArrayEquals(a.state(), b.state(), 0.0);
+            assertArrayEquals(a.scores(), b.scores(), 0.0);
+        }
+        assertEquals(straight.series().rows().size(), resumed.series().rows().size());
+        for (int r = 0; r < straight.series().rows().size(); r++) {
+            assertArrayEquals(straight.series().rows().get(r).fateCounts(), resumed.series().rows().get(r).fateCounts());
+        }
+        assertEquals(straightRecords, resumedRecords);
+    }
+}
