@@ -40,6 +40,13 @@ final class RunCommand implements Callable<Integer> {
             + " results do not depend on it")
     private Integer threads;
 
+    @Option(names = "--checkpoint-every", paramLabel = "HOURS", description = "save a checkpoint every HOURS of"
+            + " simulated time, so a killed run can be resumed (default: never)")
+    private Double checkpointEvery;
+
+    @Option(names = "--resume", description = "continue the run from the checkpoint in --out (same scenario and seed)")
+    private boolean resume;
+
     @Option(names = "--quiet", description = "print nothing but errors")
     private boolean quiet;
 
@@ -72,7 +79,15 @@ final class RunCommand implements Callable<Integer> {
                 err.println("--threads must be at least 1, got " + workers);
                 return FatefieldCommand.INVALID_INPUT;
             }
-            Tissue tissue = ScenarioRunner.run(loaded, runSeed, workers, folder, force, progress);
+            long every = 0;
+            if (checkpointEvery != null) {
+                if (!(checkpointEvery > 0)) {
+                    err.println("--checkpoint-every must be greater than 0 hours, got " + checkpointEvery);
+                    return FatefieldCommand.INVALID_INPUT;
+                }
+                every = Math.max(1, Math.round(checkpointEvery / loaded.tissue().timing().step()));
+            }
+            Tissue tissue = ScenarioRunner.run(loaded, runSeed, workers, folder, force, progress, every, resume);
             if (!quiet) {
                 TimeSeries.Row last = tissue.series().last();
                 List<String> fates = tissue.series().fateNames();

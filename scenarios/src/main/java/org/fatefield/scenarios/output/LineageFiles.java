@@ -44,12 +44,34 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
 
     /** Starts streaming into {@code folder} for a run with these fate names. */
     public LineageFiles(Path folder, List<String> fates) throws IOException {
+        this(folder, fates, -1);
+    }
+
+    /**
+     * Streams into {@code folder}; with {@code resumeAt >= 0}, continues a partial table cut back
+     * to {@code resumeAt} bytes (the length it had at the checkpoint being resumed).
+     */
+    public LineageFiles(Path folder, List<String> fates, long resumeAt) throws IOException {
         this.folder = folder;
         this.partial = folder.resolve("." + TABLE + ".partial");
-        this.out = Files.newBufferedWriter(partial, StandardCharsets.UTF_8);
         this.fates = List.copyOf(fates);
-        out.write(HEADER);
-        out.write('\n');
+        if (resumeAt >= 0) {
+            try (java.nio.channels.FileChannel channel = java.nio.channels.FileChannel.open(partial,
+                    java.nio.file.StandardOpenOption.WRITE)) {
+                channel.truncate(resumeAt);
+            }
+            this.out = Files.newBufferedWriter(partial, StandardCharsets.UTF_8, java.nio.file.StandardOpenOption.APPEND);
+        } else {
+            this.out = Files.newBufferedWriter(partial, StandardCharsets.UTF_8);
+            out.write(HEADER);
+            out.write('\n');
+        }
+    }
+
+    /** Flushes what is written and returns the partial table's length in bytes (for checkpoints). */
+    public long flushedLength() throws IOException {
+        out.flush();
+        return Files.size(partial);
     }
 
     @Override

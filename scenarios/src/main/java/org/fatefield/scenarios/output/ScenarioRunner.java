@@ -45,19 +45,40 @@ public final class ScenarioRunner {
      */
     public static Tissue run(Scenario scenario, long seed, int threads, Path out, boolean force, Progress progress)
             throws IOException {
-        RunFolder.checkUsable(out, force);
+        return run(scenario, seed, threads, out, force, progress, 0, false);
+    }
+
+    /**
+     * As {@link #run(Scenario, long, int, Path, boolean, Progress)}, writing a checkpoint every
+     * {@code checkpointSteps} steps (0: never) and, with {@code resume}, continuing from the
+     * folder's checkpoint. The checkpoint is deleted once the run has finished.
+     */
+    public static Tissue run(Scenario scenario, long seed, int threads, Path out, boolean force, Progress progress,
+            long checkpointSteps, boolean resume) throws IOException {
+        Checkpoints checkpoints = new Checkpoints(out, scenario, seed);
+        Checkpoints.Saved saved = resume ? checkpoints.load() : null;
+        if (!resume) {
+            RunFolder.checkUsable(out, force);
+        }
         Instant started = Instant.now();
         long startNanos = System.nanoTime();
         Tissue tissue = new Tissue(scenario.tissue(), seed, threads);
         RunFolder folder = RunFolder.open(out);
-        LineageFiles lineage = new LineageFiles(out, scenario.tissue().fates().fateNames());
+        LineageFiles lineage = new LineageFiles(out, scenario.tissue().fates().fateNames(),
+                saved == null ? -1 : saved.lineageBytes());
         tissue.setLineageSink(lineage);
         tissue.start();
+        if (saved != null) {
+            saved.restoreInto(tissue);
+        }
         long total = scenario.tissue().timing().totalSteps();
         try (progress) {
             while (!tissue.finished()) {
                 tissue.schedule.step(tissue);
                 progress.update(tissue.steps(), total);
+                if (checkpointSteps > 0 && tissue.steps() % checkpointSteps == 0 && !tissue.finished()) {
+                    checkpoints.save(tissue, lineage.flushedLength());
+                }
             }
             tissue.closeLineage();
         } finally {
@@ -85,6 +106,7 @@ public final class ScenarioRunner {
         files.add(TISSUE_IMAGE);
         double wall = (System.nanoTime() - startNanos) / 1e9;
         folder.writeText(PROVENANCE, w -> w.write(RunProvenance.json(scenario, seed, tissue, started, wall, files)));
+        checkpoints.delete();
         return tissue;
     }
 }

@@ -116,6 +116,41 @@ class RunCommandTest {
     }
 
     @Test
+    void aKilledRunResumesFromItsCheckpointToTheSameResult() throws Exception {
+        Path scenario = tmp.resolve("long.toml");
+        Files.writeString(scenario, new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8)
+                .replace("founders = 120", "founders = 400").replace("duration = 48.0", "duration = 30.0"));
+        Path straight = tmp.resolve("straight");
+        assertEquals(0, fatefield("run", scenario.toString(), "--out", straight.toString(), "--seed", "3", "--quiet").code());
+
+        Path killed = tmp.resolve("killed");
+        Process process = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-cp", System.getProperty("java.class.path"), "-Djava.awt.headless=true",
+                FatefieldCommand.class.getName(), "run", scenario.toString(), "--out", killed.toString(), "--seed", "3",
+                "--quiet", "--threads", "1", "--checkpoint-every", "1").redirectErrorStream(true).start();
+        Path checkpoint = killed.resolve("checkpoint.bin");
+        long deadline = System.nanoTime() + 60_000_000_000L;
+        while (!Files.exists(checkpoint) && process.isAlive() && System.nanoTime() < deadline) {
+            Thread.sleep(20);
+        }
+        Thread.sleep(150);
+        process.destroyForcibly().waitFor();
+        assertTrue(Files.exists(checkpoint), "the run was killed after its first checkpoint");
+        assertFalse(Files.exists(killed.resolve("run.json")), "the killed run did not finish");
+
+        Outcome resumed = fatefield("run", scenario.toString(), "--out", killed.toString(), "--seed", "3", "--quiet",
+                "--resume");
+        assertEquals(0, resumed.code(), resumed.err());
+        for (String file : List.of("timeseries.csv", "cells.csv", "lineage.csv", "lineage.nwk", "profile.csv")) {
+            assertArrayEquals(Files.readAllBytes(straight.resolve(file)), Files.readAllBytes(killed.resolve(file)), file);
+        }
+        assertFalse(Files.exists(checkpoint), "a finished run keeps no checkpoint");
+        Outcome nothing = fatefield("run", scenario.toString(), "--out", tmp.resolve("empty").toString(), "--resume");
+        assertEquals(FatefieldCommand.OUTPUT_ERROR, nothing.code());
+        assertTrue(nothing.err().contains("nothing to resume"), nothing.err());
+    }
+
+    @Test
     void validateAcceptsTheDemoAndUnknownNamesAreExplained() {
         Outcome ok = fatefield("validate", "demo");
         assertEquals(0, ok.code());
