@@ -48,6 +48,21 @@ public final class ParameterMapping {
         }
     }
 
+    /**
+     * Overwrites the coupled entries of {@code out} from per-field levels {@code signals}
+     * (indexed by field), each coupling reading its own field.
+     */
+    public void applySignals(double[] signals, double[] out) {
+        for (SignalCoupling coupling : applied) {
+            coupling.apply(signals[coupling.field()], out);
+        }
+    }
+
+    /** Index of the field the control parameter reads (0 without couplings). */
+    public int controlField() {
+        return couplings.isEmpty() ? 0 : couplings.get(0).field();
+    }
+
     /** Value of the control parameter at morphogen level {@code c}; NaN without couplings. */
     public double controlAt(double c) {
         return couplings.isEmpty() ? Double.NaN : couplings.get(0).valueAt(c);

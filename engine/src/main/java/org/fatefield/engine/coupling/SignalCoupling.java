@@ -15,14 +15,21 @@ import org.fatefield.engine.field.PiecewiseLinear;
  * @param halfMax          morphogen level of half-maximal effect (Hill only), greater than 0
  * @param hill             Hill coefficient (Hill only), greater than 0
  * @param table            lookup table (table form only), else null
+ * @param field            index of the field it reads (0: the primary morphogen)
  */
 public record SignalCoupling(String label, int[] parameterIndices, CouplingForm form, double base, double gain,
-        double halfMax, double hill, PiecewiseLinear table) {
+        double halfMax, double hill, PiecewiseLinear table, int field) {
 
-    /** A linear or Hill coupling. */
+    /** A linear or Hill coupling to the primary field. */
     public SignalCoupling(String label, int[] parameterIndices, CouplingForm form, double base, double gain,
             double halfMax, double hill) {
-        this(label, parameterIndices, form, base, gain, halfMax, hill, null);
+        this(label, parameterIndices, form, base, gain, halfMax, hill, null, 0);
+    }
+
+    /** A coupling to the primary field. */
+    public SignalCoupling(String label, int[] parameterIndices, CouplingForm form, double base, double gain,
+            double halfMax, double hill, PiecewiseLinear table) {
+        this(label, parameterIndices, form, base, gain, halfMax, hill, table, 0);
     }
 
     /** Validates and copies. */
@@ -33,6 +40,9 @@ public record SignalCoupling(String label, int[] parameterIndices, CouplingForm 
         parameterIndices = parameterIndices.clone();
         if (!Double.isFinite(base) || !Double.isFinite(gain)) {
             throw new IllegalArgumentException("coupling base and gain must be finite, got " + base + ", " + gain);
+        }
+        if (field < 0) {
+            throw new IllegalArgumentException("field index must be at least 0, got " + field);
         }
         if (form == CouplingForm.TABLE && table == null) {
             throw new IllegalArgumentException("a table coupling needs its table of (morphogen, value) points");

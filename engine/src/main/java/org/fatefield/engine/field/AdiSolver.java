@@ -33,8 +33,13 @@ final class AdiSolver {
         this.scratch = new double[workers][3 * longest];
     }
 
-    /** Advances {@code c} (row-major, x fastest) by {@code tau} in place. */
-    void step(double[] c, double[] synthesis, double tau, BlockParallel pool) {
+    /**
+     * Advances {@code c} (row-major, x fastest) by {@code tau} in place. Cell secretion and uptake
+     * are treated explicitly in each half step; a fixed value at the left wall enters through a
+     * mirrored ghost square ({@code 2 wall - c_0}).
+     */
+    void step(double[] c, double[] synthesis, double[] cellSource, double[] cellUptake, double tau, BlockParallel pool,
+            boolean leftFixed, double wall) {
         double r = 0.5 * tau * diffusion / (h * h);
         double q = 0.25 * tau * decay;
         // Half step 1: implicit in x, explicit in y.
@@ -46,9 +51,13 @@ final class AdiSolver {
                     int k = row + i;
                     double down = j > 0 ? c[k - nx] : c[k];
                     double up = j < ny - 1 ? c[k + nx] : c[k];
-                    work[2 * nx + i] = c[k] + r * (down - 2 * c[k] + up) - q * c[k] + 0.5 * tau * synthesis[k];
+                    work[2 * nx + i] = c[k] + r * (down - 2 * c[k] + up) - q * c[k]
+                            + 0.5 * tau * (synthesis[k] + cellSource[k] - cellUptake[k] * c[k]);
                 }
-                solve(work, nx, r, q, half, row, 1);
+                if (leftFixed) {
+                    work[2 * nx] += 2 * r * wall;
+                }
+                solve(work, nx, r, q, half, row, 1, leftFixed ? 2 * r : 0);
             }
         });
         // Half step 2: implicit in y, explicit in x.
@@ -57,28 +66,29 @@ final class AdiSolver {
             for (int i = from; i < to; i++) {
                 for (int j = 0; j < ny; j++) {
                     int k = j * nx + i;
-                    double left = i > 0 ? half[k - 1] : half[k];
+                    double left = i > 0 ? half[k - 1] : leftFixed ? 2 * wall - half[k] : half[k];
                     double right = i < nx - 1 ? half[k + 1] : half[k];
                     work[2 * ny + j] = half[k] + r * (left - 2 * half[k] + right) - q * half[k]
-                            + 0.5 * tau * synthesis[k];
+                            + 0.5 * tau * (synthesis[k] + cellSource[k] - cellUptake[k] * half[k]);
                 }
-                solve(work, ny, r, q, c, i, nx);
+                solve(work, ny, r, q, c, i, nx, 0);
             }
         });
     }
 
     /**
      * Solves {@code (1 + q) x_m - r (x_(m-1) - 2 x_m + x_(m+1)) = d_m} with mirrored ends (Thomas
-     * algorithm); {@code d} sits in {@code work[2n..3n)}, the result goes to
-     * {@code out[offset + m * stride]}.
+     * algorithm), {@code firstExtra} added to the first diagonal entry (a fixed-value wall);
+     * {@code d} sits in {@code work[2n..3n)}, the result goes to {@code out[offset + m * stride]}.
      */
-    private static void solve(double[] work, int n, double r, double q, double[] out, int offset, int stride) {
+    private static void solve(double[] work, int n, double r, double q, double[] out, int offset, int stride,
+            double firstExtra) {
         if (n == 1) {
-            out[offset] = work[2] / (1 + q);
+            out[offset] = work[2] / (1 + q + firstExtra);
             return;
         }
         // work[0..n): modified super-diagonal; work[n..2n): modified right-hand side.
-        double diagonal = 1 + q + r;
+        double diagonal = 1 + q + r + firstExtra;
         work[0] = -r / diagonal;
         work[n] = work[2 * n] / diagonal;
         for (int m = 1; m < n; m++) {

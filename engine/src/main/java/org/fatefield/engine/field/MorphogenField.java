@@ -28,6 +28,8 @@ public final class MorphogenField {
     private double[] next;
     private AdiSolver adi;
     private final boolean timeVarying;
+    private final double[] exchangeSource;
+    private final double[] exchangeUptake;
     private double time;
     private int adiWorkers;
 
@@ -56,11 +58,46 @@ public final class MorphogenField {
         this.synthesis = new double[nx * ny];
         this.timeVarying = spec.sources().stream().anyMatch(s -> !s.amplitude().isConstant());
         setSynthesis(0.0);
+        this.exchangeSource = new double[nx * ny];
+        this.exchangeUptake = new double[nx * ny];
+        if (spec.profile() != null) {
+            for (int j = 0; j < ny; j++) {
+                for (int i = 0; i < nx; i++) {
+                    current[j * nx + i] = spec.profile().at((i + 0.5) * h);
+                }
+            }
+        }
+    }
+
+    private boolean leftFixed() {
+        return spec.leftWall().kind() == MorphogenSpec.WallKind.FIXED_VALUE;
+    }
+
+    /**
+     * Sets the cells' contribution for the next step: {@code amount[k]} added per hour and
+     * {@code uptake[k]} removed per hour per unit concentration, per grid square (both per unit
+     * area: divide a cell's amount by the square's area). Arrays are copied.
+     */
+    public void setCellExchange(double[] amount, double[] uptake) {
+        System.arraycopy(amount, 0, exchangeSource, 0, exchangeSource.length);
+        System.arraycopy(uptake, 0, exchangeUptake, 0, exchangeUptake.length);
+    }
+
+    /** Index of the grid square holding the point (µm). */
+    public int squareOf(double x, double y) {
+        int i = Math.min(nx - 1, Math.max(0, (int) (x / h)));
+        int j = Math.min(ny - 1, Math.max(0, (int) (y / h)));
+        return j * nx + i;
     }
 
     /** Fills the synthesis map with every source's rate times its amplitude at time {@code t}. */
     private void setSynthesis(double t) {
         java.util.Arrays.fill(synthesis, 0.0);
+        if (spec.leftWall().kind() == MorphogenSpec.WallKind.FLUX) {
+            for (int j = 0; j < ny; j++) {
+                synthesis[j * nx] += spec.leftWall().value() / h;
+            }
+        }
         for (SourceRegion source : spec.sources()) {
             double rate = source.rate() * source.amplitude().at(t);
             int i0 = Math.max(0, (int) Math.floor(source.x0() / h));
@@ -99,6 +136,10 @@ public final class MorphogenField {
      * number of workers).
      */
     public void advance(double dt, BlockParallel pool) {
+        if (spec.profile() != null) {
+            time += dt;
+            return;
+        }
         if (timeVarying) {
             setSynthesis(time + 0.5 * dt);
         }
@@ -108,7 +149,7 @@ public final class MorphogenField {
                 adi = new AdiSolver(nx, ny, spec.diffusion(), spec.decay(), h, pool.workers());
                 adiWorkers = pool.workers();
             }
-            adi.step(current, synthesis, dt, pool);
+            adi.step(current, synthesis, exchangeSource, exchangeUptake, dt, pool, leftFixed(), spec.leftWall().value());
             return;
         }
         int steps = subStepsFor(dt);
@@ -125,6 +166,8 @@ public final class MorphogenField {
     private void explicitRows(double tau, double[] c, double[] out, int fromRow, int toRow) {
         double diffusionNumber = spec.diffusion() * tau / (h * h);
         double decayFactor = 1.0 - spec.decay() * tau;
+        boolean fixed = leftFixed();
+        double wall = spec.leftWall().value();
         for (int j = fromRow; j < toRow; j++) {
             int row = j * nx;
             int down = j > 0 ? row - nx : row;
@@ -132,10 +175,11 @@ public final class MorphogenField {
             for (int i = 0; i < nx; i++) {
                 int k = row + i;
                 double centre = c[k];
-                double left = i > 0 ? c[k - 1] : centre;
+                double left = i > 0 ? c[k - 1] : fixed ? 2 * wall - centre : centre;
                 double right = i < nx - 1 ? c[k + 1] : centre;
                 double laplacian = left + right + c[down + i] + c[up + i] - 4.0 * centre;
-                out[k] = decayFactor * centre + diffusionNumber * laplacian + tau * synthesis[k];
+                out[k] = decayFactor * centre + diffusionNumber * laplacian
+                        + tau * (synthesis[k] + exchangeSource[k] - exchangeUptake[k] * centre);
             }
         }
     }

@@ -3,18 +3,91 @@ package org.fatefield.engine.field;
 import java.util.List;
 
 /**
- * Physics of one morphogen: diffusion, first-order decay and synthesis in source regions, on a
- * square grid with no-flux walls.
+ * Physics of one morphogen: diffusion, first-order decay, synthesis in source regions, an
+ * optional condition at the left wall (x = 0), and exchange with cells (secretion by cells of a
+ * given fate, first-order uptake), on a square grid whose other walls are no-flux. Or, instead, a
+ * fixed measured profile along x.
  *
+ * @param name        field name used by couplings
  * @param diffusion   diffusion coefficient (µm² / h), at least 0
  * @param decay       first-order decay rate (1 / h), at least 0
  * @param gridSpacing side of a grid square (µm), greater than 0
  * @param initial     uniform initial concentration, at least 0
  * @param sources     synthesis regions
  * @param solver      time stepping: explicit with stable sub-steps, or ADI (unconditionally stable)
+ * @param leftWall    condition at x = 0
+ * @param exchange    secretion and uptake by cells
+ * @param profile     a fixed profile along x that replaces the dynamics, or null
  */
-public record MorphogenSpec(double diffusion, double decay, double gridSpacing, double initial,
-        List<SourceRegion> sources, Solver solver) {
+public record MorphogenSpec(String name, double diffusion, double decay, double gridSpacing, double initial,
+        List<SourceRegion> sources, Solver solver, WallCondition leftWall, CellExchange exchange,
+        PiecewiseLinear profile) {
+
+    /**
+     * The left wall: no flux, a fixed concentration (a source held at a value), or an inflow.
+     *
+     * @param kind  which condition
+     * @param value the fixed concentration, or the inflow (concentration µm / h)
+     */
+    public record WallCondition(WallKind kind, double value) {
+
+        /** The default no-flux wall. */
+        public static final WallCondition NO_FLUX = new WallCondition(WallKind.NO_FLUX, 0);
+
+        /** Validates. */
+        public WallCondition {
+            if (!(value >= 0) || Double.isInfinite(value)) {
+                throw new IllegalArgumentException("wall value must be finite and at least 0, got " + value);
+            }
+        }
+    }
+
+    /** Kinds of wall condition. */
+    public enum WallKind {
+        /** Nothing crosses. */
+        NO_FLUX,
+        /** The concentration at the wall is held fixed. */
+        FIXED_VALUE,
+        /** A constant inflow. */
+        FLUX
+    }
+
+    /**
+     * Exchange between the field and the cells on it.
+     *
+     * @param secretingFate  fate index of cells that secrete, {@link #ALL} for every cell, {@link #NONE} for none
+     * @param secretionRate  amount each secreting cell adds per hour (concentration µm² / h), at least 0
+     * @param uptake         first-order uptake by cells (1 / h over the area a cell covers), at least 0
+     */
+    public record CellExchange(int secretingFate, double secretionRate, double uptake) {
+
+        /** Every cell secretes. */
+        public static final int ALL = -2;
+        /** No cell secretes. */
+        public static final int NONE = -1;
+        /** No exchange. */
+        public static final CellExchange OFF = new CellExchange(NONE, 0, 0);
+
+        /** Validates. */
+        public CellExchange {
+            if (!(secretionRate >= 0) || !(uptake >= 0) || Double.isInfinite(secretionRate) || Double.isInfinite(uptake)) {
+                throw new IllegalArgumentException("secretion and uptake must be finite and at least 0, got "
+                        + secretionRate + ", " + uptake);
+            }
+        }
+
+        /** True if cells change the field. */
+        public boolean active() {
+            return (secretingFate != NONE && secretionRate > 0) || uptake > 0;
+        }
+    }
+
+    /** A spec with no-flux walls, no cell exchange and no fixed profile. */
+    public MorphogenSpec(double diffusion, double decay, double gridSpacing, double initial,
+            List<SourceRegion> sources, Solver solver) {
+        this("morphogen", diffusion, decay, gridSpacing, initial, sources, solver, WallCondition.NO_FLUX,
+                CellExchange.OFF, null);
+    }
 
     /** How the field is advanced in time. */
     public enum Solver {
@@ -32,6 +105,9 @@ public record MorphogenSpec(double diffusion, double decay, double gridSpacing, 
 
     /** Validates every field. */
     public MorphogenSpec {
+        if (name == null || name.isBlank()) {
+            throw new IllegalArgumentException("a field needs a name");
+        }
         requireNonNegative("diffusion", diffusion);
         requireNonNegative("decay", decay);
         requireNonNegative("initial", initial);

@@ -41,6 +41,8 @@ public final class Tissue extends SimState {
     private final RandomStreams streams;
     private CellPopulation population;
     private MorphogenField field;
+    private MorphogenField[] fields;
+    private double[][] signals;
     private TimeSeries series;
     private final int threads;
     private BlockParallel pool;
@@ -81,7 +83,12 @@ public final class Tissue extends SimState {
         CircuitSetup circuit = spec.circuit();
         GrowthSpec growth = spec.growth();
         population = new CellPopulation();
-        field = new MorphogenField(spec.morphogen(), spec.width(), spec.height());
+        List<org.fatefield.engine.field.MorphogenSpec> specs = spec.fields();
+        fields = new MorphogenField[specs.size()];
+        for (int f = 0; f < fields.length; f++) {
+            fields[f] = new MorphogenField(specs.get(f), spec.width(), spec.height());
+        }
+        field = fields[0];
         series = new TimeSeries(spec.fates().fateNames());
         if (pool != null) {
             pool.close();
@@ -97,6 +104,7 @@ public final class Tissue extends SimState {
             steppers[w] = w == 0 ? prototype : prototype.copy();
             params[w] = spec.mapping().base();
         }
+        signals = new double[threads][fields.length];
         mechanics = new OverlapRepulsion(spec.width(), spec.height(), growth.repulsionRate(), growth.cellRadius());
         int species = circuit.network().speciesCount();
         firstDaughter = new double[species];
@@ -133,7 +141,12 @@ public final class Tissue extends SimState {
     /** One time step; called by {@link TissueTick}. */
     void tick() {
         double dt = spec.timing().step();
-        field.advance(dt, pool);
+        for (MorphogenField f : fields) {
+            if (f.spec().exchange().active()) {
+                exchange(f);
+            }
+            f.advance(dt, pool);
+        }
         stepCells(dt);
         steps++;
         divide();
@@ -149,7 +162,31 @@ public final class Tissue extends SimState {
         }
     }
 
+    /** Gathers secretion and uptake by the cells onto field {@code f}'s grid for the next step. */
+    private void exchange(MorphogenField f) {
+        org.fatefield.engine.field.MorphogenSpec.CellExchange exchange = f.spec().exchange();
+        int squares = f.columns() * f.rows();
+        double area = f.spacing() * f.spacing();
+        double[] amount = new double[squares];
+        double[] uptake = new double[squares];
+        double r0 = spec.growth().cellRadius();
+        for (Cell cell : population.view()) {
+            int k = f.squareOf(cell.x(), cell.y());
+            int secreting = exchange.secretingFate();
+            if (secreting == org.fatefield.engine.field.MorphogenSpec.CellExchange.ALL || secreting == cell.fate()) {
+                amount[k] += exchange.secretionRate() / area;
+            }
+            double r = cell.radius(r0);
+            uptake[k] += exchange.uptake() * Math.PI * r * r / area;
+        }
+        f.setCellExchange(amount, uptake);
+    }
+
     private void stepCells(double dt) {
+        if (fields.length > 1) {
+            stepCellsManyFields(dt);
+            return;
+        }
         MorphogenField morphogen = field;
         ParameterMapping mapping = spec.mapping();
         CellPopulation cells = population;
@@ -166,6 +203,39 @@ public final class Tissue extends SimState {
                     restoreNoisy(p);
                 }
                 mapping.applySignal(c, p);
+                for (int k = 0; k < extrinsic.size(); k++) {
+                    extrinsic.get(k).apply(cell.scores()[k], p);
+                }
+                circuit.advance(cell.liveState(), p, dt, cell.random());
+                if (dilute) {
+                    cell.dilute(dt);
+                }
+                cell.grow(dt);
+            }
+        });
+    }
+
+    /** The cell loop when couplings may read several fields. */
+    private void stepCellsManyFields(double dt) {
+        ParameterMapping mapping = spec.mapping();
+        CellPopulation cells = population;
+        boolean dilute = spec.growth().dilution();
+        List<ExtrinsicNoise> extrinsic = spec.extrinsic();
+        int control = mapping.controlField();
+        pool.forEach(cells.size(), (from, to, worker) -> {
+            CircuitStepper circuit = steppers[worker];
+            double[] p = params[worker];
+            double[] levels = signals[worker];
+            for (int i = from; i < to; i++) {
+                Cell cell = cells.get(i);
+                for (int f = 0; f < fields.length; f++) {
+                    levels[f] = fields[f].sample(cell.x(), cell.y());
+                }
+                cell.setSignal(levels[control]);
+                if (!extrinsic.isEmpty()) {
+                    restoreNoisy(p);
+                }
+                mapping.applySignals(levels, p);
                 for (int k = 0; k < extrinsic.size(); k++) {
                     extrinsic.get(k).apply(cell.scores()[k], p);
                 }
@@ -255,7 +325,7 @@ public final class Tissue extends SimState {
     private void record() {
         int[] counts = new int[spec.fates().fateCount()];
         for (Cell cell : population.view()) {
-            cell.setSignal(field.sample(cell.x(), cell.y()));
+            cell.setSignal(controlField().sample(cell.x(), cell.y()));
             int fate = spec.fates().classify(cell.liveState());
             cell.setFate(fate, time());
             counts[fate]++;
@@ -285,7 +355,9 @@ public final class Tissue extends SimState {
         for (Cell cell : population.view()) {
             cell.write(out);
         }
-        field.write(out);
+        for (MorphogenField f : fields) {
+            f.write(out);
+        }
         out.writeInt(series.rows().size());
         for (TimeSeries.Row row : series.rows()) {
             out.writeDouble(row.time());
@@ -315,7 +387,9 @@ public final class Tissue extends SimState {
         for (int i = 0; i < n; i++) {
             population.add(Cell.read(in, streams.stream(0)));
         }
-        field.read(in);
+        for (MorphogenField f : fields) {
+            f.read(in);
+        }
         series = new TimeSeries(spec.fates().fateNames());
         int rows = in.readInt();
         for (int r = 0; r < rows; r++) {
@@ -401,7 +475,17 @@ public final class Tissue extends SimState {
         return population.view();
     }
 
-    /** The morphogen field. */
+    /** Every field, the primary morphogen first. */
+    public List<MorphogenField> fields() {
+        return List.of(fields);
+    }
+
+    /** The field the control parameter (the first coupling) reads. */
+    public MorphogenField controlField() {
+        return fields[spec.mapping().controlField()];
+    }
+
+    /** The primary morphogen field. */
     public MorphogenField field() {
         return field;
     }

@@ -3,6 +3,7 @@ package org.fatefield.engine.tissue;
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.fate.FateClassifier;
 import java.util.List;
+import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.variability.ExtrinsicNoise;
 
@@ -18,9 +19,25 @@ import org.fatefield.engine.variability.ExtrinsicNoise;
  * @param fates     the fate rules
  * @param timing    duration, step and recording interval
  * @param extrinsic cell-to-cell parameter variability, inherited at division
+ * @param others    further fields besides the primary morphogen (indices 1, 2, ... for couplings)
  */
 public record TissueSpec(CircuitSetup circuit, ParameterMapping mapping, MorphogenSpec morphogen, double width,
-        double height, GrowthSpec growth, FateClassifier fates, Timing timing, List<ExtrinsicNoise> extrinsic) {
+        double height, GrowthSpec growth, FateClassifier fates, Timing timing, List<ExtrinsicNoise> extrinsic,
+        List<MorphogenSpec> others) {
+
+    /** A tissue with one field. */
+    public TissueSpec(CircuitSetup circuit, ParameterMapping mapping, MorphogenSpec morphogen, double width,
+            double height, GrowthSpec growth, FateClassifier fates, Timing timing, List<ExtrinsicNoise> extrinsic) {
+        this(circuit, mapping, morphogen, width, height, growth, fates, timing, extrinsic, List.of());
+    }
+
+    /** All fields, the primary first. */
+    public List<MorphogenSpec> fields() {
+        List<MorphogenSpec> all = new java.util.ArrayList<>();
+        all.add(morphogen);
+        all.addAll(others);
+        return all;
+    }
 
     /** A tissue without extrinsic variability. */
     public TissueSpec(CircuitSetup circuit, ParameterMapping mapping, MorphogenSpec morphogen, double width,
@@ -31,6 +48,13 @@ public record TissueSpec(CircuitSetup circuit, ParameterMapping mapping, Morphog
     /** Checks that the parts fit together. */
     public TissueSpec {
         extrinsic = List.copyOf(extrinsic);
+        others = List.copyOf(others);
+        for (SignalCoupling coupling : mapping.couplings()) {
+            if (coupling.field() > others.size()) {
+                throw new IllegalArgumentException("coupling of " + coupling.label() + " reads field " + coupling.field()
+                        + " but the tissue has " + (others.size() + 1) + " fields");
+            }
+        }
         if (!(width > 0) || !(height > 0) || Double.isInfinite(width) || Double.isInfinite(height)) {
             throw new IllegalArgumentException("domain must be finite with positive width and height, got "
                     + width + " x " + height);

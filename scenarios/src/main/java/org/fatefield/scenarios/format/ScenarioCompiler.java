@@ -19,7 +19,6 @@ import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.fate.FateRule;
 import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.field.PiecewiseLinear;
-import org.fatefield.engine.field.SourceRegion;
 import org.fatefield.engine.tissue.CircuitSetup;
 import org.fatefield.engine.tissue.GrowthSpec;
 import org.fatefield.engine.variability.ExtrinsicNoise;
@@ -37,7 +36,6 @@ import org.tomlj.TomlTable;
  */
 final class ScenarioCompiler {
 
-    private static final int MAX_GRID = 4096;
 
     private final String file;
     private final TomlParseResult toml;
@@ -46,8 +44,11 @@ final class ScenarioCompiler {
     private final TomlValues values;
 
     private final CircuitDocument circuitDocument;
+    private final java.nio.file.Path folder;
 
-    ScenarioCompiler(String file, TomlParseResult toml, ScenarioChecker locator, CircuitDocument circuitDocument) {
+    ScenarioCompiler(String file, TomlParseResult toml, ScenarioChecker locator, CircuitDocument circuitDocument,
+            java.nio.file.Path folder) {
+        this.folder = folder;
         this.file = file;
         this.toml = toml;
         this.locator = locator;
@@ -86,16 +87,21 @@ final class ScenarioCompiler {
         }
         CircuitSetup circuit = new CircuitCompiler(circuitDocument.toml(),
                 new TomlValues(circuitDocument.label(), circuitDocument.locator(), problems)).compile();
-        MorphogenSpec morphogen = morphogen(width, height);
-        ParameterMapping mapping = mapping(circuit);
         FateClassifier fates = fates(circuit);
+        FieldCompiler fieldCompiler = new FieldCompiler(toml, values, folder, width, height, fates);
+        MorphogenSpec morphogen = fieldCompiler.primary();
+        List<MorphogenSpec> others = fieldCompiler.others();
+        List<String> fieldNames = new ArrayList<>();
+        fieldNames.add(morphogen == null ? "morphogen" : morphogen.name());
+        others.forEach(o -> fieldNames.add(o.name()));
+        ParameterMapping mapping = mapping(circuit, fieldNames);
         GrowthSpec growth = growth(tissue, circuit);
         if (!problems.isEmpty()) {
             return null;
         }
         try {
             TissueSpec spec = new TissueSpec(circuit, mapping, morphogen, width, height, growth, fates,
-                    new Timing(duration, step, recordEvery), extrinsic(circuit));
+                    new Timing(duration, step, recordEvery), extrinsic(circuit), others);
             String name = scenario.contains("name") ? scenario.getString("name") : fallbackName;
             String description = scenario.contains("description") ? scenario.getString("description") : "";
             long seed = run.contains("seed") ? run.getLong("seed") : 1L;
@@ -106,49 +112,7 @@ final class ScenarioCompiler {
         }
     }
 
-    private MorphogenSpec morphogen(double width, double height) {
-        TomlTable table = toml.getTable("morphogen");
-        double spacing = values.number(table, "morphogen", "grid_spacing");
-        if (width / spacing > MAX_GRID || height / spacing > MAX_GRID) {
-            values.fail(table, "morphogen", "grid_spacing", "gives more than " + MAX_GRID
-                    + " grid squares along a side; use at least " + Math.max(width, height) / MAX_GRID + " µm");
-        }
-        List<SourceRegion> sources = new ArrayList<>();
-        TomlArray array = toml.getArrayOrEmpty("morphogen.source");
-        for (int i = 0; i < array.size(); i++) {
-            TomlTable source = array.getTable(i);
-            String path = "morphogen.source[" + (i + 1) + "]";
-            double[] r = TomlValues.numbers(source, "region", new double[0]);
-            if (r.length != 4 || !(r[2] > r[0]) || !(r[3] > r[1])) {
-                problems.add(locator.at(source, "region", path + ".region", ScenarioChecker.render(source.get("region")),
-                        "must be [x0, y0, x1, y1] in µm with x1 > x0 and y1 > y0"));
-                continue;
-            }
-            if (r[2] <= 0 || r[0] >= width || r[3] <= 0 || r[1] >= height) {
-                problems.add(locator.at(source, "region", path + ".region", ScenarioChecker.render(source.get("region")),
-                        "lies outside the " + width + " x " + height + " µm domain"));
-                continue;
-            }
-            PiecewiseLinear amplitude = PiecewiseLinear.CONSTANT;
-            if (source.contains("amplitude")) {
-                amplitude = pairs(source, "amplitude", path + ".amplitude", "[[time, factor], ...] with times increasing"
-                        + " and factors of at least 0");
-                if (amplitude == null || amplitude.minimum() < 0) {
-                    if (amplitude != null) {
-                        values.problem(source, "amplitude", path + ".amplitude", null, "factors must be at least 0");
-                    }
-                    continue;
-                }
-            }
-            sources.add(new SourceRegion(r[0], r[1], r[2], r[3], values.number(source, "morphogen.source", "rate"),
-                    amplitude));
-        }
-        return new MorphogenSpec(values.number(table, "morphogen", "diffusion"), values.number(table, "morphogen", "decay"),
-                spacing, values.number(table, "morphogen", "initial"), sources, MorphogenSpec.Solver.valueOf(
-                        values.text(table, "morphogen", "solver").toUpperCase(Locale.ROOT)));
-    }
-
-    private ParameterMapping mapping(CircuitSetup circuit) {
+    private ParameterMapping mapping(CircuitSetup circuit, List<String> fieldNames) {
         if (circuit == null) {
             return null;
         }
@@ -178,39 +142,26 @@ final class ScenarioCompiler {
                             "form = \"table\" needs table = [[c, value], ...]");
                     continue;
                 }
-                lookup = pairs(table, "table", "coupling[" + (i + 1) + "].table", "[[c, value], ...] with c increasing");
+                lookup = values.pairs(table, "table", "coupling[" + (i + 1) + "].table", "[[c, value], ...] with c increasing");
                 if (lookup == null) {
+                    continue;
+                }
+            }
+            int field = 0;
+            if (table.contains("field")) {
+                field = fieldNames.indexOf(table.getString("field"));
+                if (field < 0) {
+                    problems.add(locator.at(table, "field", "coupling[" + (i + 1) + "].field",
+                            ScenarioChecker.render(table.get("field")), "is not a field; fields are "
+                                    + String.join(", ", fieldNames)));
                     continue;
                 }
             }
             couplings.add(new SignalCoupling(parameter, indices, form, values.number(table, "coupling", "base"),
                     values.number(table, "coupling", "gain"), values.number(table, "coupling", "half_max"),
-                    values.number(table, "coupling", "hill"), lookup));
+                    values.number(table, "coupling", "hill"), lookup, field));
         }
         return new ParameterMapping(network.defaultParameters(), couplings);
-    }
-
-    /** A table of (x, y) rows at {@code key}, or null after reporting what was wrong. */
-    private PiecewiseLinear pairs(TomlTable table, String key, String path, String expected) {
-        TomlArray rows = table.getArray(key);
-        double[] xs = new double[rows.size()];
-        double[] ys = new double[rows.size()];
-        for (int k = 0; k < rows.size(); k++) {
-            TomlArray row = rows.getArray(k);
-            if (row.size() != 2) {
-                values.problem(table, key, path, ScenarioChecker.render(rows), "must be " + expected
-                        + "; row " + (k + 1) + " has " + row.size() + " numbers");
-                return null;
-            }
-            xs[k] = ScenarioChecker.asNumber(row.get(0));
-            ys[k] = ScenarioChecker.asNumber(row.get(1));
-        }
-        try {
-            return PiecewiseLinear.of(xs, ys);
-        } catch (IllegalArgumentException e) {
-            values.problem(table, key, path, ScenarioChecker.render(rows), "must be " + expected + ": " + e.getMessage());
-            return null;
-        }
     }
 
     private List<ExtrinsicNoise> extrinsic(CircuitSetup circuit) {

@@ -67,7 +67,7 @@ public final class ScenarioReader {
             }
         }
         byte[] provenance = circuit.bytes() == bytes ? bytes : concat(bytes, circuit.bytes());
-        ScenarioCompiler compiler = new ScenarioCompiler(label, toml, checker, circuit);
+        ScenarioCompiler compiler = new ScenarioCompiler(label, toml, checker, circuit, folder);
         Scenario scenario = null;
         try {
             scenario = compiler.compile(fallbackName, sha256(provenance));

@@ -33,6 +33,27 @@ public final class ScenarioSchema {
             Key.positive("repression_hill", "", "4", "Hill coefficient of the repression"),
             Key.positive("degradation", "1/h", "1.0", "first-order loss rate, dilution by growth included"));
 
+    /** Keys of [morphogen] and of each [[field]]. */
+    private static final List<Key> FIELD_KEYS = List.of(
+            Key.of("name", KeyType.TEXT, "", "\"morphogen\"", "field name, used by couplings and in figures"),
+            Key.nonNegative("diffusion", "µm²/h", "3600", "diffusion coefficient"),
+            Key.nonNegative("decay", "1/h", "0.2", "first-order decay rate"),
+            Key.positive("grid_spacing", "µm", "10", "side of a grid square of the field"),
+            Key.nonNegative("initial", "", "0", "uniform concentration at time 0"),
+            Key.choice("solver", "explicit", List.of("explicit", "adi"),
+                    "time stepping: explicit (forward Euler, sub-stepped below its stability limit) or adi"
+                            + " (Peaceman-Rachford alternating-direction implicit, stable at any step)"),
+            Key.choice("left_wall", "no-flux", List.of("no-flux", "fixed", "flux"),
+                    "condition at x = 0: no-flux, fixed (concentration held at left_value) or flux (inflow left_value)"),
+            Key.nonNegative("left_value", "concentration, or concentration µm/h", "0",
+                    "the fixed concentration or the inflow at x = 0"),
+            Key.of("secreted_by", KeyType.TEXT, "", "none", "fate whose cells secrete this field, or \"all\""),
+            Key.nonNegative("secretion_rate", "concentration µm²/h", "0", "amount each secreting cell adds per hour"),
+            Key.nonNegative("uptake", "1/h", "0", "first-order uptake by cells, over the area each cell covers"),
+            Key.of("profile", KeyType.TEXT, "", "none",
+                    "a CSV file (columns x_um, value) in this scenario's folder: a measured profile along x, fixed in"
+                            + " time, that replaces the dynamics"));
+
     private static final List<Section> SECTIONS = List.of(
             new Section("scenario", false, false, List.of(
                     Key.of("name", KeyType.TEXT, "", "file name", "short name shown in outputs"),
@@ -121,15 +142,8 @@ public final class ScenarioSchema {
                                     + " parentheses, exp, log, sqrt, abs, min, max, hill_act(x, K, n) = x^n/(K^n+x^n),"
                                     + " hill_rep(x, K, n) = K^n/(K^n+x^n)")),
                     "a reaction of a custom circuit; repeat for each"),
-            new Section("morphogen", false, true, List.of(
-                    Key.nonNegative("diffusion", "µm²/h", "3600", "diffusion coefficient"),
-                    Key.nonNegative("decay", "1/h", "0.2", "first-order decay rate"),
-                    Key.positive("grid_spacing", "µm", "10", "side of a grid square of the field"),
-                    Key.nonNegative("initial", "", "0", "uniform concentration at time 0"),
-                    Key.choice("solver", "explicit", List.of("explicit", "adi"),
-                            "time stepping: explicit (forward Euler, sub-stepped below its stability limit) or adi"
-                                    + " (Peaceman-Rachford alternating-direction implicit, stable at any step)")),
-                    "the diffusing morphogen (no-flux walls)"),
+            new Section("morphogen", false, true, FIELD_KEYS, "the primary diffusing morphogen (no-flux walls unless"
+                    + " left_wall says otherwise)"),
             new Section("morphogen.source", true, false, List.of(
                     Key.of("region", KeyType.NUMBERS, "µm", null, "rectangle [x0, y0, x1, y1] where morphogen is made"),
                     Key.nonNegative("rate", "1/h", null, "synthesis rate (concentration per hour) inside the region"),
@@ -137,7 +151,11 @@ public final class ScenarioSchema {
                             "factor on the rate over time: [[time, factor], ...], linear between the points and"
                                     + " constant before the first and after the last")),
                     "a region that synthesises morphogen; repeat for several"),
+            new Section("field", true, false, FIELD_KEYS,
+                    "a further field besides [morphogen] (same keys; fed by its left wall or by cells, since"
+                            + " [[morphogen.source]] regions belong to the primary field); couplings pick it by name"),
             new Section("coupling", true, false, List.of(
+                    Key.of("field", KeyType.TEXT, "", "the primary morphogen", "name of the field the coupling reads"),
                     Key.of("parameter", KeyType.TEXT, "", null,
                             "kinetic key set by the morphogen: a key of [circuit.kinetics] for both genes, or"
                                     + " <gene>.<key> for one; the first coupling is the tissue's control parameter"),

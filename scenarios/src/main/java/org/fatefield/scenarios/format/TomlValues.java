@@ -2,6 +2,7 @@ package org.fatefield.scenarios.format;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.fatefield.engine.field.PiecewiseLinear;
 import org.tomlj.TomlArray;
 import org.tomlj.TomlTable;
 
@@ -122,4 +123,28 @@ final class TomlValues {
             problems.add(locator.at(table, key, section + "." + key, ScenarioChecker.render(value), message));
         }
     }
+
+    /** A table of (x, y) rows at {@code key}, or null after reporting what was wrong. */
+    PiecewiseLinear pairs(TomlTable table, String key, String path, String expected) {
+        TomlArray rows = table.getArray(key);
+        double[] xs = new double[rows.size()];
+        double[] ys = new double[rows.size()];
+        for (int k = 0; k < rows.size(); k++) {
+            TomlArray row = rows.getArray(k);
+            if (row.size() != 2) {
+                problem(table, key, path, ScenarioChecker.render(rows), "must be " + expected
+                        + "; row " + (k + 1) + " has " + row.size() + " numbers");
+                return null;
+            }
+            xs[k] = ScenarioChecker.asNumber(row.get(0));
+            ys[k] = ScenarioChecker.asNumber(row.get(1));
+        }
+        try {
+            return PiecewiseLinear.of(xs, ys);
+        } catch (IllegalArgumentException e) {
+            problem(table, key, path, ScenarioChecker.render(rows), "must be " + expected + ": " + e.getMessage());
+            return null;
+        }
+    }
+
 }

@@ -36,7 +36,7 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
         int fates = tissue.spec().fates().fateCount();
         return new RunMetrics(FateProfile.of(tissue.cells(), fates, width, bins),
                 LineageStatistics.of(tissue.cells(), tissue.ancestry(), fates),
-                PredictedBoundary.of(tissue.spec(), tissue.field()));
+                PredictedBoundary.of(tissue.spec(), tissue.controlField()));
     }
 
     /** Writes the three tables and the JSON summary into {@code folder}; returns their names. */

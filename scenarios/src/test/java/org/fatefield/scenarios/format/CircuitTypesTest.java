@@ -161,6 +161,34 @@ class CircuitTypesTest {
     }
 
     @Test
+    void furtherFieldsSecretionAndMeasuredProfiles(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
+            throws Exception {
+        String demo = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8);
+        java.nio.file.Files.writeString(dir.resolve("glim.csv"), "x_um,value\n0,3.0\n300,0.5\n600,0.0\n");
+        String text = demo.replace("initial = 0.0\n", "initial = 0.0\nprofile = \"glim.csv\"\n")
+                .replace("[[coupling]]", "[[field]]\nname = \"quench\"\ndiffusion = 400.0\ndecay = 1.0\n"
+                        + "secreted_by = \"photocyte\"\nsecretion_rate = 50.0\nuptake = 0.1\n\n[[coupling]]")
+                .replace("hill = 2\n", "hill = 2\n\n[[coupling]]\nparameter = \"Lum.basal\"\nfield = \"quench\"\n"
+                        + "form = \"linear\"\nbase = 0.05\ngain = -0.01\n");
+        java.nio.file.Path file = dir.resolve("two-fields.toml");
+        java.nio.file.Files.writeString(file, text);
+        Scenario s = ScenarioReader.read(file);
+        assertEquals(1, s.tissue().others().size());
+        assertEquals("quench", s.tissue().others().get(0).name());
+        assertEquals(1, s.tissue().mapping().couplings().get(1).field());
+        assertEquals(0, s.tissue().others().get(0).exchange().secretingFate());
+        org.fatefield.engine.field.MorphogenField measured = new org.fatefield.engine.field.MorphogenField(
+                s.tissue().morphogen(), 600, 300);
+        // Square 14 is centred at x = 145 µm: 3.0 + (0.5 - 3.0) * 145 / 300 by the table.
+        assertEquals(3.0 - 2.5 * 145 / 300, measured.value(14, 3), 1e-12);
+
+        java.nio.file.Files.writeString(file, text.replace("field = \"quench\"", "field = \"quenc\"")
+                .replace("secreted_by = \"photocyte\"", "secreted_by = \"photocytes\""));
+        ScenarioException e = assertThrows(ScenarioException.class, () -> ScenarioReader.read(file));
+        assertTrue(e.getMessage().contains("secreted_by = \"photocytes\": is not a fate"), e.getMessage());
+    }
+
+    @Test
     void sectionsOfAnotherTypeAreRejected() {
         String text = demoWithCircuit(CUSTOM_CIRCUIT.replace("type = \"custom\"", "type = \"self-activating-switch\""));
         ScenarioException e = assertThrows(ScenarioException.class, () -> read(text));

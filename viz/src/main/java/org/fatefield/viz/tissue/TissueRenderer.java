@@ -61,7 +61,7 @@ public final class TissueRenderer {
             drawAxes(g, width, height, scale, plotWidth, plotHeight);
             g.setFont(TITLE);
             g.drawString(title, LEFT, TOP - 18);
-            drawLegend(g, fates, counts, LEFT + plotWidth + 24, TOP, fieldMax, plotHeight);
+            drawLegend(g, fates, counts, LEFT + plotWidth + 24, TOP, fieldMax, plotHeight, tissue.field().spec().name());
         } finally {
             g.dispose();
         }
@@ -127,7 +127,7 @@ public final class TissueRenderer {
     }
 
     private static void drawLegend(Graphics2D g, List<String> fates, int[] counts, int x, int y, double fieldMax,
-            int plotHeight) {
+            int plotHeight, String fieldName) {
         g.setFont(LABEL);
         g.setColor(new Color(0x222222));
         g.drawString("fate (cells)", x, y + 12);
@@ -143,7 +143,7 @@ public final class TissueRenderer {
         int barTop = row + 30;
         int barHeight = Math.max(60, Math.min(160, TOP + plotHeight - barTop));
         g.setFont(LABEL);
-        g.drawString("morphogen", x, barTop - 10);
+        g.drawString(fieldName, x, barTop - 10);
         for (int k = 0; k < barHeight; k++) {
             g.setColor(FatePalette.morphogen(1.0 - (double) k / (barHeight - 1)));
             g.fillRect(x, barTop + k, 18, 1);
