@@ -6,10 +6,12 @@ import org.fatefield.engine.cell.CellPopulation;
 import org.fatefield.engine.parallel.BlockParallel;
 
 /**
- * Overdamped relaxation of overlapping discs inside a rectangle with walls.
+ * Overdamped relaxation of overlapping discs inside a rectangle (or the disc inscribed in it)
+ * with walls.
  *
  * <p>Each overlapping pair pushes apart along the line of centres with speed
- * {@code rate * overlap} shared equally, and walls hold every disc inside the domain. Forces come
+ * {@code rate * overlap} shared equally; with adhesion, neighbours a little beyond contact pull
+ * together with speed {@code adhesion * gap}; walls hold every disc inside the domain. Forces come
  * from a snapshot of positions (so the result does not depend on the order cells are visited)
  * and neighbours from a uniform bucket grid of side one largest diameter, so a step costs time
  * linear in the number of cells.
@@ -20,6 +22,9 @@ public final class OverlapRepulsion {
     private final double height;
     private final double rate;
     private final double newbornRadius;
+    private final double adhesion;
+    private final double adhesionRange;
+    private final boolean disc;
     private double[] px = new double[0];
     private double[] py = new double[0];
     private double[] pr = new double[0];
@@ -35,13 +40,31 @@ public final class OverlapRepulsion {
      * @param newbornRadius radius of a newborn cell (µm); cells reach sqrt(2) times it
      */
     public OverlapRepulsion(double width, double height, double rate, double newbornRadius) {
+        this(width, height, rate, newbornRadius, 0, 0.2, false);
+    }
+
+    /**
+     * @param adhesion      attraction rate (1 / h): speed per µm of gap between neighbours closer than
+     *                      contact distance times {@code 1 + adhesionRange}, at least 0
+     * @param adhesionRange reach of adhesion beyond contact, as a fraction of the contact distance
+     * @param disc          true to confine cells to the disc inscribed in the rectangle
+     */
+    public OverlapRepulsion(double width, double height, double rate, double newbornRadius, double adhesion,
+            double adhesionRange, boolean disc) {
         if (!(rate >= 0) || Double.isInfinite(rate)) {
             throw new IllegalArgumentException("repulsion rate must be finite and at least 0, got " + rate);
+        }
+        if (!(adhesion >= 0) || !(adhesionRange >= 0) || Double.isInfinite(adhesion) || adhesionRange > 1) {
+            throw new IllegalArgumentException("adhesion must be at least 0 and its range in [0, 1], got " + adhesion
+                    + ", " + adhesionRange);
         }
         this.width = width;
         this.height = height;
         this.rate = rate;
         this.newbornRadius = newbornRadius;
+        this.adhesion = adhesion;
+        this.adhesionRange = adhesionRange;
+        this.disc = disc;
     }
 
     /** Moves every cell by one overdamped step of {@code dt} hours, on the caller's thread. */
@@ -67,17 +90,29 @@ public final class OverlapRepulsion {
                 pr[i] = c.radius(newbornRadius);
             }
         });
-        double side = 2.0 * Math.sqrt(2.0) * newbornRadius;
+        double side = 2.0 * Math.sqrt(2.0) * newbornRadius * (1 + (adhesion > 0 ? adhesionRange : 0));
         int gx = Math.max(1, (int) Math.ceil(width / side));
         int gy = Math.max(1, (int) Math.ceil(height / side));
         fillBuckets(n, gx, gy, side);
-        double step = 0.5 * rate * dt;
+        double step = 0.5 * dt;
         pool.forEach(n, (from, to, worker) -> forces(from, to, gx, gy, side, step));
         pool.forEach(n, (from, to, worker) -> {
             for (int i = from; i < to; i++) {
                 double r = Math.min(pr[i], 0.5 * Math.min(width, height));
                 double nxp = Math.min(Math.max(px[i] + dx[i], r), width - r);
                 double nyp = Math.min(Math.max(py[i] + dy[i], r), height - r);
+                if (disc) {
+                    double cx = 0.5 * width;
+                    double cy = 0.5 * height;
+                    double limit = 0.5 * Math.min(width, height) - r;
+                    double ex = nxp - cx;
+                    double ey = nyp - cy;
+                    double d = Math.hypot(ex, ey);
+                    if (d > limit && d > 0) {
+                        nxp = cx + ex * limit / d;
+                        nyp = cy + ey * limit / d;
+                    }
+                }
                 population.get(i).moveTo(nxp, nyp);
             }
         });
@@ -102,16 +137,24 @@ public final class OverlapRepulsion {
                         double reach = pr[i] + pr[j];
                         double d2 = ex * ex + ey * ey;
                         if (d2 >= reach * reach) {
+                            double far = reach * (1 + adhesionRange);
+                            if (adhesion > 0 && d2 < far * far) {
+                                // Adhesion pulls neighbours within reach back towards contact.
+                                double d = Math.sqrt(d2);
+                                double pull = adhesion * (d - reach) / d;
+                                fx -= ex * pull;
+                                fy -= ey * pull;
+                            }
                             continue;
                         }
                         double d = Math.sqrt(d2);
                         if (d > 1e-12) {
-                            double push = (reach - d) / d;
+                            double push = rate * (reach - d) / d;
                             fx += ex * push;
                             fy += ey * push;
                         } else {
                             // Coincident centres: separate along x by index order, deterministically.
-                            fx += i < j ? -reach : reach;
+                            fx += rate * (i < j ? -reach : reach);
                         }
                     }
                 }

@@ -15,9 +15,17 @@ import org.fatefield.engine.division.Partitioning;
  * @param deathRate     probability per hour that a cell dies and is removed (extrusion), at least 0
  * @param dilution      if true, concentrations dilute as the cell's volume grows (volume doubles
  *                      linearly over the cycle); if false, degradation rates are taken to include dilution
+ * @param adhesion      attraction rate between near neighbours (1 / h), at least 0
+ * @param disc          true to confine cells to the disc inscribed in the domain rectangle
  */
 public record GrowthSpec(int initialCells, double cellRadius, double repulsionRate, CycleTimeDistribution cycle,
-        Partitioning partition, DivisionAxis axis, double deathRate, boolean dilution) {
+        Partitioning partition, DivisionAxis axis, double deathRate, boolean dilution, double adhesion, boolean disc) {
+
+    /** Without adhesion, in a rectangle. */
+    public GrowthSpec(int initialCells, double cellRadius, double repulsionRate, CycleTimeDistribution cycle,
+            Partitioning partition, DivisionAxis axis, double deathRate, boolean dilution) {
+        this(initialCells, cellRadius, repulsionRate, cycle, partition, axis, deathRate, dilution, 0, false);
+    }
 
     /** Direction of the division axis. */
     public enum DivisionAxis {
@@ -32,7 +40,7 @@ public record GrowthSpec(int initialCells, double cellRadius, double repulsionRa
     /** Random axis, no death, dilution folded into degradation. */
     public GrowthSpec(int initialCells, double cellRadius, double repulsionRate, CycleTimeDistribution cycle,
             Partitioning partition) {
-        this(initialCells, cellRadius, repulsionRate, cycle, partition, DivisionAxis.RANDOM, 0.0, false);
+        this(initialCells, cellRadius, repulsionRate, cycle, partition, DivisionAxis.RANDOM, 0.0, false, 0, false);
     }
 
     /** Validates. */
@@ -45,6 +53,9 @@ public record GrowthSpec(int initialCells, double cellRadius, double repulsionRa
         }
         if (!(repulsionRate >= 0) || Double.isInfinite(repulsionRate)) {
             throw new IllegalArgumentException("repulsion rate must be finite and at least 0, got " + repulsionRate);
+        }
+        if (!(adhesion >= 0) || Double.isInfinite(adhesion)) {
+            throw new IllegalArgumentException("adhesion must be finite and at least 0, got " + adhesion);
         }
         if (!(deathRate >= 0) || Double.isInfinite(deathRate)) {
             throw new IllegalArgumentException("death rate must be finite and at least 0, got " + deathRate);

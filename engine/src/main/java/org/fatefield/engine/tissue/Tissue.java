@@ -105,7 +105,8 @@ public final class Tissue extends SimState {
             params[w] = spec.mapping().base();
         }
         signals = new double[threads][fields.length];
-        mechanics = new OverlapRepulsion(spec.width(), spec.height(), growth.repulsionRate(), growth.cellRadius());
+        mechanics = new OverlapRepulsion(spec.width(), spec.height(), growth.repulsionRate(), growth.cellRadius(),
+                growth.adhesion(), 0.2, growth.disc());
         int species = circuit.network().speciesCount();
         firstDaughter = new double[species];
         secondDaughter = new double[species];
@@ -116,8 +117,13 @@ public final class Tissue extends SimState {
         UniformRandomProvider placement = streams.stream(PLACEMENT_STREAM);
         double r = growth.cellRadius();
         for (int i = 0; i < growth.initialCells(); i++) {
-            double x = r + (spec.width() - 2 * r) * placement.nextDouble();
-            double y = r + (spec.height() - 2 * r) * placement.nextDouble();
+            double x;
+            double y;
+            do {
+                x = r + (spec.width() - 2 * r) * placement.nextDouble();
+                y = r + (spec.height() - 2 * r) * placement.nextDouble();
+            } while (growth.disc() && Math.hypot(x - 0.5 * spec.width(), y - 0.5 * spec.height())
+                    > 0.5 * Math.min(spec.width(), spec.height()) - r);
             long id = population.newId();
             UniformRandomProvider rng = streams.stream(id);
             double cycle = growth.cycle().sample(rng);

@@ -34,6 +34,34 @@ class OverlapRepulsionTest {
     }
 
     @Test
+    void adhesionClosesASmallGapExponentially() {
+        // Gap g between neighbours within reach obeys g' = -adhesion g (each moves adhesion g / 2);
+        // explicit Euler gives g0 (1 - adhesion dt)^n exactly.
+        CellPopulation population = new CellPopulation();
+        population.add(cellAt(0, 50, 50));
+        population.add(cellAt(1, 55.6, 50));
+        OverlapRepulsion mechanics = new OverlapRepulsion(100, 100, 10.0, 2.5, 4.0, 0.2, false);
+        for (int i = 0; i < 100; i++) {
+            mechanics.relax(population, 0.01);
+        }
+        double gap = population.get(1).x() - population.get(0).x() - 5.0;
+        assertEquals(0.6 * Math.pow(1 - 4.0 * 0.01, 100), gap, 1e-9);
+    }
+
+    @Test
+    void cellsStayInsideADisc() {
+        CellPopulation population = new CellPopulation();
+        for (int i = 0; i < 200; i++) {
+            population.add(cellAt(i, 5 + 0.4 * i, 5 + 0.3 * (i % 17)));
+        }
+        OverlapRepulsion mechanics = new OverlapRepulsion(100, 60, 20.0, 1.0, 0, 0.2, true);
+        mechanics.relax(population, 0.01);
+        for (Cell c : population.view()) {
+            assertTrue(Math.hypot(c.x() - 50, c.y() - 30) <= 30 - 1.0 + 1e-9, c.x() + "," + c.y());
+        }
+    }
+
+    @Test
     void cellsStayInsideTheWalls() {
         CellPopulation population = new CellPopulation();
         for (int i = 0; i < 50; i++) {

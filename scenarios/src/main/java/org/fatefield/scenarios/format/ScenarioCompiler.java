@@ -268,7 +268,8 @@ final class ScenarioCompiler {
                 values.number(tissue, "tissue", "repulsion"),
                 new CycleTimeDistribution(kind, values.number(division, "division", "cycle_mean"), cv), partition,
                 GrowthSpec.DivisionAxis.valueOf(values.text(division, "division", "axis").toUpperCase(Locale.ROOT)),
-                values.number(division, "division", "death_rate"), dilution);
+                values.number(division, "division", "death_rate"), dilution, values.number(tissue, "tissue", "adhesion"),
+                values.text(tissue, "tissue", "shape").equals("disc"));
     }
 
 }

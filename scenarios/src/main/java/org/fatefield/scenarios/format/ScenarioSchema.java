@@ -72,7 +72,12 @@ public final class ScenarioSchema {
                     Key.integer("founders", "200", 1, 2_000_000, "cells at time 0, placed uniformly at random"),
                     Key.positive("cell_radius", "µm", "5", "radius of a newborn cell; a cell's area doubles over its cycle"),
                     Key.nonNegative("repulsion", "1/h", "20",
-                            "overlap relaxation rate: speed (µm/h) per µm of overlap; keep repulsion * step below 0.2")),
+                            "overlap relaxation rate: speed (µm/h) per µm of overlap; keep repulsion * step below 0.2"),
+                    Key.nonNegative("adhesion", "1/h", "0",
+                            "attraction between neighbours up to 20% beyond contact: speed (µm/h) per µm of gap"),
+                    Key.choice("shape", "rectangle", List.of("rectangle", "disc"),
+                            "where cells live: the width x height rectangle, or the disc inscribed in it (the fields"
+                                    + " cover the whole rectangle)")),
                     "the domain (a rectangle with walls) and its founder cells"),
             new Section("division", false, false, List.of(
                     Key.choice("cycle", "gamma", List.of("fixed", "gamma", "lognormal"), "cycle-time distribution"),
