@@ -1,0 +1,152 @@
+package org.fatefield.scenarios.sweep;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Set;
+import org.fatefield.circuits.random.RandomStreams;
+import org.fatefield.scenarios.builtin.BuiltinScenarios;
+import org.fatefield.scenarios.cli.FatefieldCommandAccess;
+import org.fatefield.scenarios.format.ScenarioReader;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class SweepTest {
+
+    @TempDir
+    Path tmp;
+
+    private Path sweepFile(String design, int points, int replicates) throws IOException {
+        String demo = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8)
+                .replace("duration = 48.0", "duration = 6.0").replace("founders = 120", "founders = 40");
+        Files.writeString(tmp.resolve("base.toml"), demo);
+        Path file = tmp.resolve(design + ".toml");
+        Files.writeString(file, "[sweep]\nscenario = \"base.toml\"\ndesign = \"" + design + "\"\npoints = " + points
+                + "\nreplicates = " + replicates + "\nseed = 11\n\n[[parameter]]\nkey = \"morphogen.source[1].rate\"\n"
+                + (design.equals("grid") ? "values = [1.5, 3.0, 6.0]\n" : "low = 1.0\nhigh = 8.0\nscale = \"log\"\n")
+                + "\n[[parameter]]\nkey = \"coupling[1].gain\"\n"
+                + (design.equals("grid") ? "values = [1.2, 1.8]\n" : "low = 1.0\nhigh = 2.0\n"));
+        return file;
+    }
+
+    @Test
+    void shardsCoverEveryRunExactlyOnce() throws Exception {
+        Manifest manifest = Manifest.plan(SweepDefinition.read(sweepFile("grid", 1, 4)));
+        assertEquals(24, manifest.runs().size());
+        Set<String> seen = new HashSet<>();
+        for (int shard = 1; shard <= 3; shard++) {
+            for (Manifest.Run run : manifest.shard(shard, 3)) {
+                assertTrue(seen.add(run.id()), "run " + run.id() + " in two shards");
+            }
+        }
+        assertEquals(24, seen.size());
+        // SLURM array task 5 of 7 (ids 3..9) is shard 3/7.
+        assertArrayEquals(new int[] {3, 7}, FatefieldCommandAccess.shard(null,
+                java.util.Map.of("SLURM_ARRAY_TASK_ID", "5", "SLURM_ARRAY_TASK_COUNT", "7", "SLURM_ARRAY_TASK_MIN", "3")));
+    }
+
+    @Test
+    void planningIsDeterministicAndSeedsDependOnlyOnPointAndReplicate() throws Exception {
+        Manifest a = Manifest.plan(SweepDefinition.read(sweepFile("latin-hypercube", 6, 2)));
+        Manifest b = Manifest.plan(SweepDefinition.read(sweepFile("latin-hypercube", 6, 2)));
+        for (int i = 0; i < a.runs().size(); i++) {
+            assertEquals(a.runs().get(i).seed(), b.runs().get(i).seed());
+            assertArrayEquals(a.runs().get(i).values(), b.runs().get(i).values(), 0.0);
+        }
+        assertEquals(12, new HashSet<>(a.runs().stream().map(Manifest.Run::seed).toList()).size());
+    }
+
+    @Test
+    void latinHypercubeHitsEachStratumOncePerDimension() {
+        // The defining property (McKay, Beckman & Conover 1979).
+        int k = 25;
+        List<double[]> points = Designs.latinHypercube(k, 4, RandomStreams.of(3).stream(0));
+        for (int d = 0; d < 4; d++) {
+            boolean[] hit = new boolean[k];
+            for (double[] p : points) {
+                int stratum = (int) Math.floor(p[d] * k);
+                assertFalse(hit[stratum], "stratum " + stratum + " hit twice in dimension " + d);
+                hit[stratum] = true;
+            }
+        }
+    }
+
+    @Test
+    void sobolPointsFollowTheDirectionNumberConstruction() {
+        // First points after the origin of the two-dimensional Sobol sequence in Gray-code order
+        // with the Joe & Kuo (2008) direction numbers (dimension 2: s = 1, a = 0, m = 1); from memory.
+        double[][] expected = {{0.5, 0.5}, {0.75, 0.25}, {0.25, 0.75}, {0.375, 0.375}, {0.875, 0.875},
+            {0.625, 0.125}, {0.125, 0.625}};
+        List<double[]> points = Designs.sobol(7, 2);
+        for (int i = 0; i < expected.length; i++) {
+            assertArrayEquals(expected[i], points.get(i), 0.0, "point " + (i + 1));
+        }
+    }
+
+    @Test
+    void overridesProduceValidScenariosWithTheNewValues() throws Exception {
+        String demo = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8);
+        String text = ScenarioOverrides.of(demo).with("morphogen.source[1].rate", 4.5).with("tissue.founders", 77)
+                .with("circuit.kinetics.Ark.degradation", 1.25).toToml();
+        var scenario = ScenarioReader.parse("v", "v", text.getBytes(StandardCharsets.UTF_8));
+        assertEquals(4.5, scenario.tissue().morphogen().sources().get(0).rate(), 0.0);
+        assertEquals(77, scenario.tissue().growth().initialCells());
+        var names = scenario.tissue().circuit().network().parameterNames();
+        assertEquals(1.25, scenario.tissue().mapping().base()[names.indexOf("Ark.degradation")], 0.0);
+        assertEquals(1.0, scenario.tissue().mapping().base()[names.indexOf("Lum.degradation")], 0.0);
+    }
+
+    @Test
+    void aKilledSweepResumesToTheSameTableAndCorruptResultsAreRerun() throws Exception {
+        Path file = sweepFile("grid", 1, 2);
+        Path straight = tmp.resolve("straight");
+        Path killed = tmp.resolve("killed");
+        assertEquals(0, FatefieldCommandAccess.run("sweep", "plan", file.toString(), "--out", straight.toString()));
+        assertEquals(0, FatefieldCommandAccess.run("sweep", "plan", file.toString(), "--out", killed.toString()));
+        assertEquals(0, FatefieldCommandAccess.run("sweep", "run", straight.toString(), "--workers", "2"));
+        assertEquals(0, FatefieldCommandAccess.run("sweep", "collect", straight.toString()));
+
+        Process process = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
+                "-cp", System.getProperty("java.class.path"), "-Djava.awt.headless=true",
+                "org.fatefield.scenarios.cli.FatefieldCommand", "sweep", "run", killed.toString(), "--workers", "1")
+                .redirectErrorStream(true).redirectOutput(tmp.resolve("killed.log").toFile()).start();
+        Path results = killed.resolve(SweepRunner.RESULTS);
+        long deadline = System.nanoTime() + 60_000_000_000L;
+        while (process.isAlive() && System.nanoTime() < deadline && countResults(results) < 2) {
+            Thread.sleep(10);
+        }
+        process.destroyForcibly().waitFor();
+        int before = countResults(results);
+        assertTrue(before >= 2 && before < 12, "killed after " + before + " of 12 results");
+        // Truncate one finished result: it must be detected and rerun, never merged.
+        Path victim;
+        try (var files = Files.list(results)) {
+            victim = files.filter(f -> f.getFileName().toString().endsWith(".json")).findFirst().orElseThrow();
+        }
+        Files.writeString(victim, "{\"run_id\": \"p00");
+        assertEquals(0, FatefieldCommandAccess.run("sweep", "run", killed.toString(), "--workers", "2"));
+        assertEquals(0, FatefieldCommandAccess.run("sweep", "collect", killed.toString()));
+        assertArrayEquals(Files.readAllBytes(straight.resolve("runs.csv")), Files.readAllBytes(killed.resolve("runs.csv")));
+        assertArrayEquals(Files.readAllBytes(straight.resolve("summary.csv")),
+                Files.readAllBytes(killed.resolve("summary.csv")));
+    }
+
+    private static int countResults(Path results) throws IOException {
+        if (!Files.isDirectory(results)) {
+            return 0;
+        }
+        try (var files = Files.list(results)) {
+            return (int) files.filter(f -> f.getFileName().toString().matches("p\\d+-r\\d+\\.json")).count();
+        }
+    }
+}
