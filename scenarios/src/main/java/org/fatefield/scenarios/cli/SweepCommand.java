@@ -184,8 +184,13 @@ final class SweepCommand implements Runnable {
                 SlurmScript script = new SlurmScript(n, time, memory, cpus, concurrent);
                 Path jar = Path.of(FatefieldCommand.class.getProtectionDomain().getCodeSource().getLocation().toURI());
                 String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
+                // From the packaged jar: java -jar; from classes (development, tests): the class path.
+                String launcher = Files.isRegularFile(jar)
+                        ? "\"" + java + "\" -jar \"" + jar.toAbsolutePath() + "\""
+                        : "\"" + java + "\" -Djava.awt.headless=true -cp \"" + System.getProperty("java.class.path")
+                                + "\" " + FatefieldCommand.class.getName();
                 Files.createDirectories(folder.resolve("logs"));
-                Files.writeString(folder.resolve("sweep.sbatch"), script.text(folder, jar, java));
+                Files.writeString(folder.resolve("sweep.sbatch"), script.text(folder, launcher));
                 spec.commandLine().getOut().printf("Wrote %s (%d array tasks). Submit with: sbatch %s%n",
                         folder.resolve("sweep.sbatch"), n, folder.resolve("sweep.sbatch"));
                 return 0;

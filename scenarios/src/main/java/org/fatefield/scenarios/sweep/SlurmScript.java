@@ -30,6 +30,11 @@ public record SlurmScript(int tasks, String time, String memory, int cpus, int c
 
     /** The script for the sweep in {@code folder}, run with the tool at {@code jar}. */
     public String text(Path folder, Path jar, String java) {
+        return text(folder, "\"" + java + "\" -jar \"" + jar.toAbsolutePath().normalize() + "\"");
+    }
+
+    /** The script for the sweep in {@code folder}, run with the command line {@code launcher}. */
+    public String text(Path folder, String launcher) {
         Path abs = folder.toAbsolutePath().normalize();
         return String.format(Locale.ROOT, """
                 #!/bin/bash
@@ -43,8 +48,7 @@ public record SlurmScript(int tasks, String time, String memory, int cpus, int c
                 #SBATCH --error=%1$s/logs/%%A_%%a.err
                 set -euo pipefail
                 # Each task takes its shard from SLURM_ARRAY_TASK_ID and SLURM_ARRAY_TASK_COUNT.
-                "%7$s" -jar "%8$s" sweep run "%1$s" --workers %6$d
-                """, abs, tasks, concurrent > 0 ? "%" + concurrent : "", time, memory, cpus, java,
-                jar.toAbsolutePath().normalize());
+                %7$s sweep run "%1$s" --workers %6$d
+                """, abs, tasks, concurrent > 0 ? "%" + concurrent : "", time, memory, cpus, launcher);
     }
 }
