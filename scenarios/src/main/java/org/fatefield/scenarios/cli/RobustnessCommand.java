@@ -1,0 +1,114 @@
+package org.fatefield.scenarios.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+import org.fatefield.engine.record.RunTables;
+import org.fatefield.scenarios.format.Scenario;
+import org.fatefield.scenarios.format.ScenarioException;
+import org.fatefield.scenarios.output.RunFolder;
+import org.fatefield.scenarios.robustness.Perturbation;
+import org.fatefield.scenarios.robustness.RobustnessAnalysis;
+import org.fatefield.viz.chart.ChartFiles;
+import org.fatefield.viz.chart.SensitivityChart;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code fatefield robustness}: how the pattern shifts when each quantity changes a little. */
+@Command(name = "robustness", mixinStandardHelpOptions = true,
+        description = {"Perturb the morphogen amplitude, tissue size, noise level and each circuit parameter by"
+                + " +-FRACTION and report how boundary positions, widths and fate proportions shift.",
+            "Writes robustness.csv (sensitivity = change per relative change, with 95% intervals over replicate"
+                    + " pairs run on the same seeds) and robustness.png for the chosen metric."})
+final class RobustnessCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", paramLabel = "SCENARIO", description = "a scenario file, or a built-in name (demo)")
+    private String scenario;
+
+    @Option(names = "--fraction", paramLabel = "F", defaultValue = "0.1",
+            description = "relative perturbation (default: ${DEFAULT-VALUE})")
+    private double fraction;
+
+    @Option(names = "--replicates", paramLabel = "N", defaultValue = "3",
+            description = "seed pairs per perturbation (default: ${DEFAULT-VALUE})")
+    private int replicates;
+
+    @Option(names = "--only", paramLabel = "WHICH", defaultValue = "all",
+            description = "all, or tissue (amplitude, size and noise only) (default: ${DEFAULT-VALUE})")
+    private String only;
+
+    @Option(names = "--metric", paramLabel = "NAME",
+            description = "metric of the figure (default: boundary of the default fate)")
+    private String metric;
+
+    @Option(names = "--out", paramLabel = "DIR", required = true, description = "output folder")
+    private Path out;
+
+    @Option(names = "--threads", paramLabel = "N", description = "threads per run (default: all processors)")
+    private Integer threads;
+
+    @CommandLine.Spec
+    private CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter err = spec.commandLine().getErr();
+        Scenario loaded;
+        try {
+            loaded = ScenarioArgument.load(scenario);
+        } catch (ScenarioException e) {
+            err.println(e.getMessage());
+            return FatefieldCommand.INVALID_INPUT;
+        }
+        if (!(fraction > 0 && fraction < 1) || replicates < 2 || !List.of("all", "tissue").contains(only)) {
+            err.println("--fraction must be in (0, 1), --replicates at least 2, --only all or tissue");
+            return FatefieldCommand.INVALID_INPUT;
+        }
+        List<Perturbation> perturbations = Perturbation.all(loaded.tissue());
+        if (only.equals("tissue")) {
+            perturbations = perturbations.subList(0, 3);
+        }
+        List<String> fates = loaded.tissue().fates().fateNames();
+        String chosen = metric != null ? metric : "boundary_" + fates.get(fates.size() - 1) + "_um";
+        try {
+            RunFolder.checkUsable(out, false);
+            int workers = threads != null ? threads : Runtime.getRuntime().availableProcessors();
+            List<RobustnessAnalysis.Sensitivity> result = RobustnessAnalysis.run(loaded.tissue(), perturbations,
+                    fraction, replicates, loaded.seed(), workers);
+            RunFolder folder = RunFolder.open(out);
+            folder.writeText("robustness.csv", w -> {
+                CSVPrinter printer = new CSVPrinter(w, CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get());
+                printer.printRecord("perturbation", "metric", "sensitivity", "ci95_low", "ci95_high", "pairs");
+                for (RobustnessAnalysis.Sensitivity s : result) {
+                    printer.printRecord(s.perturbation(), s.metric(), RunTables.number(s.sensitivity()),
+                            RunTables.number(s.low95()), RunTables.number(s.high95()), s.replicates());
+                }
+                printer.flush();
+            });
+            List<RobustnessAnalysis.Sensitivity> shown = result.stream().filter(s -> s.metric().equals(chosen)).toList();
+            List<String> names = new ArrayList<>();
+            double[] values = new double[shown.size()];
+            double[] halves = new double[shown.size()];
+            for (int i = 0; i < shown.size(); i++) {
+                names.add(shown.get(i).perturbation());
+                values[i] = Double.isFinite(shown.get(i).sensitivity()) ? shown.get(i).sensitivity() : 0;
+                halves[i] = 0.5 * (shown.get(i).high95() - shown.get(i).low95());
+            }
+            folder.write("robustness.png", o -> ChartFiles.png(SensitivityChart.create(chosen, fraction, names, values,
+                    halves), 960, Math.max(400, 60 + 28 * names.size()), o));
+            spec.commandLine().getOut().printf("%d perturbations x 2 x %d replicates; results are in %s%n",
+                    perturbations.size(), replicates, out.toAbsolutePath().normalize());
+            return 0;
+        } catch (IOException e) {
+            err.println("Cannot write results: " + e.getMessage());
+            return FatefieldCommand.OUTPUT_ERROR;
+        }
+    }
+}
