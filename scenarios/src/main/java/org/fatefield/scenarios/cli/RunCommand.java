@@ -44,6 +44,10 @@ final class RunCommand implements Callable<Integer> {
             + " simulated time, so a killed run can be resumed (default: never)")
     private Double checkpointEvery;
 
+    @Option(names = "--frames", paramLabel = "HOURS", description = "write a PNG frame of the tissue every HOURS of"
+            + " simulated time into frames/, and tissue.gif at the end")
+    private Double framesEvery;
+
     @Option(names = "--resume", description = "continue the run from the checkpoint in --out (same scenario and seed)")
     private boolean resume;
 
@@ -87,7 +91,16 @@ final class RunCommand implements Callable<Integer> {
                 }
                 every = Math.max(1, Math.round(checkpointEvery / loaded.tissue().timing().step()));
             }
-            Tissue tissue = ScenarioRunner.run(loaded, runSeed, workers, folder, force, progress, every, resume);
+            long frameSteps = 0;
+            if (framesEvery != null) {
+                if (!(framesEvery > 0)) {
+                    err.println("--frames must be greater than 0 hours, got " + framesEvery);
+                    return FatefieldCommand.INVALID_INPUT;
+                }
+                frameSteps = Math.max(1, Math.round(framesEvery / loaded.tissue().timing().step()));
+            }
+            Tissue tissue = ScenarioRunner.run(loaded, runSeed, workers, folder, force, progress, every, resume,
+                    frameSteps);
             if (!quiet) {
                 TimeSeries.Row last = tissue.series().last();
                 List<String> fates = tissue.series().fateNames();

@@ -60,7 +60,7 @@ final class ScenarioCompiler {
         return problems;
     }
 
-    Scenario compile(String fallbackName, String sha256) {
+    Scenario compile(String fallbackName, String sha256, String text) {
         TomlTable scenario = toml.getTableOrEmpty("scenario");
         TomlTable run = toml.getTableOrEmpty("run");
         TomlTable tissue = toml.getTableOrEmpty("tissue");
@@ -105,7 +105,7 @@ final class ScenarioCompiler {
             String name = scenario.contains("name") ? scenario.getString("name") : fallbackName;
             String description = scenario.contains("description") ? scenario.getString("description") : "";
             long seed = run.contains("seed") ? run.getLong("seed") : 1L;
-            return new Scenario(name, description, file, sha256, seed, spec);
+            return new Scenario(name, description, file, sha256, seed, spec, text);
         } catch (IllegalArgumentException e) {
             problems.add(new Problem(file, 0, 0, "", null, e.getMessage()));
             return null;

@@ -70,7 +70,7 @@ public final class ScenarioReader {
         ScenarioCompiler compiler = new ScenarioCompiler(label, toml, checker, circuit, folder);
         Scenario scenario = null;
         try {
-            scenario = compiler.compile(fallbackName, sha256(provenance));
+            scenario = compiler.compile(fallbackName, sha256(provenance), text);
         } catch (RuntimeException e) {
             if (problems.isEmpty()) {
                 throw e;

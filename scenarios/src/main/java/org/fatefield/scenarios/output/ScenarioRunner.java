@@ -29,6 +29,8 @@ public final class ScenarioRunner {
     public static final String FATE_CHART = "fate-proportions.png";
     /** Final tissue image. */
     public static final String TISSUE_IMAGE = "tissue.png";
+    /** Copy of the scenario that was run. */
+    public static final String SCENARIO_COPY = "scenario.toml";
     /** Provenance, written last. */
     public static final String PROVENANCE = "run.json";
 
@@ -55,6 +57,15 @@ public final class ScenarioRunner {
      */
     public static Tissue run(Scenario scenario, long seed, int threads, Path out, boolean force, Progress progress,
             long checkpointSteps, boolean resume) throws IOException {
+        return run(scenario, seed, threads, out, force, progress, checkpointSteps, resume, 0);
+    }
+
+    /**
+     * As above, also writing a PNG frame of the tissue every {@code frameSteps} steps (0: none) into
+     * {@code frames/}, and at the end {@code tissue.gif}, an animation of them.
+     */
+    public static Tissue run(Scenario scenario, long seed, int threads, Path out, boolean force, Progress progress,
+            long checkpointSteps, boolean resume, long frameSteps) throws IOException {
         Checkpoints checkpoints = new Checkpoints(out, scenario, seed);
         Checkpoints.Saved saved = resume ? checkpoints.load() : null;
         if (!resume) {
@@ -72,10 +83,17 @@ public final class ScenarioRunner {
             saved.restoreInto(tissue);
         }
         long total = scenario.tissue().timing().totalSteps();
+        Frames frames = new Frames(out, scenario.name() + ", seed " + seed);
+        if (frameSteps > 0 && saved == null) {
+            frames.write(tissue);
+        }
         try (progress) {
             while (!tissue.finished()) {
                 tissue.schedule.step(tissue);
                 progress.update(tissue.steps(), total);
+                if (frameSteps > 0 && tissue.steps() % frameSteps == 0) {
+                    frames.write(tissue);
+                }
                 if (checkpointSteps > 0 && tissue.steps() % checkpointSteps == 0 && !tissue.finished()) {
                     checkpoints.save(tissue, lineage.flushedLength());
                 }
@@ -86,7 +104,12 @@ public final class ScenarioRunner {
             lineage.close();
         }
         List<String> files = new ArrayList<>();
+        if (frameSteps > 0) {
+            files.addAll(frames.finish(folder));
+        }
         files.add(LineageFiles.TABLE);
+        folder.writeText(SCENARIO_COPY, w -> w.write(scenario.text()));
+        files.add(SCENARIO_COPY);
         folder.writeText(LineageFiles.TREES, w -> LineageFiles.writeTrees(out.resolve(LineageFiles.TABLE), tissue.time(), w));
         files.add(LineageFiles.TREES);
         files.addAll(RunMetrics.of(tissue).write(folder, tissue.series().fateNames(), seed,

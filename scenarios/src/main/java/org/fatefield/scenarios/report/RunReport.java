@@ -1,0 +1,222 @@
+package org.fatefield.scenarios.report;
+
+import com.google.gson.JsonElement;
+import com.google.gson.JsonObject;
+import com.google.gson.JsonParser;
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.Reader;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Base64;
+import java.util.List;
+import java.util.Map;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVRecord;
+import org.fatefield.circuits.analysis.continuation.Branch;
+import org.fatefield.circuits.analysis.continuation.ContinuationSettings;
+import org.fatefield.circuits.analysis.continuation.EquilibriumContinuation;
+import org.fatefield.circuits.analysis.continuation.NetworkSystem;
+import org.fatefield.engine.coupling.SignalCoupling;
+import org.fatefield.scenarios.format.Scenario;
+import org.fatefield.scenarios.format.ScenarioException;
+import org.fatefield.scenarios.format.ScenarioReader;
+import org.fatefield.viz.analysis.BifurcationDiagramChart;
+import org.fatefield.viz.chart.ChartFiles;
+import org.fatefield.viz.chart.ProfileChart;
+import org.jfree.chart.JFreeChart;
+
+/**
+ * A self-contained HTML page about a finished run (images embedded as data URIs, no network):
+ * the scenario and its parameters, the figures (fate proportions, tissue, animation, fate profile
+ * with simulated and predicted boundaries, the circuit's bifurcation diagram along its control
+ * parameter), metric tables and provenance.
+ */
+public final class RunReport {
+
+    private RunReport() {
+    }
+
+    /** The report of the run folder {@code run}. */
+    public static String html(Path run) throws IOException {
+        JsonObject provenance = json(run.resolve("run.json"));
+        JsonObject metrics = json(run.resolve("metrics.json"));
+        String scenarioText = Files.readString(run.resolve("scenario.toml"), StandardCharsets.UTF_8);
+        Html page = new Html("Fatefield report: " + provenance.getAsJsonObject("scenario").get("name").getAsString());
+        page.paragraph("Research software output: for exploring models, not for clinical or diagnostic decisions.");
+        page.heading("Figures");
+        page.image("Fate proportions over time", Files.readAllBytes(run.resolve("fate-proportions.png")), "png");
+        page.image("The tissue at the end", Files.readAllBytes(run.resolve("tissue.png")), "png");
+        if (Files.exists(run.resolve("tissue.gif"))) {
+            page.image("The tissue over time", Files.readAllBytes(run.resolve("tissue.gif")), "gif");
+        }
+        List<String> fates = new ArrayList<>(metrics.getAsJsonObject("boundaries").keySet());
+        page.image("Fate profile along the gradient", profile(run, fates, metrics), "png");
+        byte[] bifurcation = bifurcation(scenarioText, run);
+        if (bifurcation != null) {
+            page.image("Single-cell bifurcation diagram along the control parameter", bifurcation, "png");
+        }
+        page.heading("Pattern");
+        List<List<String>> rows = new ArrayList<>();
+        for (String fate : fates) {
+            JsonObject b = metrics.getAsJsonObject("boundaries").getAsJsonObject(fate);
+            rows.add(List.of(fate, text(b.get("position_um")), text(b.get("width_10_90_um"))));
+        }
+        page.table(List.of("fate", "boundary (µm, fraction crosses 1/2)", "width 10-90% (µm)"), rows);
+        List<List<String>> predicted = new ArrayList<>();
+        for (JsonElement e : metrics.getAsJsonArray("predicted_boundaries")) {
+            JsonObject p = e.getAsJsonObject();
+            predicted.add(List.of(text(p.get("critical_control_value")), text(p.get("position_um"))));
+        }
+        page.table(List.of("critical control value (fold or branch point)", "predicted position (µm)"), predicted);
+        page.heading("Lineages");
+        List<List<String>> related = new ArrayList<>();
+        for (Map.Entry<String, JsonElement> e : metrics.getAsJsonObject("same_fate_by_lineage_distance").entrySet()) {
+            related.add(List.of(e.getKey(), text(e.getValue())));
+        }
+        page.paragraph("Sister-fate agreement: " + text(metrics.get("sister_fate_agreement")) + " (partitioning: "
+                + metrics.get("partition").getAsString() + ").");
+        page.table(List.of("lineage distance (divisions)", "pairs sharing a fate"), related);
+        page.heading("Scenario");
+        page.preformatted(scenarioText);
+        page.heading("Provenance");
+        List<List<String>> facts = new ArrayList<>();
+        for (String key : List.of("tool", "tool_version", "java_version", "java_vendor", "os", "seed", "started",
+                "wall_time_s", "simulated_time_h", "steps", "final_population")) {
+            facts.add(List.of(key, text(provenance.get(key))));
+        }
+        JsonObject scenario = provenance.getAsJsonObject("scenario");
+        facts.add(List.of("scenario source", text(scenario.get("source"))));
+        facts.add(List.of("scenario SHA-256", text(scenario.get("sha256"))));
+        page.table(List.of("", ""), facts);
+        return page.finish();
+    }
+
+    private static byte[] profile(Path run, List<String> fates, JsonObject metrics) throws IOException {
+        List<double[]> columns = new ArrayList<>();
+        try (Reader in = Files.newBufferedReader(run.resolve("profile.csv"));
+                CSVParser parser = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get().parse(in)) {
+            List<CSVRecord> records = parser.getRecords();
+            double[] x = new double[records.size()];
+            double[][] fractions = new double[fates.size()][records.size()];
+            for (int b = 0; b < records.size(); b++) {
+                x[b] = Double.parseDouble(records.get(b).get("x_um"));
+                for (int f = 0; f < fates.size(); f++) {
+                    fractions[f][b] = Double.parseDouble(records.get(b).get("fraction_" + fates.get(f)));
+                }
+            }
+            columns.add(x);
+            JsonElement sim = metrics.getAsJsonObject("boundaries").getAsJsonObject(fates.get(fates.size() - 1))
+                    .get("position_um");
+            double simulated = sim == null || sim.isJsonNull() ? Double.NaN : sim.getAsDouble();
+            List<Double> predicted = new ArrayList<>();
+            for (JsonElement e : metrics.getAsJsonArray("predicted_boundaries")) {
+                JsonElement p = e.getAsJsonObject().get("position_um");
+                if (p != null && !p.isJsonNull()) {
+                    predicted.add(p.getAsDouble());
+                }
+            }
+            return png(ProfileChart.create(fates, x, fractions, simulated,
+                    predicted.stream().mapToDouble(Double::doubleValue).toArray()));
+        }
+    }
+
+    /** The circuit's bifurcation diagram along its first coupling, or null if there is none. */
+    private static byte[] bifurcation(String scenarioText, Path run) throws IOException {
+        Scenario scenario;
+        try {
+            scenario = ScenarioReader.parse("scenario.toml", "run", scenarioText.getBytes(StandardCharsets.UTF_8),
+                    run.toAbsolutePath());
+        } catch (ScenarioException e) {
+            return null;
+        }
+        if (scenario.tissue().mapping().couplings().isEmpty()) {
+            return null;
+        }
+        SignalCoupling c = scenario.tissue().mapping().couplings().get(0);
+        double lo = c.table() != null ? c.table().minimum() : Math.min(c.base(), c.base() + c.gain());
+        double hi = c.table() != null ? c.table().maximum() : Math.max(c.base(), c.base() + c.gain());
+        if (!(hi > lo)) {
+            return null;
+        }
+        NetworkSystem system = new NetworkSystem(scenario.tissue().circuit().network(), scenario.tissue().mapping().base(),
+                c.parameterIndices());
+        List<Branch> branches = EquilibriumContinuation.of(system, ContinuationSettings.defaults().withMaxStep((hi - lo) / 40))
+                .diagram(scenario.tissue().circuit().initialState(), lo, lo, hi, true, 2);
+        return png(BifurcationDiagramChart.create(branches, 0, c.label(),
+                scenario.tissue().circuit().network().speciesNames().get(0)));
+    }
+
+    private static byte[] png(JFreeChart chart) throws IOException {
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        ChartFiles.png(chart, 900, 520, out);
+        return out.toByteArray();
+    }
+
+    private static JsonObject json(Path file) throws IOException {
+        if (!Files.exists(file)) {
+            throw new IOException(file + " is missing: is this a finished Fatefield run folder?");
+        }
+        return JsonParser.parseString(Files.readString(file, StandardCharsets.UTF_8)).getAsJsonObject();
+    }
+
+    private static String text(JsonElement e) {
+        return e == null || e.isJsonNull() ? "–" : e.isJsonPrimitive() ? e.getAsString() : e.toString();
+    }
+
+    /** Minimal HTML builder with escaping. */
+    private static final class Html {
+        private final StringBuilder body = new StringBuilder();
+        private final String title;
+
+        Html(String title) {
+            this.title = title;
+        }
+
+        void heading(String text) {
+            body.append("<h2>").append(escape(text)).append("</h2>\n");
+        }
+
+        void paragraph(String text) {
+            body.append("<p>").append(escape(text)).append("</p>\n");
+        }
+
+        void preformatted(String text) {
+            body.append("<pre>").append(escape(text)).append("</pre>\n");
+        }
+
+        void image(String caption, byte[] bytes, String type) {
+            body.append("<figure><img alt=\"").append(escape(caption)).append("\" src=\"data:image/").append(type)
+                    .append(";base64,").append(Base64.getEncoder().encodeToString(bytes)).append("\"><figcaption>")
+                    .append(escape(caption)).append("</figcaption></figure>\n");
+        }
+
+        void table(List<String> header, List<List<String>> rows) {
+            body.append("<table><tr>");
+            header.forEach(h -> body.append("<th>").append(escape(h)).append("</th>"));
+            body.append("</tr>\n");
+            for (List<String> row : rows) {
+                body.append("<tr>");
+                row.forEach(v -> body.append("<td>").append(escape(v)).append("</td>"));
+                body.append("</tr>\n");
+            }
+            body.append("</table>\n");
+        }
+
+        String finish() {
+            return "<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\"><title>" + escape(title)
+                    + "</title>\n<style>body{font-family:sans-serif;max-width:980px;margin:2em auto;color:#222}"
+                    + "img{max-width:100%}figure{margin:1.5em 0}figcaption{color:#555;font-size:90%}"
+                    + "table{border-collapse:collapse;margin:1em 0}td,th{border:1px solid #ccc;padding:4px 10px;"
+                    + "text-align:left}pre{background:#f6f6f2;padding:1em;overflow-x:auto}</style></head>\n<body><h1>"
+                    + escape(title) + "</h1>\n" + body + "</body></html>\n";
+        }
+
+        private static String escape(String s) {
+            return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;").replace("\"", "&quot;");
+        }
+    }
+}

@@ -1,0 +1,69 @@
+package org.fatefield.viz.chart;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.util.List;
+import java.util.Locale;
+import org.fatefield.viz.palette.FatePalette;
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.plot.ValueMarker;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.ui.RectangleAnchor;
+import org.jfree.chart.ui.TextAnchor;
+import org.jfree.data.xy.XYSeries;
+import org.jfree.data.xy.XYSeriesCollection;
+
+/** Fate fractions along the gradient axis, with the simulated and predicted boundaries marked. */
+public final class ProfileChart {
+
+    private ProfileChart() {
+    }
+
+    /**
+     * @param x         bin centres (µm)
+     * @param fractions {@code fractions[f][b]}
+     * @param simulated simulated boundary of the default fate (NaN for none)
+     * @param predicted predicted boundaries (µm)
+     */
+    public static JFreeChart create(List<String> fates, double[] x, double[][] fractions, double simulated,
+            double[] predicted) {
+        XYSeriesCollection data = new XYSeriesCollection();
+        XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
+        for (int f = 0; f < fates.size(); f++) {
+            XYSeries s = new XYSeries(fates.get(f), false, true);
+            for (int b = 0; b < x.length; b++) {
+                if (Double.isFinite(fractions[f][b])) {
+                    s.add(x[b], fractions[f][b]);
+                }
+            }
+            data.addSeries(s);
+            renderer.setSeriesPaint(f, FatePalette.fate(f, fates.size()));
+            renderer.setSeriesStroke(f, new BasicStroke(2.6f));
+        }
+        NumberAxis xAxis = new NumberAxis("x (µm), along the gradient");
+        NumberAxis yAxis = new NumberAxis("fraction of cells");
+        yAxis.setRange(0, 1);
+        XYPlot plot = new XYPlot(data, xAxis, yAxis, renderer);
+        if (Double.isFinite(simulated)) {
+            plot.addDomainMarker(marker(simulated, "simulated boundary", new BasicStroke(1.8f), ChartStyle.SPECIAL));
+        }
+        for (double p : predicted) {
+            if (Double.isFinite(p)) {
+                plot.addDomainMarker(marker(p, "predicted", new BasicStroke(1.8f, BasicStroke.CAP_BUTT,
+                        BasicStroke.JOIN_MITER, 10f, new float[] {6f, 4f}, 0f), ChartStyle.UNSTABLE));
+            }
+        }
+        return ChartStyle.chart("Fate profile along the gradient", plot, true);
+    }
+
+    private static ValueMarker marker(double x, String label, BasicStroke stroke, Color colour) {
+        ValueMarker marker = new ValueMarker(x, colour, stroke);
+        marker.setLabel(String.format(Locale.ROOT, " %s %.0f µm", label, x));
+        marker.setLabelFont(ChartStyle.SMALL);
+        marker.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
+        marker.setLabelTextAnchor(TextAnchor.TOP_LEFT);
+        return marker;
+    }
+}
