@@ -2,6 +2,7 @@ package org.fatefield.circuits.analysis;
 
 import java.util.List;
 import org.fatefield.circuits.model.ReactionNetwork;
+import org.fatefield.circuits.sim.DriftEquation;
 import org.hipparchus.ode.ODEState;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
@@ -45,19 +46,7 @@ public record BasinMap(int xSpecies, int ySpecies, double[] xs, double[] ys, int
         }
         int n = network.speciesCount();
         double[] work = new double[network.reactionCount()];
-        OrdinaryDifferentialEquation ode = new OrdinaryDifferentialEquation() {
-            @Override
-            public int getDimension() {
-                return n;
-            }
-
-            @Override
-            public double[] computeDerivatives(double t, double[] y) {
-                double[] out = new double[n];
-                network.drift(y, params, out, work);
-                return out;
-            }
-        };
+        OrdinaryDifferentialEquation ode = new DriftEquation(network, params);
         DormandPrince853Integrator integrator = new DormandPrince853Integrator(1e-8, 10.0, 1e-10, 1e-9);
         double[] xs = new double[points];
         double[] ys = new double[points];

@@ -44,8 +44,8 @@ public final class StationaryFokkerPlanck {
         double hy = dims == 2 ? (upper[1] - lower[1]) / ny : 1;
         int size = nx * ny;
         int band = nx;
-        // Banded storage of M = Q^T: entry (r, c) at m[r][c - r + band].
-        double[][] m = new double[size][2 * band + 1];
+        // Banded storage of M = Q^T: entry (r, c) at matrix[r][c - r + band].
+        double[][] matrix = new double[size][2 * band + 1];
         double[] x = new double[network.speciesCount()];
         double[] a = new double[network.reactionCount()];
         double[] f = new double[network.speciesCount()];
@@ -75,22 +75,22 @@ public final class StationaryFokkerPlanck {
                     double up = diffusion > 0 ? diffusion / (hd * hd) * bernoulli(-peclet) : Math.max(0, f[s]) / hd;
                     double down = diffusion > 0 ? diffusion / (hd * hd) * bernoulli(peclet) : Math.max(0, -f[s]) / hd;
                     if (hasUp) {
-                        add(m, cell + step, cell, up, band);
-                        add(m, cell, cell, -up, band);
+                        add(matrix, cell + step, cell, up, band);
+                        add(matrix, cell, cell, -up, band);
                     }
                     if (hasDown) {
-                        add(m, cell - step, cell, down, band);
-                        add(m, cell, cell, -down, band);
+                        add(matrix, cell - step, cell, down, band);
+                        add(matrix, cell, cell, -down, band);
                     }
                 }
             }
         }
-        int anchor = anchorCell(m, size, band);
+        int anchor = anchorCell(matrix, size, band);
         double[] rhs = new double[size];
-        java.util.Arrays.fill(m[anchor], 0);
-        m[anchor][band] = 1;
+        java.util.Arrays.fill(matrix[anchor], 0);
+        matrix[anchor][band] = 1;
         rhs[anchor] = 1;
-        double[] p = solveBanded(m, rhs, band);
+        double[] p = solveBanded(matrix, rhs, band);
         long[][] counts = new long[ny][nx];
         double[][] u = new double[ny][nx];
         double max = 0;
@@ -119,19 +119,19 @@ public final class StationaryFokkerPlanck {
         return Math.abs(z) < 1e-10 ? 1.0 - z / 2 : z / Math.expm1(z);
     }
 
-    private static void add(double[][] m, int row, int column, double value, int band) {
-        m[row][column - row + band] += value;
+    private static void add(double[][] matrix, int row, int column, double value, int band) {
+        matrix[row][column - row + band] += value;
     }
 
     /**
      * The cell whose normalisation replaces its balance equation: the one with the smallest total
      * escape rate, which sits where the drift vanishes, in a well, so its probability is not tiny.
      */
-    private static int anchorCell(double[][] m, int size, int band) {
+    private static int anchorCell(double[][] matrix, int size, int band) {
         int best = 0;
         double slowest = Double.POSITIVE_INFINITY;
         for (int r = 0; r < size; r++) {
-            double out = -m[r][band];
+            double out = -matrix[r][band];
             if (out < slowest) {
                 slowest = out;
                 best = r;
@@ -141,18 +141,18 @@ public final class StationaryFokkerPlanck {
     }
 
     /** Gaussian elimination without pivoting on a banded matrix (modified in place). */
-    private static double[] solveBanded(double[][] m, double[] rhs, int band) {
+    private static double[] solveBanded(double[][] matrix, double[] rhs, int band) {
         int n = rhs.length;
         for (int k = 0; k < n; k++) {
-            double pivot = m[k][band];
+            double pivot = matrix[k][band];
             int last = Math.min(n - 1, k + band);
             for (int r = k + 1; r <= last; r++) {
-                double factor = m[r][k - r + band] / pivot;
+                double factor = matrix[r][k - r + band] / pivot;
                 if (factor == 0) {
                     continue;
                 }
                 for (int c = k; c <= Math.min(n - 1, k + band); c++) {
-                    m[r][c - r + band] -= factor * m[k][c - k + band];
+                    matrix[r][c - r + band] -= factor * matrix[k][c - k + band];
                 }
                 rhs[r] -= factor * rhs[k];
             }
@@ -161,9 +161,9 @@ public final class StationaryFokkerPlanck {
         for (int k = n - 1; k >= 0; k--) {
             double s = rhs[k];
             for (int c = k + 1; c <= Math.min(n - 1, k + band); c++) {
-                s -= m[k][c - k + band] * out[c];
+                s -= matrix[k][c - k + band] * out[c];
             }
-            out[k] = s / m[k][band];
+            out[k] = s / matrix[k][band];
         }
         return out;
     }

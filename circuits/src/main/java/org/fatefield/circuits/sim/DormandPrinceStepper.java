@@ -16,12 +16,10 @@ public final class DormandPrinceStepper implements CircuitStepper {
 
     private final ReactionNetwork network;
     private final double tolerance;
-    private final double[] work;
 
     private DormandPrinceStepper(ReactionNetwork network, double tolerance) {
         this.network = network;
         this.tolerance = tolerance;
-        this.work = new double[network.reactionCount()];
     }
 
     /** A stepper with relative and absolute tolerance {@code tolerance}. */
@@ -35,19 +33,7 @@ public final class DormandPrinceStepper implements CircuitStepper {
     @Override
     public void advance(double[] state, double[] params, double dt, UniformRandomProvider rng) {
         int n = state.length;
-        OrdinaryDifferentialEquation ode = new OrdinaryDifferentialEquation() {
-            @Override
-            public int getDimension() {
-                return n;
-            }
-
-            @Override
-            public double[] computeDerivatives(double t, double[] y) {
-                double[] out = new double[n];
-                network.drift(y, params, out, work);
-                return out;
-            }
-        };
+        OrdinaryDifferentialEquation ode = new DriftEquation(network, params);
         DormandPrince853Integrator integrator = new DormandPrince853Integrator(1e-12 * dt, dt, tolerance, tolerance);
         double[] end = integrator.integrate(ode, new ODEState(0.0, state.clone()), dt).getPrimaryState();
         System.arraycopy(end, 0, state, 0, n);

@@ -37,7 +37,7 @@ public final class OverlapRepulsion {
      * @param width         domain width (µm)
      * @param height        domain height (µm)
      * @param rate          relaxation rate (1 / h): speed per µm of overlap, at least 0
-     * @param newbornRadius radius of a newborn cell (µm); cells reach sqrt(2) times it
+     * @param newbornRadius radius of a newborn cell in µm; grown cells reach sqrt(2) times it
      */
     public OverlapRepulsion(double width, double height, double rate, double newbornRadius) {
         this(width, height, rate, newbornRadius, 0, 0.2, false);

@@ -188,41 +188,11 @@ public final class Tissue extends SimState {
         f.setCellExchange(amount, uptake);
     }
 
+    /**
+     * The cell loop: each cell reads every field at its position, sets its parameters from them
+     * (and its extrinsic factors), advances its circuit, dilutes and ages.
+     */
     private void stepCells(double dt) {
-        if (fields.length > 1) {
-            stepCellsManyFields(dt);
-            return;
-        }
-        MorphogenField morphogen = field;
-        ParameterMapping mapping = spec.mapping();
-        CellPopulation cells = population;
-        boolean dilute = spec.growth().dilution();
-        List<ExtrinsicNoise> extrinsic = spec.extrinsic();
-        pool.forEach(cells.size(), (from, to, worker) -> {
-            CircuitStepper circuit = steppers[worker];
-            double[] p = params[worker];
-            for (int i = from; i < to; i++) {
-                Cell cell = cells.get(i);
-                double c = morphogen.sample(cell.x(), cell.y());
-                cell.setSignal(c);
-                if (!extrinsic.isEmpty()) {
-                    restoreNoisy(p);
-                }
-                mapping.applySignal(c, p);
-                for (int k = 0; k < extrinsic.size(); k++) {
-                    extrinsic.get(k).apply(cell.scores()[k], p);
-                }
-                circuit.advance(cell.liveState(), p, dt, cell.random());
-                if (dilute) {
-                    cell.dilute(dt);
-                }
-                cell.grow(dt);
-            }
-        });
-    }
-
-    /** The cell loop when couplings may read several fields. */
-    private void stepCellsManyFields(double dt) {
         ParameterMapping mapping = spec.mapping();
         CellPopulation cells = population;
         boolean dilute = spec.growth().dilution();

@@ -12,7 +12,6 @@ import org.fatefield.scenarios.analysis.AnalysisResult;
 import org.fatefield.scenarios.analysis.AnalysisWriter;
 import org.fatefield.scenarios.analysis.CircuitAnalysis;
 import org.fatefield.scenarios.format.Scenario;
-import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.output.RunFolder;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -84,11 +83,8 @@ final class AnalyzeCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         PrintWriter err = spec.commandLine().getErr();
-        Scenario loaded;
-        try {
-            loaded = ScenarioArgument.load(scenario);
-        } catch (ScenarioException e) {
-            err.println(e.getMessage());
+        Scenario loaded = ScenarioArgument.loadOrReport(scenario, spec.commandLine().getErr());
+        if (loaded == null) {
             return FatefieldCommand.INVALID_INPUT;
         }
         AnalysisPlan plan;

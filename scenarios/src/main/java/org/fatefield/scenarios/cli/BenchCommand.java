@@ -8,7 +8,6 @@ import org.fatefield.engine.bench.CircuitBenchmark;
 import org.fatefield.engine.bench.TissueBenchmark;
 import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.scenarios.format.Scenario;
-import org.fatefield.scenarios.format.ScenarioException;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -49,11 +48,8 @@ final class BenchCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         PrintWriter out = spec.commandLine().getOut();
-        Scenario loaded;
-        try {
-            loaded = ScenarioArgument.load(scenario);
-        } catch (ScenarioException e) {
-            spec.commandLine().getErr().println(e.getMessage());
+        Scenario loaded = ScenarioArgument.loadOrReport(scenario, spec.commandLine().getErr());
+        if (loaded == null) {
             return FatefieldCommand.INVALID_INPUT;
         }
         if (loaded.tissue().mapping().couplings().isEmpty()) {

@@ -15,7 +15,6 @@ import org.fatefield.engine.metrics.FateProfile;
 import org.fatefield.engine.record.RunTables;
 import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.scenarios.format.Scenario;
-import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.output.Progress;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.output.RunMetrics;
@@ -54,11 +53,8 @@ final class ReplicatesCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         PrintWriter err = spec.commandLine().getErr();
-        Scenario loaded;
-        try {
-            loaded = ScenarioArgument.load(scenario);
-        } catch (ScenarioException e) {
-            err.println(e.getMessage());
+        Scenario loaded = ScenarioArgument.loadOrReport(scenario, spec.commandLine().getErr());
+        if (loaded == null) {
             return FatefieldCommand.INVALID_INPUT;
         }
         if (runs < 2) {

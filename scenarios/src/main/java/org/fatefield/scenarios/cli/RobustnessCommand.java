@@ -10,7 +10,6 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.fatefield.engine.record.RunTables;
 import org.fatefield.scenarios.format.Scenario;
-import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.robustness.Perturbation;
 import org.fatefield.scenarios.robustness.RobustnessAnalysis;
@@ -60,11 +59,8 @@ final class RobustnessCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         PrintWriter err = spec.commandLine().getErr();
-        Scenario loaded;
-        try {
-            loaded = ScenarioArgument.load(scenario);
-        } catch (ScenarioException e) {
-            err.println(e.getMessage());
+        Scenario loaded = ScenarioArgument.loadOrReport(scenario, spec.commandLine().getErr());
+        if (loaded == null) {
             return FatefieldCommand.INVALID_INPUT;
         }
         if (!(fraction > 0 && fraction < 1) || replicates < 2 || !List.of("all", "tissue").contains(only)) {

@@ -16,6 +16,20 @@ final class ScenarioArgument {
     private ScenarioArgument() {
     }
 
+    /**
+     * Reads the scenario, or prints its problems to {@code err} and returns null (so a command
+     * can return {@link FatefieldCommand#INVALID_INPUT}).
+     */
+    static Scenario loadOrReport(String argument, java.io.PrintWriter err) {
+        try {
+            return load(argument);
+        } catch (ScenarioException e) {
+            err.println(e.getMessage());
+            err.flush();
+            return null;
+        }
+    }
+
     /** Reads and validates the scenario named by {@code argument}. */
     static Scenario load(String argument) throws ScenarioException {
         Path path = Path.of(argument);

@@ -108,7 +108,7 @@ public final class EquilibriumContinuation {
             List<Crossing> crossings) {
         List<BranchPoint> backward = new ArrayList<>();
         List<SpecialPoint> backwardSpecials = new ArrayList<>();
-        trace(y, negate(tangent), lambdaMin, lambdaMax, backward, backwardSpecials, crossings);
+        trace(y, Vectors.negate(tangent), lambdaMin, lambdaMax, backward, backwardSpecials, crossings);
         List<BranchPoint> forward = new ArrayList<>();
         List<SpecialPoint> forwardSpecials = new ArrayList<>();
         trace(y, tangent, lambdaMin, lambdaMax, forward, forwardSpecials, crossings);
@@ -164,10 +164,10 @@ public final class EquilibriumContinuation {
         points.add(point(y, eigen));
         double h = settings.initialStep();
         while (points.size() < settings.maxPoints()) {
-            double[] predicted = add(y, t, h);
+            double[] predicted = Vectors.add(y, t, h);
             double[] next = arclength.correct(predicted, t);
             double[] nextTangent = next == null ? null : arclength.tangent(next, t);
-            if (next == null || nextTangent == null || dot(t, nextTangent) < 0.9) {
+            if (next == null || nextTangent == null || Vectors.dot(t, nextTangent) < 0.9) {
                 h *= 0.5;
                 if (h < settings.minStep()) {
                     return;
@@ -223,17 +223,17 @@ public final class EquilibriumContinuation {
             diff[i] = yb[i] - ya[i];
         }
         double a = 0;
-        double b = dot(diff, ta);
+        double b = Vectors.dot(diff, ta);
         double fa = test.applyAsDouble(ya);
         double fb = test.applyAsDouble(yb);
         double[] best = fb == 0 ? yb : ya;
         int side = 0;
         for (int k = 0; k < 100 && fa != 0 && fb != 0; k++) {
             double c = (a * fb - b * fa) / (fb - fa);
-            double[] yc = arclength.correct(add(ya, ta, c), ta);
+            double[] yc = arclength.correct(Vectors.add(ya, ta, c), ta);
             if (yc == null) {
                 // Exactly at a branch point the bordered corrector matrix is singular: step aside.
-                yc = arclength.correct(add(ya, ta, c + 1e-9 * (b - a)), ta);
+                yc = arclength.correct(Vectors.add(ya, ta, c + 1e-9 * (b - a)), ta);
             }
             if (yc == null) {
                 break;
@@ -282,7 +282,7 @@ public final class EquilibriumContinuation {
         double bestNorm = 0;
         for (int column = n - 1; column <= n; column++) {
             double[] candidate = v.getColumn(column);
-            double along = dot(candidate, tangent);
+            double along = Vectors.dot(candidate, tangent);
             for (int i = 0; i <= n; i++) {
                 candidate[i] -= along * tangent[i];
             }
@@ -322,29 +322,5 @@ public final class EquilibriumContinuation {
             }
         }
         return false;
-    }
-
-    private static double[] add(double[] y, double[] t, double h) {
-        double[] out = new double[y.length];
-        for (int i = 0; i < y.length; i++) {
-            out[i] = y[i] + h * t[i];
-        }
-        return out;
-    }
-
-    private static double[] negate(double[] t) {
-        double[] out = new double[t.length];
-        for (int i = 0; i < t.length; i++) {
-            out[i] = -t[i];
-        }
-        return out;
-    }
-
-    private static double dot(double[] a, double[] b) {
-        double s = 0;
-        for (int i = 0; i < a.length; i++) {
-            s += a[i] * b[i];
-        }
-        return s;
     }
 }

@@ -105,7 +105,7 @@ public final class FoldCurveContinuation {
         }
         List<FoldPoint> backward = new ArrayList<>();
         List<FoldPoint> cusps = new ArrayList<>();
-        follow(arclength, start, negate(tangent), muMin, muMax, nuMin, nuMax, backward, cusps);
+        follow(arclength, start, Vectors.negate(tangent), muMin, muMax, nuMin, nuMax, backward, cusps);
         List<FoldPoint> forward = new ArrayList<>();
         follow(arclength, start, tangent, muMin, muMax, nuMin, nuMax, forward, cusps);
         List<FoldPoint> points = new ArrayList<>();
@@ -123,9 +123,9 @@ public final class FoldCurveContinuation {
         points.add(point(y));
         double h = settings.initialStep();
         while (points.size() < settings.maxPoints()) {
-            double[] next = arclength.correct(add(y, t, h), t);
+            double[] next = arclength.correct(Vectors.add(y, t, h), t);
             double[] nextTangent = next == null ? null : arclength.tangent(next, t);
-            if (next == null || nextTangent == null || dot(t, nextTangent) < 0.9) {
+            if (next == null || nextTangent == null || Vectors.dot(t, nextTangent) < 0.9) {
                 h *= 0.5;
                 if (h < settings.minStep()) {
                     return;
@@ -157,14 +157,14 @@ public final class FoldCurveContinuation {
             diff[i] = yb[i] - ya[i];
         }
         double a = 0;
-        double b = dot(diff, ta);
+        double b = Vectors.dot(diff, ta);
         int component = Math.signum(ta[n + 1]) * Math.signum(arclength.tangent(yb, ta)[n + 1]) < 0 ? n + 1 : n;
         double fa = ta[component];
         double[] best = null;
         double[] bestTangent = null;
         for (int k = 0; k < 60; k++) {
             double c = 0.5 * (a + b);
-            double[] yc = arclength.correct(add(ya, ta, c), ta);
+            double[] yc = arclength.correct(Vectors.add(ya, ta, c), ta);
             if (yc == null) {
                 return null;
             }
@@ -255,29 +255,5 @@ public final class FoldCurveContinuation {
                 }
             }
         }
-    }
-
-    private static double[] add(double[] y, double[] t, double h) {
-        double[] out = new double[y.length];
-        for (int i = 0; i < y.length; i++) {
-            out[i] = y[i] + h * t[i];
-        }
-        return out;
-    }
-
-    private static double[] negate(double[] t) {
-        double[] out = new double[t.length];
-        for (int i = 0; i < t.length; i++) {
-            out[i] = -t[i];
-        }
-        return out;
-    }
-
-    private static double dot(double[] a, double[] b) {
-        double s = 0;
-        for (int i = 0; i < a.length; i++) {
-            s += a[i] * b[i];
-        }
-        return s;
     }
 }
