@@ -10,6 +10,7 @@ import javax.imageio.ImageIO;
 import org.fatefield.engine.record.RunTables;
 import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.scenarios.format.Scenario;
+import org.fatefield.viz.chart.ChartFiles;
 import org.fatefield.viz.chart.FateProportionChart;
 import org.fatefield.viz.tissue.TissueRenderer;
 
@@ -27,6 +28,8 @@ public final class ScenarioRunner {
     public static final String CELLS = "cells.csv";
     /** Fate proportions chart. */
     public static final String FATE_CHART = "fate-proportions.png";
+    /** Fate proportions chart as SVG. */
+    public static final String FATE_CHART_SVG = "fate-proportions.svg";
     /** Final tissue image. */
     public static final String TISSUE_IMAGE = "tissue.png";
     /** Copy of the scenario that was run. */
@@ -119,10 +122,11 @@ public final class ScenarioRunner {
         folder.writeText(CELLS, w -> RunTables.writeCells(tissue, w));
         files.add(CELLS);
         String title = scenario.name() + ", seed " + seed;
-        folder.write(FATE_CHART, o -> ImageIO.write(
-                FateProportionChart.create(tissue.series(), "Fate proportions: " + title).createBufferedImage(960, 560),
-                "png", o));
+        var proportions = FateProportionChart.create(tissue.series(), "Fate proportions: " + title);
+        folder.write(FATE_CHART, o -> ChartFiles.png(proportions, 960, 560, o));
+        folder.write(FATE_CHART_SVG, o -> ChartFiles.svg(proportions, 960, 560, o));
         files.add(FATE_CHART);
+        files.add(FATE_CHART_SVG);
         String tissueTitle = String.format(Locale.ROOT, "%s at t = %.1f h (%d cells)", title, tissue.time(),
                 tissue.cells().size());
         folder.write(TISSUE_IMAGE, o -> ImageIO.write(TissueRenderer.render(tissue, tissueTitle, 900), "png", o));

@@ -1,0 +1,87 @@
+package org.fatefield.viz;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.awt.Color;
+import java.awt.image.BufferedImage;
+import java.io.ByteArrayOutputStream;
+import java.nio.charset.StandardCharsets;
+import java.util.List;
+import org.fatefield.circuits.model.CustomNetwork;
+import org.fatefield.engine.cell.Cell;
+import org.fatefield.engine.coupling.ParameterMapping;
+import org.fatefield.engine.division.CycleTimeDistribution;
+import org.fatefield.engine.division.Partitioning;
+import org.fatefield.engine.fate.FateClassifier;
+import org.fatefield.engine.fate.FateRule;
+import org.fatefield.engine.field.MorphogenSpec;
+import org.fatefield.engine.record.TimeSeries;
+import org.fatefield.engine.tissue.CircuitSetup;
+import org.fatefield.engine.tissue.GrowthSpec;
+import org.fatefield.engine.tissue.NoiseMode;
+import org.fatefield.engine.tissue.Tissue;
+import org.fatefield.engine.tissue.TissueSpec;
+import org.fatefield.engine.tissue.Timing;
+import org.fatefield.viz.chart.ChartFiles;
+import org.fatefield.viz.chart.FateProportionChart;
+import org.fatefield.viz.palette.FatePalette;
+import org.fatefield.viz.tissue.TissueRenderer;
+import org.junit.jupiter.api.Test;
+
+/** Headless drawing checked pixel by pixel, and the SVG export checked as XML with its series. */
+class RenderingTest {
+
+    @Test
+    void cellsAreDrawnInTheirFateColoursAtTheirCentres() {
+        // Two fixed cells: "high" (X = 1) at (25, 25) and "low" (X = 0) at (75, 25) in a 100 x 50 domain.
+        CustomNetwork inert = CustomNetwork.of(List.of("X"), List.of("k"), new double[] {0},
+                List.of(new CustomNetwork.ReactionDefinition("none", new int[] {1}, "k * X")));
+        TissueSpec spec = new TissueSpec(new CircuitSetup(inert, NoiseMode.NONE, 100, new double[] {1.0}),
+                new ParameterMapping(inert.defaultParameters(), List.of()), new MorphogenSpec(0, 0, 10, 0, List.of()),
+                100, 50, new GrowthSpec(1, 5, 0, new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e6, 0),
+                        Partitioning.equal()),
+                new FateClassifier(List.of(new FateRule("high", new double[] {0.5}, new double[] {Double.NaN})), "low"),
+                new Timing(0.02, 0.01, 0.01));
+        Tissue tissue = new Tissue(spec, 1);
+        tissue.start();
+        tissue.runToEnd();
+        Cell only = tissue.cells().get(0);
+        only.moveTo(25, 25);
+        only.setFate(0, 0);
+        int plotWidth = 400;
+        BufferedImage image = TissueRenderer.render(tissue, "test", plotWidth);
+        double scale = plotWidth / 100.0;
+        int left = 70;
+        int top = 48;
+        int plotHeight = (int) Math.round(50 * scale);
+        int px = (int) Math.round(left + 25 * scale);
+        int py = (int) Math.round(top + plotHeight - 25 * scale);
+        assertEquals(FatePalette.fate(0, 2).getRGB(), image.getRGB(px, py), "the cell's centre has its fate colour");
+        only.setFate(1, 0);
+        image = TissueRenderer.render(tissue, "test", plotWidth);
+        assertEquals(FatePalette.fate(1, 2).getRGB(), image.getRGB(px, py), "recoloured for the default fate");
+        // Far from the cell the field (zero everywhere) shows its lowest colour.
+        int fx = (int) Math.round(left + 80 * scale);
+        assertEquals(FatePalette.morphogen(0).getRGB(), image.getRGB(fx, py));
+        assertTrue(new Color(image.getRGB(2, 2)).equals(Color.WHITE));
+    }
+
+    @Test
+    void svgExportParsesAndHoldsEverySeries() throws Exception {
+        TimeSeries series = new TimeSeries(List.of("alpha", "beta", "rest"));
+        for (int t = 0; t < 5; t++) {
+            series.add(new TimeSeries.Row(t, new int[] {t, 2 * t, 10 - 3 * t}, 10, 0.1 * t));
+        }
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        ChartFiles.svg(FateProportionChart.create(series, "Proportions"), 800, 500, out);
+        String svg = out.toString(StandardCharsets.UTF_8);
+        var factory = javax.xml.parsers.DocumentBuilderFactory.newInstance();
+        factory.setFeature("http://apache.org/xml/features/nonvalidating/load-external-dtd", false);
+        var doc = factory.newDocumentBuilder().parse(new java.io.ByteArrayInputStream(out.toByteArray()));
+        assertEquals("svg", doc.getDocumentElement().getNodeName());
+        for (String name : List.of("alpha", "beta", "rest", "population (right axis)", "Proportions")) {
+            assertTrue(svg.contains(name), name + " in the SVG");
+        }
+    }
+}
