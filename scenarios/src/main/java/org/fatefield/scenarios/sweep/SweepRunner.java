@@ -26,7 +26,8 @@ import org.fatefield.scenarios.output.RunMetrics;
  * {@code results/<id>.json}, written to a temporary name and renamed, so a sweep killed at any
  * moment keeps every finished result and nothing half-written; started again, it skips valid
  * results and reruns missing, truncated or corrupt ones. A run that fails is recorded in
- * {@code results/<id>.failed.json} with its error, and the others go on.
+ * {@code results/<id>.failed.json} with its error, and the others go on. Progress shows as a bar
+ * with ETA on a terminal and as plain log lines otherwise (cluster logs).
  */
 public final class SweepRunner {
 
@@ -70,6 +71,10 @@ public final class SweepRunner {
         AtomicInteger done = new AtomicInteger();
         AtomicInteger failed = new AtomicInteger();
         long start = System.nanoTime();
+        boolean terminal = System.console() != null;
+        org.fatefield.scenarios.output.Progress bar = terminal
+                ? org.fatefield.scenarios.output.Progress.forConsole("sweep", todo.size(), log)
+                : org.fatefield.scenarios.output.Progress.silent();
         ExecutorService executor = Executors.newFixedThreadPool(Math.max(1, workers));
         try {
             List<Future<?>> futures = new ArrayList<>();
@@ -83,9 +88,13 @@ public final class SweepRunner {
                     double elapsed = (System.nanoTime() - start) / 1e9;
                     double eta = elapsed / n * (todo.size() - n);
                     synchronized (log) {
-                        log.printf(Locale.ROOT, "sweep: %d/%d runs done (%s %s), %.0f s elapsed, about %.0f s left%n",
-                                n, todo.size(), run.id(), ok ? "ok" : "FAILED", elapsed, eta);
-                        log.flush();
+                        if (terminal) {
+                            bar.update(n, todo.size());
+                        } else {
+                            log.printf(Locale.ROOT, "sweep: %d/%d runs done (%s %s), %.0f s elapsed, about %.0f s left%n",
+                                    n, todo.size(), run.id(), ok ? "ok" : "FAILED", elapsed, eta);
+                            log.flush();
+                        }
                     }
                     return null;
                 }));
@@ -100,6 +109,7 @@ public final class SweepRunner {
             throw new IOException("a run crashed the sweep runner: " + e.getCause(), e.getCause());
         } finally {
             executor.shutdownNow();
+            bar.close();
         }
         return new Outcome(runs.size() - todo.size(), todo.size() - failed.get(), failed.get());
     }
