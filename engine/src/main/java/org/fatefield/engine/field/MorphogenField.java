@@ -83,6 +83,27 @@ public final class MorphogenField {
         System.arraycopy(uptake, 0, exchangeUptake, 0, exchangeUptake.length);
     }
 
+    /**
+     * Gathers secretion and uptake by {@code cells} onto this field's grid for the next step:
+     * each secreting cell adds its amount over the area of its square; uptake scales with the
+     * area the cell covers (radius from {@code newbornRadius} and its age).
+     */
+    public void gatherExchange(java.util.List<org.fatefield.engine.cell.Cell> cells, double newbornRadius) {
+        MorphogenSpec.CellExchange exchange = spec.exchange();
+        double area = h * h;
+        java.util.Arrays.fill(exchangeSource, 0.0);
+        java.util.Arrays.fill(exchangeUptake, 0.0);
+        for (org.fatefield.engine.cell.Cell cell : cells) {
+            int k = squareOf(cell.x(), cell.y());
+            int secreting = exchange.secretingFate();
+            if (secreting == MorphogenSpec.CellExchange.ALL || secreting == cell.fate()) {
+                exchangeSource[k] += exchange.secretionRate() / area;
+            }
+            double r = cell.radius(newbornRadius);
+            exchangeUptake[k] += exchange.uptake() * Math.PI * r * r / area;
+        }
+    }
+
     /** Index of the grid square holding the point (µm). */
     public int squareOf(double x, double y) {
         int i = Math.min(nx - 1, Math.max(0, (int) (x / h)));

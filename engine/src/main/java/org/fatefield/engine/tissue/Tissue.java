@@ -130,11 +130,7 @@ public final class Tissue extends SimState {
             double age = cycle * rng.nextDouble();
             Cell founder = new Cell(id, -1, 0, -age, cycle, circuit.initialState(), rng, x, y, age);
             if (!spec.extrinsic().isEmpty()) {
-                double[] scores = new double[spec.extrinsic().size()];
-                for (int k = 0; k < scores.length; k++) {
-                    scores[k] = spec.extrinsic().get(k).founderScore(rng);
-                }
-                founder.setScores(scores);
+                founder.setScores(ExtrinsicNoise.founderScores(spec.extrinsic(), rng));
             }
             population.add(founder);
             ancestry.add(id, -1);
@@ -149,7 +145,7 @@ public final class Tissue extends SimState {
         double dt = spec.timing().step();
         for (MorphogenField f : fields) {
             if (f.spec().exchange().active()) {
-                exchange(f);
+                f.gatherExchange(population.view(), spec.growth().cellRadius());
             }
             f.advance(dt, pool);
         }
@@ -166,26 +162,6 @@ public final class Tissue extends SimState {
         if (steps % spec.timing().stepsPerRecord() == 0 || steps == spec.timing().totalSteps()) {
             record();
         }
-    }
-
-    /** Gathers secretion and uptake by the cells onto field {@code f}'s grid for the next step. */
-    private void exchange(MorphogenField f) {
-        org.fatefield.engine.field.MorphogenSpec.CellExchange exchange = f.spec().exchange();
-        int squares = f.columns() * f.rows();
-        double area = f.spacing() * f.spacing();
-        double[] amount = new double[squares];
-        double[] uptake = new double[squares];
-        double r0 = spec.growth().cellRadius();
-        for (Cell cell : population.view()) {
-            int k = f.squareOf(cell.x(), cell.y());
-            int secreting = exchange.secretingFate();
-            if (secreting == org.fatefield.engine.field.MorphogenSpec.CellExchange.ALL || secreting == cell.fate()) {
-                amount[k] += exchange.secretionRate() / area;
-            }
-            double r = cell.radius(r0);
-            uptake[k] += exchange.uptake() * Math.PI * r * r / area;
-        }
-        f.setCellExchange(amount, uptake);
     }
 
     /**
@@ -289,11 +265,7 @@ public final class Tissue extends SimState {
         cell.setSignal(mother.signal());
         cell.setFate(mother.fate(), mother.fateSince());
         if (!spec.extrinsic().isEmpty()) {
-            double[] scores = new double[spec.extrinsic().size()];
-            for (int k = 0; k < scores.length; k++) {
-                scores[k] = spec.extrinsic().get(k).daughterScore(mother.scores()[k], rng);
-            }
-            cell.setScores(scores);
+            cell.setScores(ExtrinsicNoise.daughterScores(spec.extrinsic(), mother.scores(), rng));
         }
         return cell;
     }
@@ -317,35 +289,12 @@ public final class Tissue extends SimState {
         stepCells(spec.timing().step());
     }
 
-    private static final long CHECKPOINT_MAGIC = 0x4646434b50543031L;
-
     /**
-     * Writes everything the run needs to continue (cells with their random streams, the field,
-     * the records so far, the lineage table in memory, the step count). Call between ticks.
+     * Writes everything the run needs to continue (cells with their random streams, the fields,
+     * the records so far, the ancestry, the step count). Call between ticks.
      */
     public void writeCheckpoint(java.io.DataOutputStream out) throws java.io.IOException {
-        out.writeLong(CHECKPOINT_MAGIC);
-        out.writeLong(steps);
-        out.writeLong(population.peekNextId());
-        out.writeInt(population.size());
-        for (Cell cell : population.view()) {
-            cell.write(out);
-        }
-        for (MorphogenField f : fields) {
-            f.write(out);
-        }
-        out.writeInt(series.rows().size());
-        for (TimeSeries.Row row : series.rows()) {
-            out.writeDouble(row.time());
-            int[] counts = row.fateCounts();
-            out.writeInt(counts.length);
-            for (int c : counts) {
-                out.writeInt(c);
-            }
-            out.writeInt(row.population());
-            out.writeDouble(row.meanMorphogen());
-        }
-        ancestry.write(out);
+        TissueCheckpoint.write(this, out);
     }
 
     /**
@@ -353,30 +302,23 @@ public final class Tissue extends SimState {
      * seed; call after {@link #start()}. The run then continues exactly as the original would have.
      */
     public void readCheckpoint(java.io.DataInputStream in) throws java.io.IOException {
-        if (in.readLong() != CHECKPOINT_MAGIC) {
-            throw new java.io.IOException("not a Fatefield tissue checkpoint");
-        }
-        steps = in.readLong();
-        long nextId = in.readLong();
-        int n = in.readInt();
-        population.reset(nextId);
-        for (int i = 0; i < n; i++) {
-            population.add(Cell.read(in, streams.stream(0)));
-        }
-        for (MorphogenField f : fields) {
-            f.read(in);
-        }
-        series = new TimeSeries(spec.fates().fateNames());
-        int rows = in.readInt();
-        for (int r = 0; r < rows; r++) {
-            double time = in.readDouble();
-            int[] counts = new int[in.readInt()];
-            for (int k = 0; k < counts.length; k++) {
-                counts[k] = in.readInt();
-            }
-            series.add(new TimeSeries.Row(time, counts, in.readInt(), in.readDouble()));
-        }
-        ancestry.read(in);
+        TissueCheckpoint.read(this, in);
+    }
+
+    /** The live population, for the checkpoint code. */
+    CellPopulation population() {
+        return population;
+    }
+
+    /** Sets the step count and the records, for the checkpoint code. */
+    void restoreProgress(long restoredSteps, TimeSeries restoredSeries) {
+        this.steps = restoredSteps;
+        this.series = restoredSeries;
+    }
+
+    /** A random stream of this run, to be overwritten by a restored state. */
+    UniformRandomProvider blankStream() {
+        return streams.stream(0);
     }
 
     /** Runs every remaining step. */

@@ -59,6 +59,25 @@ public record ExtrinsicNoise(String label, int[] indices, double cv, double rho)
         return rho * mother + Math.sqrt(1 - rho * rho) * ZigguratSampler.NormalizedGaussian.of(rng).sample();
     }
 
+    /** Scores of a founder, one per noise. */
+    public static double[] founderScores(java.util.List<ExtrinsicNoise> noises, UniformRandomProvider rng) {
+        double[] scores = new double[noises.size()];
+        for (int k = 0; k < scores.length; k++) {
+            scores[k] = noises.get(k).founderScore(rng);
+        }
+        return scores;
+    }
+
+    /** Scores of a daughter from her mother's, one per noise. */
+    public static double[] daughterScores(java.util.List<ExtrinsicNoise> noises, double[] mother,
+            UniformRandomProvider rng) {
+        double[] scores = new double[noises.size()];
+        for (int k = 0; k < scores.length; k++) {
+            scores[k] = noises.get(k).daughterScore(mother[k], rng);
+        }
+        return scores;
+    }
+
     /** Multiplies this noise's parameters in {@code params} (already set to their base values) by the factor. */
     public void apply(double z, double[] params) {
         double f = factor(z);

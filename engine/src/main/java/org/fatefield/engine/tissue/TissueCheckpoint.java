@@ -1,0 +1,73 @@
+package org.fatefield.engine.tissue;
+
+import java.io.DataInputStream;
+import java.io.DataOutputStream;
+import java.io.IOException;
+import org.fatefield.engine.cell.Cell;
+import org.fatefield.engine.field.MorphogenField;
+import org.fatefield.engine.record.TimeSeries;
+
+/**
+ * The binary checkpoint of a tissue: a magic number, the step count, the id counter, every live
+ * cell (its random stream's state included), every field, the recorded rows and the ancestry.
+ */
+final class TissueCheckpoint {
+
+    private static final long MAGIC = 0x4646434b50543031L;
+
+    private TissueCheckpoint() {
+    }
+
+    static void write(Tissue tissue, DataOutputStream out) throws IOException {
+        out.writeLong(MAGIC);
+        out.writeLong(tissue.steps());
+        out.writeLong(tissue.population().peekNextId());
+        out.writeInt(tissue.cells().size());
+        for (Cell cell : tissue.cells()) {
+            cell.write(out);
+        }
+        for (MorphogenField f : tissue.fields()) {
+            f.write(out);
+        }
+        out.writeInt(tissue.series().rows().size());
+        for (TimeSeries.Row row : tissue.series().rows()) {
+            out.writeDouble(row.time());
+            int[] counts = row.fateCounts();
+            out.writeInt(counts.length);
+            for (int c : counts) {
+                out.writeInt(c);
+            }
+            out.writeInt(row.population());
+            out.writeDouble(row.meanMorphogen());
+        }
+        tissue.ancestry().write(out);
+    }
+
+    static void read(Tissue tissue, DataInputStream in) throws IOException {
+        if (in.readLong() != MAGIC) {
+            throw new IOException("not a Fatefield tissue checkpoint");
+        }
+        long steps = in.readLong();
+        long nextId = in.readLong();
+        int n = in.readInt();
+        tissue.population().reset(nextId);
+        for (int i = 0; i < n; i++) {
+            tissue.population().add(Cell.read(in, tissue.blankStream()));
+        }
+        for (MorphogenField f : tissue.fields()) {
+            f.read(in);
+        }
+        TimeSeries series = new TimeSeries(tissue.spec().fates().fateNames());
+        int rows = in.readInt();
+        for (int r = 0; r < rows; r++) {
+            double time = in.readDouble();
+            int[] counts = new int[in.readInt()];
+            for (int k = 0; k < counts.length; k++) {
+                counts[k] = in.readInt();
+            }
+            series.add(new TimeSeries.Row(time, counts, in.readInt(), in.readDouble()));
+        }
+        tissue.ancestry().read(in);
+        tissue.restoreProgress(steps, series);
+    }
+}
