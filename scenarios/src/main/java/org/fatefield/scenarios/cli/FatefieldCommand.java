@@ -9,7 +9,7 @@ import picocli.CommandLine.Command;
         description = {"Fatefield simulates growing tissues in which every cell carries a noisy gene switch"
             + " whose parameters a diffusing morphogen sets, and measures the fates that come out.",
             "Research software: not for clinical decisions.", ""},
-        subcommands = {RunCommand.class, ReplicatesCommand.class, SweepCommand.class, RobustnessCommand.class, AnalyzeCommand.class, ReportCommand.class,
+        subcommands = {RunCommand.class, ViewCommand.class, ReplicatesCommand.class, SweepCommand.class, RobustnessCommand.class, AnalyzeCommand.class, ReportCommand.class,
             ValidateCommand.class, KeysCommand.class, BenchCommand.class,
             CommandLine.HelpCommand.class},
         footer = {"", "Start with:  fatefield run demo --out demo-output",

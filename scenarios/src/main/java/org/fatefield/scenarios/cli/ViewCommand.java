@@ -1,0 +1,107 @@
+package org.fatefield.scenarios.cli;
+
+import java.awt.GraphicsEnvironment;
+import java.nio.charset.StandardCharsets;
+import java.util.List;
+import java.util.concurrent.Callable;
+import javax.swing.SwingUtilities;
+import org.fatefield.circuits.analysis.continuation.Branch;
+import org.fatefield.circuits.analysis.continuation.ContinuationSettings;
+import org.fatefield.circuits.analysis.continuation.EquilibriumContinuation;
+import org.fatefield.circuits.analysis.continuation.NetworkSystem;
+import org.fatefield.engine.coupling.SignalCoupling;
+import org.fatefield.engine.tissue.Tissue;
+import org.fatefield.scenarios.format.Scenario;
+import org.fatefield.scenarios.format.ScenarioException;
+import org.fatefield.scenarios.format.ScenarioReader;
+import org.fatefield.scenarios.sweep.ScenarioOverrides;
+import org.fatefield.viz.live.TissueWindow;
+import picocli.CommandLine;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+
+/** {@code fatefield view}: watch a scenario's tissue live. */
+@Command(name = "view", mixinStandardHelpOptions = true,
+        description = {"Open a window that runs a scenario live: the tissue over its morphogen, fate proportions,"
+                + " and every cell on the circuit's bifurcation branches. Click a cell to inspect it; change"
+                + " settings (key = value; ...) and press Reset to run again."})
+final class ViewCommand implements Callable<Integer> {
+
+    @Parameters(index = "0", paramLabel = "SCENARIO", description = "a scenario file, or a built-in name (demo)")
+    private String scenario;
+
+    @Option(names = "--seed", paramLabel = "N", description = "random seed (default: the scenario's)")
+    private Long seed;
+
+    @CommandLine.Spec
+    private CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        if (GraphicsEnvironment.isHeadless()) {
+            spec.commandLine().getErr().println("view needs a display; on a cluster use: fatefield run SCENARIO --frames"
+                    + " HOURS (PNG frames and an animated GIF)");
+            return FatefieldCommand.INVALID_INPUT;
+        }
+        Scenario loaded = ScenarioArgument.loadOrReport(scenario, spec.commandLine().getErr());
+        if (loaded == null) {
+            return FatefieldCommand.INVALID_INPUT;
+        }
+        TissueWindow window = open(loaded, seed != null ? seed : loaded.seed());
+        SwingUtilities.invokeLater(() -> window.setVisible(true));
+        return 0;
+    }
+
+    /** A window for {@code loaded} (not yet visible). */
+    static TissueWindow open(Scenario loaded, long runSeed) {
+        int threads = Runtime.getRuntime().availableProcessors();
+        List<Branch> branches = branches(loaded);
+        String parameter = loaded.tissue().mapping().couplings().isEmpty() ? "control"
+                : loaded.tissue().mapping().couplings().get(0).label();
+        return new TissueWindow("Fatefield: " + loaded.name(), settings -> new Tissue(variant(loaded, settings).tissue(),
+                runSeed, threads), branches, parameter);
+    }
+
+    private static Scenario variant(Scenario base, String settings) {
+        if (settings == null || settings.isBlank()) {
+            return base;
+        }
+        ScenarioOverrides variant = ScenarioOverrides.of(base.text());
+        for (String item : settings.split(";")) {
+            if (item.isBlank()) {
+                continue;
+            }
+            String[] kv = item.split("=");
+            if (kv.length != 2) {
+                throw new IllegalArgumentException("write settings as key = value; key = value, got '" + item.trim() + "'");
+            }
+            try {
+                variant = variant.with(kv[0].trim(), Double.parseDouble(kv[1].trim()));
+            } catch (NumberFormatException e) {
+                throw new IllegalArgumentException("'" + kv[1].trim() + "' is not a number", e);
+            }
+        }
+        try {
+            return ScenarioReader.parse("settings", base.name(), variant.toToml().getBytes(StandardCharsets.UTF_8));
+        } catch (ScenarioException e) {
+            throw new IllegalArgumentException(e.problems().get(0).keyPath() + ": " + e.problems().get(0).message(), e);
+        }
+    }
+
+    private static List<Branch> branches(Scenario loaded) {
+        if (loaded.tissue().mapping().couplings().isEmpty()) {
+            return List.of();
+        }
+        SignalCoupling c = loaded.tissue().mapping().couplings().get(0);
+        double lo = c.table() != null ? c.table().minimum() : Math.min(c.base(), c.base() + c.gain());
+        double hi = c.table() != null ? c.table().maximum() : Math.max(c.base(), c.base() + c.gain());
+        if (!(hi > lo)) {
+            return List.of();
+        }
+        NetworkSystem system = new NetworkSystem(loaded.tissue().circuit().network(), loaded.tissue().mapping().base(),
+                c.parameterIndices());
+        return EquilibriumContinuation.of(system, ContinuationSettings.defaults().withMaxStep((hi - lo) / 60))
+                .diagram(loaded.tissue().circuit().initialState(), lo, lo, hi, true, 2);
+    }
+}

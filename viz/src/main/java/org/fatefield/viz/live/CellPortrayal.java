@@ -1,0 +1,46 @@
+package org.fatefield.viz.live;
+
+import java.awt.Color;
+import java.awt.Graphics2D;
+import java.awt.geom.Ellipse2D;
+import org.fatefield.engine.cell.Cell;
+import sim.portrayal.DrawInfo2D;
+import sim.portrayal.SimplePortrayal2D;
+
+/** Draws one cell as a disc of its radius, coloured by the window's current colour mode. */
+final class CellPortrayal extends SimplePortrayal2D {
+
+    private static final long serialVersionUID = 1L;
+    private static final Color OUTLINE = new Color(0, 0, 0, 90);
+    private static final Color SELECTED = new Color(0x111111);
+
+    private final TissueGui gui;
+
+    CellPortrayal(TissueGui gui) {
+        this.gui = gui;
+    }
+
+    @Override
+    public void draw(Object object, Graphics2D g, DrawInfo2D info) {
+        Cell cell = (Cell) object;
+        double r = cell.radius(gui.tissue().spec().growth().cellRadius());
+        double w = 2 * r * info.draw.width;
+        double h = 2 * r * info.draw.height;
+        Ellipse2D disc = new Ellipse2D.Double(info.draw.x - w / 2, info.draw.y - h / 2, w, h);
+        g.setColor(gui.colourOf(cell));
+        g.fill(disc);
+        if (w > 4) {
+            g.setColor(cell == gui.selected() ? SELECTED : OUTLINE);
+            g.draw(disc);
+        }
+    }
+
+    @Override
+    public boolean hitObject(Object object, DrawInfo2D range) {
+        Cell cell = (Cell) object;
+        double r = cell.radius(gui.tissue().spec().growth().cellRadius());
+        double w = 2 * r * range.draw.width;
+        double h = 2 * r * range.draw.height;
+        return new Ellipse2D.Double(range.draw.x - w / 2, range.draw.y - h / 2, w, h).intersects(range.clip);
+    }
+}

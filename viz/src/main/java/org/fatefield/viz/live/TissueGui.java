@@ -1,0 +1,163 @@
+package org.fatefield.viz.live;
+
+import java.awt.Color;
+import java.util.List;
+import org.fatefield.engine.cell.Cell;
+import org.fatefield.engine.field.MorphogenField;
+import org.fatefield.engine.tissue.Tissue;
+import org.fatefield.viz.palette.FatePalette;
+import sim.display.GUIState;
+import sim.field.continuous.Continuous2D;
+import sim.field.grid.DoubleGrid2D;
+import sim.portrayal.continuous.ContinuousPortrayal2D;
+import sim.portrayal.grid.FastValueGridPortrayal2D;
+import sim.util.Double2D;
+import sim.util.gui.ColorMap;
+
+/**
+ * The model side of the live view: a MASON GUIState over a tissue, keeping a continuous field of
+ * cell positions and a grid of morphogen values in step with the engine for MASON's display (the
+ * engine itself keeps its own arrays; these copies exist only for drawing). The y axis is flipped
+ * so that the picture matches the headless images (y up).
+ */
+public final class TissueGui extends GUIState {
+
+    /** How cells are coloured. */
+    public enum ColourMode {
+        /** By fate, the default fate in grey. */
+        FATE,
+        /** By the level of the first species, light to dark. */
+        FIRST_SPECIES,
+        /** By clone (descendants of one founder). */
+        CLONE
+    }
+
+    private static final Color[] CLONE_COLOURS = {new Color(0xE69F00), new Color(0x56B4E9), new Color(0x009E73),
+        new Color(0xF0E442), new Color(0x0072B2), new Color(0xD55E00), new Color(0xCC79A7), new Color(0x999999)};
+
+    private final Tissue tissue;
+    private final Continuous2D space;
+    private final ContinuousPortrayal2D cellPortrayal = new ContinuousPortrayal2D();
+    private final FastValueGridPortrayal2D fieldPortrayal = new FastValueGridPortrayal2D("morphogen", false);
+    private DoubleGrid2D grid;
+    private ColourMode mode = ColourMode.FATE;
+    private Cell selected;
+    private double speciesMax = 1;
+    private double fieldMax = 1e-12;
+
+    /** A view of {@code tissue} (not yet started). */
+    public TissueGui(Tissue tissue) {
+        super(tissue);
+        this.tissue = tissue;
+        this.space = new Continuous2D(4 * tissue.spec().growth().cellRadius(), tissue.spec().width(),
+                tissue.spec().height());
+    }
+
+    /** The tissue. */
+    public Tissue tissue() {
+        return tissue;
+    }
+
+    /** The cells' portrayal, for the display. */
+    public ContinuousPortrayal2D cells() {
+        return cellPortrayal;
+    }
+
+    /** The field's portrayal, for the display. */
+    public FastValueGridPortrayal2D field() {
+        return fieldPortrayal;
+    }
+
+    @Override
+    public void start() {
+        super.start();
+        selected = null;
+        MorphogenField f = tissue.field();
+        grid = new DoubleGrid2D(f.columns(), f.rows());
+        fieldPortrayal.setField(grid);
+        fieldPortrayal.setMap(new ColorMap() {
+            @Override
+            public Color getColor(double level) {
+                return FatePalette.morphogen(level / fieldMax);
+            }
+
+            @Override
+            public int getRGB(double level) {
+                return getColor(level).getRGB();
+            }
+
+            @Override
+            public int getAlpha(double level) {
+                return 255;
+            }
+
+            @Override
+            public boolean validLevel(double level) {
+                return true;
+            }
+
+            @Override
+            public double defaultValue() {
+                return 0;
+            }
+        });
+        cellPortrayal.setField(space);
+        cellPortrayal.setPortrayalForAll(new CellPortrayal(this));
+        sync();
+        scheduleRepeatingImmediatelyAfter(state -> sync());
+    }
+
+    /** Copies positions and field values into the display's fields. */
+    public void sync() {
+        space.clear();
+        double height = tissue.spec().height();
+        double max = 1e-12;
+        for (Cell cell : tissue.cells()) {
+            space.setObjectLocation(cell, new Double2D(cell.x(), height - cell.y()));
+            max = Math.max(max, cell.concentration(0));
+        }
+        speciesMax = max;
+        MorphogenField f = tissue.field();
+        fieldMax = Math.max(f.max(), 1e-12);
+        for (int i = 0; i < f.columns(); i++) {
+            for (int j = 0; j < f.rows(); j++) {
+                grid.field[i][f.rows() - 1 - j] = f.value(i, j);
+            }
+        }
+    }
+
+    /** The colour of {@code cell} in the current mode. */
+    Color colourOf(Cell cell) {
+        int fates = tissue.spec().fates().fateCount();
+        return switch (mode) {
+            case FATE -> FatePalette.fate(Math.max(0, cell.fate()), fates);
+            case FIRST_SPECIES -> shade(cell.concentration(0) / speciesMax);
+            case CLONE -> CLONE_COLOURS[(int) (tissue.ancestry().founder(cell.id()) % CLONE_COLOURS.length)];
+        };
+    }
+
+    private static Color shade(double t) {
+        double s = Math.max(0, Math.min(1, t));
+        return new Color((int) (235 - 200 * s), (int) (235 - 160 * s), (int) (245 - 120 * s));
+    }
+
+    /** Sets the colour mode. */
+    public void setMode(ColourMode value) {
+        this.mode = value;
+    }
+
+    /** The selected cell, or null. */
+    public Cell selected() {
+        return selected;
+    }
+
+    /** Selects a cell (or none). */
+    public void select(Cell cell) {
+        this.selected = cell;
+    }
+
+    /** The live cells. */
+    public List<Cell> liveCells() {
+        return tissue.cells();
+    }
+}

@@ -1,0 +1,254 @@
+package org.fatefield.viz.live;
+
+import java.awt.BorderLayout;
+import java.awt.Color;
+import java.awt.Dimension;
+import java.awt.GridLayout;
+import java.awt.event.MouseAdapter;
+import java.awt.event.MouseEvent;
+import java.awt.geom.Point2D;
+import java.util.List;
+import java.util.Locale;
+import java.util.function.Function;
+import javax.swing.BorderFactory;
+import javax.swing.JButton;
+import javax.swing.JCheckBox;
+import javax.swing.JComboBox;
+import javax.swing.JFrame;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JSlider;
+import javax.swing.JTextArea;
+import javax.swing.JToggleButton;
+import javax.swing.Timer;
+import org.fatefield.circuits.analysis.continuation.Branch;
+import org.fatefield.engine.cell.Cell;
+import org.fatefield.engine.tissue.Tissue;
+import org.fatefield.viz.chart.FateProportionChart;
+import org.fatefield.viz.palette.FatePalette;
+import org.jfree.chart.ChartPanel;
+import sim.display.Display2D;
+import sim.portrayal.LocationWrapper;
+import sim.util.Bag;
+
+/**
+ * The live window: the tissue on MASON's 2D display (cells over the morphogen heat map, zoom by
+ * the zoom slider, pan by the scroll bars), our own controls (play, pause, step, reset with new
+ * settings, speed, colour mode, field on or off), a legend, the clicked cell's state and lineage,
+ * and two live charts (fate proportions; cells over the bifurcation branches). MASON's own
+ * header, console and movie button are not shown; frames are recorded by {@code run --frames}.
+ */
+public final class TissueWindow extends JFrame {
+
+    private static final long serialVersionUID = 1L;
+
+    private final Function<String, Tissue> factory;
+    private final javax.swing.JTextField settings = new javax.swing.JTextField(28);
+    private final List<Branch> branches;
+    private final String parameter;
+    private TissueGui gui;
+    private Display2D display;
+    private final JPanel canvasHolder = new JPanel(new BorderLayout());
+    private final JTextArea info = new JTextArea(8, 28);
+    private final JLabel status = new JLabel(" ");
+    private final JPanel chartHolder = new JPanel(new GridLayout(2, 1));
+    private LiveCharts charts;
+    private ChartPanel proportions;
+    private final JSlider speed = new JSlider(1, 50, 5);
+    private final JSlider zoom = new JSlider(10, 80, 10);
+    private final JCheckBox showField = new JCheckBox("morphogen", true);
+    private final JComboBox<TissueGui.ColourMode> colour = new JComboBox<>(TissueGui.ColourMode.values());
+    private final Timer timer;
+
+    /**
+     * @param title     window title
+     * @param factory   makes a fresh (unstarted) tissue for each reset from the settings text
+     *                  ({@code key = value; ...}); throws IllegalArgumentException with a message if they are wrong
+     * @param branches  the circuit's steady-state branches along the control parameter
+     * @param parameter the control parameter's name
+     */
+    public TissueWindow(String title, Function<String, Tissue> factory, List<Branch> branches, String parameter) {
+        super(title);
+        this.factory = factory;
+        this.branches = branches;
+        this.parameter = parameter;
+        setDefaultCloseOperation(DISPOSE_ON_CLOSE);
+        timer = new Timer(30, e -> advance(speed.getValue()));
+        JToggleButton play = new JToggleButton("Play");
+        play.addActionListener(e -> {
+            if (play.isSelected()) {
+                play.setText("Pause");
+                timer.start();
+            } else {
+                play.setText("Play");
+                timer.stop();
+            }
+        });
+        JButton step = new JButton("Step");
+        step.addActionListener(e -> advance(1));
+        JButton reset = new JButton("Reset");
+        reset.addActionListener(e -> reset());
+        colour.addActionListener(e -> {
+            gui.setMode((TissueGui.ColourMode) colour.getSelectedItem());
+            display.repaint();
+        });
+        showField.addActionListener(e -> attach());
+        JPanel controls = new JPanel();
+        controls.add(play);
+        controls.add(step);
+        controls.add(reset);
+        controls.add(new JLabel("speed"));
+        controls.add(speed);
+        controls.add(new JLabel("zoom"));
+        controls.add(zoom);
+        zoom.addChangeListener(e -> {
+            display.setScale(zoom.getValue() / 10.0);
+            display.repaint();
+        });
+        controls.add(new JLabel("colour by"));
+        controls.add(colour);
+        controls.add(showField);
+        JPanel edits = new JPanel();
+        edits.add(new JLabel("settings for the next reset (key = value; ...)"));
+        edits.add(settings);
+        JPanel top = new JPanel(new GridLayout(2, 1));
+        top.add(controls);
+        top.add(edits);
+        info.setEditable(false);
+        info.setBorder(BorderFactory.createTitledBorder("clicked cell"));
+        JPanel side = new JPanel(new BorderLayout());
+        side.add(chartHolder, BorderLayout.CENTER);
+        side.add(info, BorderLayout.SOUTH);
+        side.setPreferredSize(new Dimension(520, 700));
+        JPanel south = new JPanel(new BorderLayout());
+        south.add(status, BorderLayout.WEST);
+        south.add(legend(), BorderLayout.EAST);
+        add(top, BorderLayout.NORTH);
+        add(canvasHolder, BorderLayout.CENTER);
+        add(side, BorderLayout.EAST);
+        add(south, BorderLayout.SOUTH);
+        reset();
+        pack();
+    }
+
+    private JPanel legend() {
+        Tissue t = factory.apply("");
+        List<String> fates = t.spec().fates().fateNames();
+        JPanel legend = new JPanel();
+        for (int f = 0; f < fates.size(); f++) {
+            JLabel label = new JLabel("\u25CF " + fates.get(f));
+            label.setForeground(FatePalette.fate(f, fates.size()));
+            legend.add(label);
+        }
+        return legend;
+    }
+
+    /** Starts a fresh tissue with the current settings. */
+    public void reset() {
+        timer.stop();
+        Tissue tissue;
+        try {
+            tissue = factory.apply(settings.getText());
+        } catch (IllegalArgumentException e) {
+            status.setText("  settings not applied: " + e.getMessage());
+            if (gui != null) {
+                return;
+            }
+            tissue = factory.apply("");
+        }
+        if (gui != null) {
+            gui.finish();
+        }
+        gui = new TissueGui(tissue);
+        gui.start();
+        double scale = Math.min(820 / tissue.spec().width(), 620 / tissue.spec().height());
+        display = new Display2D(tissue.spec().width() * scale, tissue.spec().height() * scale, gui);
+        display.header.setVisible(false);
+        display.setBackdrop(Color.WHITE);
+        display.insideDisplay.removeListeners();
+        display.insideDisplay.addMouseListener(new MouseAdapter() {
+            @Override
+            public void mouseClicked(MouseEvent e) {
+                select(e.getPoint());
+            }
+        });
+        attach();
+        display.reset();
+        canvasHolder.removeAll();
+        canvasHolder.add(display, BorderLayout.CENTER);
+        charts = new LiveCharts(tissue, branches, parameter);
+        proportions = new ChartPanel(FateProportionChart.create(tissue.series(), "Fate proportions"));
+        chartHolder.removeAll();
+        chartHolder.add(proportions);
+        chartHolder.add(new ChartPanel(charts.phase()));
+        gui.setMode((TissueGui.ColourMode) colour.getSelectedItem());
+        refresh();
+        revalidate();
+    }
+
+    private void attach() {
+        display.detatchAll();
+        display.attach(gui.field(), "morphogen", showField.isSelected());
+        display.attach(gui.cells(), "cells");
+        display.repaint();
+    }
+
+    /** Advances the tissue by {@code steps} steps and refreshes the view. */
+    public void advance(int steps) {
+        Tissue t = gui.tissue();
+        for (int i = 0; i < steps && !t.finished(); i++) {
+            gui.step();
+        }
+        refresh();
+    }
+
+    private void refresh() {
+        Tissue t = gui.tissue();
+        status.setText(String.format(Locale.ROOT, "  t = %.2f h, %d cells", t.time(), t.cells().size()));
+        proportions.setChart(FateProportionChart.create(t.series(), "Fate proportions"));
+        charts.update(t);
+        describeSelection();
+        display.repaint();
+    }
+
+    private void select(Point2D point) {
+        Bag[] hits = display.objectsHitBy(point);
+        gui.select(null);
+        for (Bag bag : hits) {
+            for (Object o : bag) {
+                if (o instanceof LocationWrapper w && w.getObject() instanceof Cell c) {
+                    gui.select(c);
+                }
+            }
+        }
+        describeSelection();
+        display.repaint();
+    }
+
+    private void describeSelection() {
+        Cell c = gui.selected();
+        if (c == null) {
+            info.setText("click a cell");
+            return;
+        }
+        Tissue t = gui.tissue();
+        List<String> species = t.spec().circuit().network().speciesNames();
+        StringBuilder s = new StringBuilder();
+        s.append(String.format(Locale.ROOT, "cell %d, generation %d, mother %d, founder %d%n", c.id(), c.generation(),
+                c.parentId(), t.ancestry().founder(c.id())));
+        s.append(String.format(Locale.ROOT, "at (%.1f, %.1f) µm, age %.2f h of %.2f h%n", c.x(), c.y(), c.age(),
+                c.cycleTime()));
+        for (int i = 0; i < species.size(); i++) {
+            s.append(String.format(Locale.ROOT, "%s = %.3f%n", species.get(i), c.concentration(i)));
+        }
+        s.append(String.format(Locale.ROOT, "morphogen %.3f, %s = %.3f%n", c.signal(), parameter,
+                t.spec().mapping().controlAt(c.signal())));
+        s.append("fate: ").append(c.fate() >= 0 ? t.spec().fates().fateNames().get(c.fate()) : "not yet classified");
+        info.setText(s.toString());
+    }
+
+    /** The current view state (for tests and screenshots). */
+    public TissueGui gui() {
+        return gui;
+    }
+}
