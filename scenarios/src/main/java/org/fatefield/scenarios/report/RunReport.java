@@ -212,7 +212,11 @@ public final class RunReport {
                     + "img{max-width:100%}figure{margin:1.5em 0}figcaption{color:#555;font-size:90%}"
                     + "table{border-collapse:collapse;margin:1em 0}td,th{border:1px solid #ccc;padding:4px 10px;"
                     + "text-align:left}pre{background:#f6f6f2;padding:1em;overflow-x:auto}</style></head>\n<body><h1>"
-                    + escape(title) + "</h1>\n" + body + "</body></html>\n";
+                    + escape(title) + "</h1>\n" + body
+                    + "<script>window.addEventListener('load',function(){var i=document.images,n=0;"
+                    + "for(var k=0;k<i.length;k++){if(i[k].complete&&i[k].naturalWidth>0){n++;}}"
+                    + "document.body.setAttribute('data-images-loaded',n+'/'+i.length);});</script>\n"
+                    + "</body></html>\n";
         }
 
         private static String escape(String s) {

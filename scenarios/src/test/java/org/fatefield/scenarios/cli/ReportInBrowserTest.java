@@ -1,0 +1,76 @@
+package org.fatefield.scenarios.cli;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assumptions.assumeTrue;
+
+import java.io.File;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.TimeUnit;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.fatefield.scenarios.builtin.BuiltinScenarios;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Opens a generated report in a real headless browser (Chromium) and checks that every embedded
+ * image decoded: the page's own script writes "loaded/total" into {@code data-images-loaded} once
+ * the load event fires, and the browser's serialised DOM is read back. Skipped when no Chromium
+ * is installed, unless {@code FATEFIELD_REQUIRE_BROWSER=1} (set by {@code .ci/run}) makes a
+ * missing browser a failure.
+ */
+class ReportInBrowserTest {
+
+    @TempDir
+    Path tmp;
+
+    @Test
+    void everyEmbeddedImageLoadsInChromium() throws Exception {
+        String browser = findBrowser();
+        boolean required = "1".equals(System.getenv("FATEFIELD_REQUIRE_BROWSER"));
+        if (required) {
+            assertTrue(browser != null, "FATEFIELD_REQUIRE_BROWSER=1 but no chromium on PATH");
+        }
+        assumeTrue(browser != null, "no chromium on PATH; report browser test skipped");
+
+        Path scenario = tmp.resolve("short.toml");
+        Files.writeString(scenario, new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8)
+                .replace("duration = 48.0", "duration = 8.0"));
+        Path run = tmp.resolve("run");
+        PrintWriter quiet = new PrintWriter(new StringWriter());
+        assertEquals(0, FatefieldCommand.execute(quiet, quiet, "run", scenario.toString(), "--out", run.toString(),
+                "--quiet", "--frames", "4"));
+        assertEquals(0, FatefieldCommand.execute(quiet, quiet, "report", run.toString()));
+
+        Path profile = Files.createDirectories(tmp.resolve("browser-profile"));
+        Process process = new ProcessBuilder(List.of(browser, "--headless", "--no-sandbox", "--disable-gpu",
+                "--user-data-dir=" + profile, "--virtual-time-budget=5000", "--dump-dom",
+                run.resolve("report.html").toUri().toString()))
+                .redirectError(tmp.resolve("browser.log").toFile())
+                .start();
+        String dom = new String(process.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
+        assertTrue(process.waitFor(120, TimeUnit.SECONDS), "browser finished within 120 s");
+        Matcher loaded = Pattern.compile("data-images-loaded=\"(\\d+)/(\\d+)\"").matcher(dom);
+        assertTrue(loaded.find(), "the page's load script ran; browser log in " + tmp.resolve("browser.log"));
+        assertEquals("5", loaded.group(2), "proportions, tissue, animation, profile, bifurcation");
+        assertEquals(loaded.group(2), loaded.group(1), "every embedded image decoded in the browser");
+    }
+
+    private static String findBrowser() {
+        for (String name : List.of("chromium", "chromium-browser", "google-chrome")) {
+            for (String dir : System.getenv().getOrDefault("PATH", "").split(File.pathSeparator)) {
+                File candidate = new File(dir, name);
+                if (candidate.canExecute()) {
+                    return candidate.getPath();
+                }
+            }
+        }
+        return null;
+    }
+}
