@@ -4,7 +4,10 @@ import java.awt.GraphicsEnvironment;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
 import java.util.concurrent.Callable;
+import java.util.function.DoubleFunction;
 import javax.swing.SwingUtilities;
+import org.fatefield.circuits.analysis.QuasiPotential;
+import org.fatefield.circuits.analysis.StationaryFokkerPlanck;
 import org.fatefield.circuits.analysis.continuation.Branch;
 import org.fatefield.circuits.analysis.continuation.ContinuationSettings;
 import org.fatefield.circuits.analysis.continuation.EquilibriumContinuation;
@@ -24,8 +27,10 @@ import picocli.CommandLine.Parameters;
 /** {@code fatefield view}: watch a scenario's tissue live. */
 @Command(name = "view", mixinStandardHelpOptions = true,
         description = {"Open a window that runs a scenario live: the tissue over its morphogen, fate proportions,"
-                + " and every cell on the circuit's bifurcation branches. Click a cell to inspect it; change"
-                + " settings (key = value; ...) and press Reset to run again."})
+                + " and every cell on the circuit's bifurcation branches. Colour cells by fate, by the first"
+                + " species, by clone or by commitment (pale: fate only just entered). Click a cell to see its"
+                + " state, its circuit trace back through its ancestors, and the circuit's landscape at its"
+                + " local control parameter. Change settings (key = value; ...) and press Reset to run again."})
 final class ViewCommand implements Callable<Integer> {
 
     @Parameters(index = "0", paramLabel = "SCENARIO", description = "a scenario file, or a built-in name (demo)")
@@ -53,6 +58,8 @@ final class ViewCommand implements Callable<Integer> {
         return 0;
     }
 
+    private static final int LANDSCAPE_BINS = 60;
+
     /** A window for {@code loaded} (not yet visible). */
     static TissueWindow open(Scenario loaded, long runSeed) {
         int threads = Runtime.getRuntime().availableProcessors();
@@ -60,7 +67,38 @@ final class ViewCommand implements Callable<Integer> {
         String parameter = loaded.tissue().mapping().couplings().isEmpty() ? "control"
                 : loaded.tissue().mapping().couplings().get(0).label();
         return new TissueWindow("Fatefield: " + loaded.name(), settings -> new Tissue(variant(loaded, settings).tissue(),
-                runSeed, threads), branches, parameter);
+                runSeed, threads), branches, parameter, landscape(loaded, branches));
+    }
+
+    /**
+     * The circuit's stationary landscape at a value of the control parameter, solved on a grid
+     * (exact relative well depths), for two-species circuits with a coupling; null otherwise.
+     */
+    private static DoubleFunction<QuasiPotential> landscape(Scenario loaded, List<Branch> branches) {
+        var circuit = loaded.tissue().circuit();
+        if (circuit.network().speciesCount() != 2 || loaded.tissue().mapping().couplings().isEmpty()) {
+            return null;
+        }
+        double[] upper = {0, 0};
+        for (Branch b : branches) {
+            for (var p : b.points()) {
+                upper[0] = Math.max(upper[0], 1.3 * p.state()[0]);
+                upper[1] = Math.max(upper[1], 1.3 * p.state()[1]);
+            }
+        }
+        for (int i = 0; i < 2; i++) {
+            upper[i] = Math.max(upper[i], 2 * circuit.initialState()[i] + 1e-3);
+        }
+        int[] indices = loaded.tissue().mapping().couplings().get(0).parameterIndices();
+        double[] base = loaded.tissue().mapping().base();
+        return value -> {
+            double[] params = base.clone();
+            for (int index : indices) {
+                params[index] = value;
+            }
+            return StationaryFokkerPlanck.solve(circuit.network(), params, circuit.systemSize(), 0, 1,
+                    new double[2], upper, LANDSCAPE_BINS);
+        };
     }
 
     private static Scenario variant(Scenario base, String settings) {

@@ -58,5 +58,9 @@ class ViewWindowTest {
         int rows = Integer.parseInt(out.lines().filter(l -> l.startsWith("rows ")).findFirst().orElseThrow()
                 .substring(5).trim());
         assertTrue(rows > 10, "the fate chart has data: " + rows + " rows");
+        int trace = Integer.parseInt(out.lines().filter(l -> l.startsWith("trace ")).findFirst().orElseThrow()
+                .substring(6).trim());
+        // 2005 steps were sampled; the clicked cell inherits its ancestors' history, so its trace is full.
+        assertEquals(400, trace, "the clicked cell's trace runs back through its ancestors");
     }
 }

@@ -10,11 +10,12 @@ import javax.swing.SwingUtilities;
 import org.fatefield.scenarios.builtin.BuiltinScenarios;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioReader;
+import org.fatefield.viz.live.TissueGui;
 import org.fatefield.viz.live.TissueWindow;
 
 /**
  * Opens the live window on a short demo in a real (X) display, steps it, and saves a screenshot
- * of the window taken from the screen; prints the number of recorded rows. Run by the window
+ * of the window taken from the screen (and a second one coloured by commitment); prints the number of recorded rows. Run by the window
  * test in its own, non-headless JVM.
  */
 public final class WindowScreenshot {
@@ -35,13 +36,25 @@ public final class WindowScreenshot {
         for (int i = 0; i < 40; i++) {
             SwingUtilities.invokeAndWait(() -> window[0].advance(50));
         }
+        SwingUtilities.invokeAndWait(() -> {
+            var cells = window[0].gui().tissue().cells();
+            window[0].inspect(cells.get(cells.size() / 2));
+            window[0].advance(5);
+        });
         Thread.sleep(1500);
         Rectangle[] bounds = new Rectangle[1];
         SwingUtilities.invokeAndWait(() -> bounds[0] = window[0].getBounds());
         BufferedImage shot = new Robot().createScreenCapture(bounds[0]);
         ImageIO.write(shot, "png", new File(args[0]));
+        SwingUtilities.invokeAndWait(() -> {
+            window[0].setColourMode(TissueGui.ColourMode.COMMITMENT);
+        });
+        Thread.sleep(1000);
+        ImageIO.write(new Robot().createScreenCapture(bounds[0]), "png",
+                new File(args[0].replace(".png", "-commitment.png")));
         System.out.println("rows " + window[0].gui().tissue().series().rows().size());
         System.out.println("cells " + window[0].gui().tissue().cells().size());
+        System.out.println("trace " + window[0].selectedTraceSamples());
         System.exit(0);
     }
 }

@@ -17,14 +17,18 @@ import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 
 /**
- * The live view's second chart: every cell as a point at (its local control parameter, its first
- * species), over the circuit's stable and unstable steady-state branches, so cells can be seen
- * dropping onto a branch as they cross the threshold.
+ * The live view's charts besides fate proportions: every cell as a point at (its local control
+ * parameter, its first species) over the circuit's stable and unstable steady-state branches, so
+ * cells can be seen dropping onto a branch as they cross the threshold; and the clicked cell's
+ * circuit trace, back through its ancestors.
  */
 final class LiveCharts {
 
     private final XYSeries cells = new XYSeries("cells", false, true);
     private final JFreeChart phase;
+    private final XYSeriesCollection trace = new XYSeriesCollection();
+    private final JFreeChart traceChart;
+    private final List<String> species;
 
     LiveCharts(Tissue tissue, List<Branch> branches, String parameter) {
         XYSeriesCollection data = new XYSeriesCollection();
@@ -58,6 +62,31 @@ final class LiveCharts {
         plot.setRenderer(1, dots);
         lines.setDefaultStroke(new BasicStroke(2f));
         phase = ChartStyle.chart("Cells on the bifurcation branches", plot, false);
+        species = tissue.spec().circuit().network().speciesNames();
+        NumberAxis time = new NumberAxis("time (h)");
+        time.setAutoRangeIncludesZero(false);
+        traceChart = ChartStyle.chart("Clicked cell and its ancestors", new XYPlot(trace, time,
+                new NumberAxis("level"), new XYLineAndShapeRenderer(true, false)), true);
+    }
+
+    /** The clicked cell's trace. */
+    JFreeChart trace() {
+        return traceChart;
+    }
+
+    /** Replots the trace of the clicked cell ({@code null}: none clicked). */
+    void showTrace(CellTraces.Trace t) {
+        trace.removeAllSeries();
+        if (t == null) {
+            return;
+        }
+        for (int s = 0; s < species.size(); s++) {
+            XYSeries line = new XYSeries(species.get(s), true, true);
+            for (int k = 0; k < t.size(); k++) {
+                line.add(t.time(k), t.value(k, s), false);
+            }
+            trace.addSeries(line);
+        }
     }
 
     JFreeChart phase() {

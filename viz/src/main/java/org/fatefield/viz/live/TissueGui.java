@@ -29,8 +29,16 @@ public final class TissueGui extends GUIState {
         /** By the level of the first species, light to dark. */
         FIRST_SPECIES,
         /** By clone (descendants of one founder). */
-        CLONE
+        CLONE,
+        /**
+         * By commitment: the fate's colour, pale when the cell has only just entered it and full
+         * once it has held it for one mean cell cycle; uncommitted cells grey.
+         */
+        COMMITMENT
     }
+
+    /** Samples of history kept per cell for the clicked cell's trace. */
+    static final int TRACE_SAMPLES = 400;
 
     private static final Color[] CLONE_COLOURS = {new Color(0xE69F00), new Color(0x56B4E9), new Color(0x009E73),
         new Color(0xF0E442), new Color(0x0072B2), new Color(0xD55E00), new Color(0xCC79A7), new Color(0x999999)};
@@ -44,6 +52,7 @@ public final class TissueGui extends GUIState {
     private Cell selected;
     private double speciesMax = 1;
     private double fieldMax = 1e-12;
+    private CellTraces traces;
 
     /** A view of {@code tissue} (not yet started). */
     public TissueGui(Tissue tissue) {
@@ -72,6 +81,7 @@ public final class TissueGui extends GUIState {
     public void start() {
         super.start();
         selected = null;
+        traces = new CellTraces(TRACE_SAMPLES, tissue.spec().circuit().network().speciesNames().size());
         MorphogenField f = tissue.field();
         grid = new DoubleGrid2D(f.columns(), f.rows());
         fieldPortrayal.setField(grid);
@@ -117,6 +127,7 @@ public final class TissueGui extends GUIState {
             max = Math.max(max, cell.concentration(0));
         }
         speciesMax = max;
+        traces.record(tissue.time(), tissue.cells());
         MorphogenField f = tissue.field();
         fieldMax = Math.max(f.max(), 1e-12);
         for (int i = 0; i < f.columns(); i++) {
@@ -133,6 +144,9 @@ public final class TissueGui extends GUIState {
             case FATE -> FatePalette.fate(Math.max(0, cell.fate()), fates);
             case FIRST_SPECIES -> shade(cell.concentration(0) / speciesMax);
             case CLONE -> CLONE_COLOURS[(int) (tissue.ancestry().founder(cell.id()) % CLONE_COLOURS.length)];
+            case COMMITMENT -> cell.fate() < 0 ? FatePalette.fate(fates - 1, fates)
+                    : FatePalette.held(cell.fate(), fates,
+                            (tissue.time() - cell.fateSince()) / tissue.spec().growth().cycle().mean());
         };
     }
 
@@ -154,6 +168,11 @@ public final class TissueGui extends GUIState {
     /** Selects a cell (or none). */
     public void select(Cell cell) {
         this.selected = cell;
+    }
+
+    /** Recent history of the selected cell (back through its ancestors), or null. */
+    CellTraces.Trace selectedTrace() {
+        return selected == null ? null : traces.of(selected.id());
     }
 
     /** The live cells. */

@@ -9,6 +9,7 @@ import java.awt.event.MouseEvent;
 import java.awt.geom.Point2D;
 import java.util.List;
 import java.util.Locale;
+import java.util.function.DoubleFunction;
 import java.util.function.Function;
 import javax.swing.BorderFactory;
 import javax.swing.JButton;
@@ -21,9 +22,11 @@ import javax.swing.JSlider;
 import javax.swing.JTextArea;
 import javax.swing.JToggleButton;
 import javax.swing.Timer;
+import org.fatefield.circuits.analysis.QuasiPotential;
 import org.fatefield.circuits.analysis.continuation.Branch;
 import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.tissue.Tissue;
+import org.fatefield.viz.analysis.GridMapChart;
 import org.fatefield.viz.chart.FateProportionChart;
 import org.fatefield.viz.palette.FatePalette;
 import org.jfree.chart.ChartPanel;
@@ -35,23 +38,30 @@ import sim.util.Bag;
  * The live window: the tissue on MASON's 2D display (cells over the morphogen heat map, zoom by
  * the zoom slider, pan by the scroll bars), our own controls (play, pause, step, reset with new
  * settings, speed, colour mode, field on or off), a legend, the clicked cell's state and lineage,
- * and two live charts (fate proportions; cells over the bifurcation branches). MASON's own
+ * and four live charts (fate proportions with population; the circuit's landscape at the clicked
+ * cell's local control parameter; cells over the bifurcation branches; the clicked cell's circuit
+ * trace back through its ancestors). MASON's own
  * header, console and movie button are not shown; frames are recorded by {@code run --frames}.
  */
 public final class TissueWindow extends JFrame {
 
     private static final long serialVersionUID = 1L;
+    /** Landscape values above this (in units of -ln P) share the top colour. */
+    private static final double LANDSCAPE_CEILING = 12;
 
     private final Function<String, Tissue> factory;
     private final javax.swing.JTextField settings = new javax.swing.JTextField(28);
     private final List<Branch> branches;
     private final String parameter;
+    private final DoubleFunction<QuasiPotential> landscape;
+    private final ChartPanel landscapePanel = new ChartPanel(null);
+    private double landscapeAt = Double.NaN;
     private TissueGui gui;
     private Display2D display;
     private final JPanel canvasHolder = new JPanel(new BorderLayout());
     private final JTextArea info = new JTextArea(8, 28);
     private final JLabel status = new JLabel(" ");
-    private final JPanel chartHolder = new JPanel(new GridLayout(2, 1));
+    private final JPanel chartHolder = new JPanel(new GridLayout(2, 2));
     private LiveCharts charts;
     private ChartPanel proportions;
     private final JSlider speed = new JSlider(1, 50, 5);
@@ -66,12 +76,16 @@ public final class TissueWindow extends JFrame {
      *                  ({@code key = value; ...}); throws IllegalArgumentException with a message if they are wrong
      * @param branches  the circuit's steady-state branches along the control parameter
      * @param parameter the control parameter's name
+     * @param landscape the circuit's landscape at a value of the control parameter, or null when
+     *                  it cannot be computed for this circuit
      */
-    public TissueWindow(String title, Function<String, Tissue> factory, List<Branch> branches, String parameter) {
+    public TissueWindow(String title, Function<String, Tissue> factory, List<Branch> branches, String parameter,
+            DoubleFunction<QuasiPotential> landscape) {
         super(title);
         this.factory = factory;
         this.branches = branches;
         this.parameter = parameter;
+        this.landscape = landscape;
         setDefaultCloseOperation(DISPOSE_ON_CLOSE);
         timer = new Timer(30, e -> advance(speed.getValue()));
         JToggleButton play = new JToggleButton("Play");
@@ -119,7 +133,7 @@ public final class TissueWindow extends JFrame {
         JPanel side = new JPanel(new BorderLayout());
         side.add(chartHolder, BorderLayout.CENTER);
         side.add(info, BorderLayout.SOUTH);
-        side.setPreferredSize(new Dimension(520, 700));
+        side.setPreferredSize(new Dimension(760, 700));
         JPanel south = new JPanel(new BorderLayout());
         south.add(status, BorderLayout.WEST);
         south.add(legend(), BorderLayout.EAST);
@@ -180,8 +194,12 @@ public final class TissueWindow extends JFrame {
         proportions = new ChartPanel(FateProportionChart.create(tissue.series(), "Fate proportions"));
         chartHolder.removeAll();
         chartHolder.add(proportions);
+        chartHolder.add(landscapePanel);
         chartHolder.add(new ChartPanel(charts.phase()));
+        chartHolder.add(new ChartPanel(charts.trace()));
         gui.setMode((TissueGui.ColourMode) colour.getSelectedItem());
+        landscapeAt = Double.NaN;
+        showLandscape(middleOfBranches());
         refresh();
         revalidate();
     }
@@ -222,16 +240,57 @@ public final class TissueWindow extends JFrame {
             }
         }
         describeSelection();
+        landscapeForSelection();
         display.repaint();
+    }
+
+    private void landscapeForSelection() {
+        Cell c = gui.selected();
+        if (c != null) {
+            showLandscape(gui.tissue().spec().mapping().controlAt(c.signal()));
+        }
+    }
+
+    private double middleOfBranches() {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (Branch b : branches) {
+            for (var p : b.points()) {
+                lo = Math.min(lo, p.parameter());
+                hi = Math.max(hi, p.parameter());
+            }
+        }
+        return lo <= hi ? 0.5 * (lo + hi) : Double.NaN;
+    }
+
+    /** Draws the landscape at control value {@code value} (unless it is already shown). */
+    private void showLandscape(double value) {
+        if (landscape == null || Double.isNaN(value) || value == landscapeAt) {
+            if (landscape == null) {
+                landscapePanel.setChart(null);
+            }
+            return;
+        }
+        landscapeAt = value;
+        QuasiPotential u = landscape.apply(value);
+        List<String> species = gui.tissue().spec().circuit().network().speciesNames();
+        landscapePanel.setChart(GridMapChart.landscape(u.xs(), u.ys(), u.u(), LANDSCAPE_CEILING, species.get(0),
+                species.size() > 1 ? species.get(1) : "", String.format(Locale.ROOT, "Landscape at %s = %.3f",
+                        parameter, value)));
     }
 
     private void describeSelection() {
         Cell c = gui.selected();
+        charts.showTrace(gui.selectedTrace());
         if (c == null) {
             info.setText("click a cell");
             return;
         }
         Tissue t = gui.tissue();
+        if (gui.selectedTrace() == null) {
+            info.setText(String.format(Locale.ROOT, "cell %d has divided or died; click one of its daughters", c.id()));
+            return;
+        }
         List<String> species = t.spec().circuit().network().speciesNames();
         StringBuilder s = new StringBuilder();
         s.append(String.format(Locale.ROOT, "cell %d, generation %d, mother %d, founder %d%n", c.id(), c.generation(),
@@ -245,6 +304,25 @@ public final class TissueWindow extends JFrame {
                 t.spec().mapping().controlAt(c.signal())));
         s.append("fate: ").append(c.fate() >= 0 ? t.spec().fates().fateNames().get(c.fate()) : "not yet classified");
         info.setText(s.toString());
+    }
+
+    /** Switches the colour mode as if chosen in the "colour by" list. */
+    public void setColourMode(TissueGui.ColourMode mode) {
+        colour.setSelectedItem(mode);
+    }
+
+    /** Selects {@code cell} as if it had been clicked (for scripted screenshots and tests). */
+    public void inspect(Cell cell) {
+        gui.select(cell);
+        describeSelection();
+        landscapeForSelection();
+        display.repaint();
+    }
+
+    /** Number of samples in the selected cell's trace, 0 if none is selected or it has gone. */
+    public int selectedTraceSamples() {
+        CellTraces.Trace t = gui.selectedTrace();
+        return t == null ? 0 : t.size();
     }
 
     /** The current view state (for tests and screenshots). */

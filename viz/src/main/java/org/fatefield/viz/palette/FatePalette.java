@@ -30,6 +30,24 @@ public final class FatePalette {
         return FATES[index % FATES.length];
     }
 
+    /**
+     * Colour of a cell that has held fate {@code index} for {@code heldFraction} of the reference
+     * time (clamped to [0, 1]): pale when it has only just switched, the full fate colour once it
+     * has held on for the whole reference time. The default fate stays grey.
+     */
+    public static Color held(int index, int fateCount, double heldFraction) {
+        Color full = fate(index, fateCount);
+        if (index == fateCount - 1 || !(heldFraction > 0)) {
+            return index == fateCount - 1 ? full : mixColour(Color.WHITE, full, 0.2);
+        }
+        return mixColour(Color.WHITE, full, 0.2 + 0.8 * Math.min(1.0, heldFraction));
+    }
+
+    private static Color mixColour(Color a, Color b, double t) {
+        return new Color(mix(a.getRed(), b.getRed(), t), mix(a.getGreen(), b.getGreen(), t),
+                mix(a.getBlue(), b.getBlue(), t));
+    }
+
     /** Colour of a morphogen level as a fraction of the scale (clamped to [0, 1]). */
     public static Color morphogen(double fraction) {
         double t = Math.max(0.0, Math.min(1.0, fraction));
