@@ -11,6 +11,7 @@ import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.ui.RectangleAnchor;
+import org.jfree.chart.ui.RectangleInsets;
 import org.jfree.chart.ui.TextAnchor;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
@@ -47,19 +48,27 @@ public final class ProfileChart {
         yAxis.setRange(0, 1);
         XYPlot plot = new XYPlot(data, xAxis, yAxis, renderer);
         if (Double.isFinite(simulated)) {
-            plot.addDomainMarker(marker(simulated, "simulated boundary", new BasicStroke(1.8f), ChartStyle.SPECIAL));
+            ValueMarker m = marker(simulated, "simulated boundary", new BasicStroke(1.8f), ChartStyle.SPECIAL, 0);
+            // Left of its line, so it never overlaps the predicted labels, which sit to the right.
+            m.setLabelAnchor(RectangleAnchor.TOP_LEFT);
+            m.setLabelTextAnchor(TextAnchor.TOP_RIGHT);
+            m.setLabel(m.getLabel().trim() + " ");
+            plot.addDomainMarker(m);
         }
+        int row = 0;
         for (double p : predicted) {
             if (Double.isFinite(p)) {
                 plot.addDomainMarker(marker(p, "predicted", new BasicStroke(1.8f, BasicStroke.CAP_BUTT,
-                        BasicStroke.JOIN_MITER, 10f, new float[] {6f, 4f}, 0f), ChartStyle.UNSTABLE));
+                        BasicStroke.JOIN_MITER, 10f, new float[] {6f, 4f}, 0f), ChartStyle.UNSTABLE, row++));
             }
         }
         return ChartStyle.chart("Fate profile along the gradient", plot, true);
     }
 
-    private static ValueMarker marker(double x, String label, BasicStroke stroke, Color colour) {
+    /** A vertical line with its label to the right, {@code row} label heights below the top. */
+    private static ValueMarker marker(double x, String label, BasicStroke stroke, Color colour, int row) {
         ValueMarker marker = new ValueMarker(x, colour, stroke);
+        marker.setLabelOffset(new RectangleInsets(3 + 18 * row, 3, 3, 3));
         marker.setLabel(String.format(Locale.ROOT, " %s %.0f µm", label, x));
         marker.setLabelFont(ChartStyle.SMALL);
         marker.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
