@@ -4,16 +4,9 @@ import java.awt.GraphicsEnvironment;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
 import java.util.concurrent.Callable;
-import java.util.function.DoubleFunction;
 import javax.swing.SwingUtilities;
-import org.fatefield.circuits.analysis.QuasiPotential;
-import org.fatefield.circuits.analysis.StationaryFokkerPlanck;
-import org.fatefield.circuits.analysis.continuation.Branch;
-import org.fatefield.circuits.analysis.continuation.ContinuationSettings;
-import org.fatefield.circuits.analysis.continuation.EquilibriumContinuation;
-import org.fatefield.circuits.analysis.continuation.NetworkSystem;
-import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.engine.tissue.Tissue;
+import org.fatefield.scenarios.analysis.ControlCircuit;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.format.ScenarioReader;
@@ -58,47 +51,13 @@ final class ViewCommand implements Callable<Integer> {
         return 0;
     }
 
-    private static final int LANDSCAPE_BINS = 60;
-
     /** A window for {@code loaded} (not yet visible). */
     static TissueWindow open(Scenario loaded, long runSeed) {
         int threads = Runtime.getRuntime().availableProcessors();
-        List<Branch> branches = branches(loaded);
-        String parameter = loaded.tissue().mapping().couplings().isEmpty() ? "control"
-                : loaded.tissue().mapping().couplings().get(0).label();
+        ControlCircuit circuit = ControlCircuit.of(loaded, 60);
         return new TissueWindow("Fatefield: " + loaded.name(), settings -> new Tissue(variant(loaded, settings).tissue(),
-                runSeed, threads), branches, parameter, landscape(loaded, branches));
-    }
-
-    /**
-     * The circuit's stationary landscape at a value of the control parameter, solved on a grid
-     * (exact relative well depths), for two-species circuits with a coupling; null otherwise.
-     */
-    private static DoubleFunction<QuasiPotential> landscape(Scenario loaded, List<Branch> branches) {
-        var circuit = loaded.tissue().circuit();
-        if (circuit.network().speciesCount() != 2 || loaded.tissue().mapping().couplings().isEmpty()) {
-            return null;
-        }
-        double[] upper = {0, 0};
-        for (Branch b : branches) {
-            for (var p : b.points()) {
-                upper[0] = Math.max(upper[0], 1.3 * p.state()[0]);
-                upper[1] = Math.max(upper[1], 1.3 * p.state()[1]);
-            }
-        }
-        for (int i = 0; i < 2; i++) {
-            upper[i] = Math.max(upper[i], 2 * circuit.initialState()[i] + 1e-3);
-        }
-        int[] indices = loaded.tissue().mapping().couplings().get(0).parameterIndices();
-        double[] base = loaded.tissue().mapping().base();
-        return value -> {
-            double[] params = base.clone();
-            for (int index : indices) {
-                params[index] = value;
-            }
-            return StationaryFokkerPlanck.solve(circuit.network(), params, circuit.systemSize(), 0, 1,
-                    new double[2], upper, LANDSCAPE_BINS);
-        };
+                runSeed, threads), circuit == null ? List.of() : circuit.branches(),
+                circuit == null ? "control" : circuit.parameter(), circuit == null ? null : circuit.landscape());
     }
 
     private static Scenario variant(Scenario base, String settings) {
@@ -125,21 +84,5 @@ final class ViewCommand implements Callable<Integer> {
         } catch (ScenarioException e) {
             throw new IllegalArgumentException(e.problems().get(0).keyPath() + ": " + e.problems().get(0).message(), e);
         }
-    }
-
-    private static List<Branch> branches(Scenario loaded) {
-        if (loaded.tissue().mapping().couplings().isEmpty()) {
-            return List.of();
-        }
-        SignalCoupling c = loaded.tissue().mapping().couplings().get(0);
-        double lo = c.table() != null ? c.table().minimum() : Math.min(c.base(), c.base() + c.gain());
-        double hi = c.table() != null ? c.table().maximum() : Math.max(c.base(), c.base() + c.gain());
-        if (!(hi > lo)) {
-            return List.of();
-        }
-        NetworkSystem system = new NetworkSystem(loaded.tissue().circuit().network(), loaded.tissue().mapping().base(),
-                c.parameterIndices());
-        return EquilibriumContinuation.of(system, ContinuationSettings.defaults().withMaxStep((hi - lo) / 60))
-                .diagram(loaded.tissue().circuit().initialState(), lo, lo, hi, true, 2);
     }
 }

@@ -10,21 +10,20 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
-import java.util.Base64;
 import java.util.List;
+import java.util.Locale;
+import java.util.function.DoubleFunction;
 import java.util.Map;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
-import org.fatefield.circuits.analysis.continuation.Branch;
-import org.fatefield.circuits.analysis.continuation.ContinuationSettings;
-import org.fatefield.circuits.analysis.continuation.EquilibriumContinuation;
-import org.fatefield.circuits.analysis.continuation.NetworkSystem;
-import org.fatefield.engine.coupling.SignalCoupling;
+import org.fatefield.circuits.analysis.QuasiPotential;
+import org.fatefield.scenarios.analysis.ControlCircuit;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.format.ScenarioReader;
 import org.fatefield.viz.analysis.BifurcationDiagramChart;
+import org.fatefield.viz.analysis.GridMapChart;
 import org.fatefield.viz.chart.ChartFiles;
 import org.fatefield.viz.chart.ProfileChart;
 import org.jfree.chart.JFreeChart;
@@ -33,9 +32,12 @@ import org.jfree.chart.JFreeChart;
  * A self-contained HTML page about a finished run (images embedded as data URIs, no network):
  * the scenario and its parameters, the figures (fate proportions, tissue, animation, fate profile
  * with simulated and predicted boundaries, the circuit's bifurcation diagram along its control
- * parameter), metric tables and provenance.
+ * parameter and its landscape), metric tables and provenance.
  */
 public final class RunReport {
+
+    /** Landscape values above this (in units of -ln P) share the top colour. */
+    private static final double LANDSCAPE_CEILING = 12;
 
     private RunReport() {
     }
@@ -45,7 +47,7 @@ public final class RunReport {
         JsonObject provenance = json(run.resolve("run.json"));
         JsonObject metrics = json(run.resolve("metrics.json"));
         String scenarioText = Files.readString(run.resolve("scenario.toml"), StandardCharsets.UTF_8);
-        Html page = new Html("Fatefield report: " + provenance.getAsJsonObject("scenario").get("name").getAsString());
+        HtmlPage page = new HtmlPage("Fatefield report: " + provenance.getAsJsonObject("scenario").get("name").getAsString());
         page.paragraph("Research software output: for exploring models, not for clinical or diagnostic decisions.");
         page.heading("Figures");
         page.image("Fate proportions over time", Files.readAllBytes(run.resolve("fate-proportions.png")), "png");
@@ -55,10 +57,7 @@ public final class RunReport {
         }
         List<String> fates = new ArrayList<>(metrics.getAsJsonObject("boundaries").keySet());
         page.image("Fate profile along the gradient", profile(run, fates, metrics), "png");
-        byte[] bifurcation = bifurcation(scenarioText, run);
-        if (bifurcation != null) {
-            page.image("Single-cell bifurcation diagram along the control parameter", bifurcation, "png");
-        }
+        circuitFigures(page, scenarioText, run);
         page.heading("Pattern");
         List<List<String>> rows = new ArrayList<>();
         for (String fate : fates) {
@@ -124,30 +123,34 @@ public final class RunReport {
         }
     }
 
-    /** The circuit's bifurcation diagram along its first coupling, or null if there is none. */
-    private static byte[] bifurcation(String scenarioText, Path run) throws IOException {
+    /**
+     * The circuit's bifurcation diagram along its control parameter and its landscape where the
+     * most stable states coexist; nothing if the scenario has no coupling.
+     */
+    private static void circuitFigures(HtmlPage page, String scenarioText, Path run) throws IOException {
         Scenario scenario;
         try {
             scenario = ScenarioReader.parse("scenario.toml", "run", scenarioText.getBytes(StandardCharsets.UTF_8),
                     run.toAbsolutePath());
         } catch (ScenarioException e) {
-            return null;
+            return;
         }
-        if (scenario.tissue().mapping().couplings().isEmpty()) {
-            return null;
+        ControlCircuit circuit = ControlCircuit.of(scenario, 40);
+        if (circuit == null) {
+            return;
         }
-        SignalCoupling c = scenario.tissue().mapping().couplings().get(0);
-        double lo = c.table() != null ? c.table().minimum() : Math.min(c.base(), c.base() + c.gain());
-        double hi = c.table() != null ? c.table().maximum() : Math.max(c.base(), c.base() + c.gain());
-        if (!(hi > lo)) {
-            return null;
+        List<String> species = scenario.tissue().circuit().network().speciesNames();
+        page.image("Single-cell bifurcation diagram along the control parameter",
+                png(BifurcationDiagramChart.create(circuit.branches(), 0, circuit.parameter(), species.get(0))), "png");
+        DoubleFunction<QuasiPotential> landscape = circuit.landscape();
+        if (landscape != null) {
+            double at = circuit.mostMultistable();
+            QuasiPotential u = landscape.apply(at);
+            String title = String.format(Locale.ROOT, "Landscape at %s = %.3f", circuit.parameter(), at);
+            page.image(title + " (U = -ln P of the stationary distribution, one cell, no morphogen change)",
+                    png(GridMapChart.landscape(u.xs(), u.ys(), u.u(), LANDSCAPE_CEILING, species.get(0),
+                            species.get(1), title)), "png");
         }
-        NetworkSystem system = new NetworkSystem(scenario.tissue().circuit().network(), scenario.tissue().mapping().base(),
-                c.parameterIndices());
-        List<Branch> branches = EquilibriumContinuation.of(system, ContinuationSettings.defaults().withMaxStep((hi - lo) / 40))
-                .diagram(scenario.tissue().circuit().initialState(), lo, lo, hi, true, 2);
-        return png(BifurcationDiagramChart.create(branches, 0, c.label(),
-                scenario.tissue().circuit().network().speciesNames().get(0)));
     }
 
     private static byte[] png(JFreeChart chart) throws IOException {
@@ -165,62 +168,5 @@ public final class RunReport {
 
     private static String text(JsonElement e) {
         return e == null || e.isJsonNull() ? "–" : e.isJsonPrimitive() ? e.getAsString() : e.toString();
-    }
-
-    /** Minimal HTML builder with escaping. */
-    private static final class Html {
-        private final StringBuilder body = new StringBuilder();
-        private final String title;
-
-        Html(String title) {
-            this.title = title;
-        }
-
-        void heading(String text) {
-            body.append("<h2>").append(escape(text)).append("</h2>\n");
-        }
-
-        void paragraph(String text) {
-            body.append("<p>").append(escape(text)).append("</p>\n");
-        }
-
-        void preformatted(String text) {
-            body.append("<pre>").append(escape(text)).append("</pre>\n");
-        }
-
-        void image(String caption, byte[] bytes, String type) {
-            body.append("<figure><img alt=\"").append(escape(caption)).append("\" src=\"data:image/").append(type)
-                    .append(";base64,").append(Base64.getEncoder().encodeToString(bytes)).append("\"><figcaption>")
-                    .append(escape(caption)).append("</figcaption></figure>\n");
-        }
-
-        void table(List<String> header, List<List<String>> rows) {
-            body.append("<table><tr>");
-            header.forEach(h -> body.append("<th>").append(escape(h)).append("</th>"));
-            body.append("</tr>\n");
-            for (List<String> row : rows) {
-                body.append("<tr>");
-                row.forEach(v -> body.append("<td>").append(escape(v)).append("</td>"));
-                body.append("</tr>\n");
-            }
-            body.append("</table>\n");
-        }
-
-        String finish() {
-            return "<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\"><title>" + escape(title)
-                    + "</title>\n<style>body{font-family:sans-serif;max-width:980px;margin:2em auto;color:#222}"
-                    + "img{max-width:100%}figure{margin:1.5em 0}figcaption{color:#555;font-size:90%}"
-                    + "table{border-collapse:collapse;margin:1em 0}td,th{border:1px solid #ccc;padding:4px 10px;"
-                    + "text-align:left}pre{background:#f6f6f2;padding:1em;overflow-x:auto}</style></head>\n<body><h1>"
-                    + escape(title) + "</h1>\n" + body
-                    + "<script>window.addEventListener('load',function(){var i=document.images,n=0;"
-                    + "for(var k=0;k<i.length;k++){if(i[k].complete&&i[k].naturalWidth>0){n++;}}"
-                    + "document.body.setAttribute('data-images-loaded',n+'/'+i.length);});</script>\n"
-                    + "</body></html>\n";
-        }
-
-        private static String escape(String s) {
-            return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;").replace("\"", "&quot;");
-        }
     }
 }

@@ -45,7 +45,7 @@ class ReportCommandTest {
             assertTrue(ImageIO.read(new ByteArrayInputStream(bytes)) != null, "image " + count + " decodes");
             count++;
         }
-        assertEquals(5, count, "proportions, tissue, animation, profile, bifurcation");
+        assertEquals(6, count, "proportions, tissue, animation, profile, bifurcation, landscape");
         assertTrue(!html.contains("http://") && !html.contains("https://"), "the page needs no network");
     }
 }

@@ -68,7 +68,7 @@ class ReportInBrowserTest {
         assertEquals(List.of(), console, "no console messages while the report loads");
         Matcher loaded = Pattern.compile("data-images-loaded=\"(\\d+)/(\\d+)\"").matcher(dom);
         assertTrue(loaded.find(), "the page's load script ran; browser log in " + tmp.resolve("browser.log"));
-        assertEquals("5", loaded.group(2), "proportions, tissue, animation, profile, bifurcation");
+        assertEquals("6", loaded.group(2), "proportions, tissue, animation, profile, bifurcation, landscape");
         assertEquals(loaded.group(2), loaded.group(1), "every embedded image decoded in the browser");
 
         // A screenshot of the page as the browser draws it, kept as a test artifact.

@@ -1,0 +1,152 @@
+package org.fatefield.scenarios.analysis;
+
+import java.util.List;
+import java.util.function.DoubleFunction;
+import org.fatefield.circuits.analysis.QuasiPotential;
+import org.fatefield.circuits.analysis.StationaryFokkerPlanck;
+import org.fatefield.circuits.analysis.continuation.Branch;
+import org.fatefield.circuits.analysis.continuation.BranchPoint;
+import org.fatefield.circuits.analysis.continuation.ContinuationSettings;
+import org.fatefield.circuits.analysis.continuation.EquilibriumContinuation;
+import org.fatefield.circuits.analysis.continuation.NetworkSystem;
+import org.fatefield.engine.coupling.SignalCoupling;
+import org.fatefield.engine.tissue.CircuitSetup;
+import org.fatefield.scenarios.format.Scenario;
+
+/**
+ * A scenario's circuit along the control parameter its morphogen sets (its first coupling), as
+ * the live view and the report show it: the steady-state branches over the range the coupling
+ * can reach, the value where most stable states coexist, and the stationary landscape at any
+ * value. Scenarios without a coupling have none of these.
+ */
+public final class ControlCircuit {
+
+    private static final int LANDSCAPE_BINS = 60;
+
+    private final Scenario scenario;
+    private final SignalCoupling coupling;
+    private final double lo;
+    private final double hi;
+    private final List<Branch> branches;
+
+    private ControlCircuit(Scenario scenario, SignalCoupling coupling, double lo, double hi, List<Branch> branches) {
+        this.scenario = scenario;
+        this.coupling = coupling;
+        this.lo = lo;
+        this.hi = hi;
+        this.branches = branches;
+    }
+
+    /**
+     * The circuit of {@code scenario} along its control parameter, continued with at most
+     * {@code (max - min) / stepsAcross} per step; null when the scenario has no coupling or the
+     * coupling's range is a single value.
+     */
+    public static ControlCircuit of(Scenario scenario, int stepsAcross) {
+        if (scenario.tissue().mapping().couplings().isEmpty()) {
+            return null;
+        }
+        SignalCoupling c = scenario.tissue().mapping().couplings().get(0);
+        double lo = c.table() != null ? c.table().minimum() : Math.min(c.base(), c.base() + c.gain());
+        double hi = c.table() != null ? c.table().maximum() : Math.max(c.base(), c.base() + c.gain());
+        if (!(hi > lo)) {
+            return null;
+        }
+        NetworkSystem system = new NetworkSystem(scenario.tissue().circuit().network(),
+                scenario.tissue().mapping().base(), c.parameterIndices());
+        List<Branch> branches = EquilibriumContinuation.of(system,
+                ContinuationSettings.defaults().withMaxStep((hi - lo) / stepsAcross))
+                .diagram(scenario.tissue().circuit().initialState(), lo, lo, hi, true, 2);
+        return new ControlCircuit(scenario, c, lo, hi, branches);
+    }
+
+    /** The steady-state branches. */
+    public List<Branch> branches() {
+        return branches;
+    }
+
+    /** The control parameter's name. */
+    public String parameter() {
+        return coupling.label();
+    }
+
+    /**
+     * The middle of the longest stretch of the range (scanned at 81 values) where the most stable
+     * steady states coexist: the place to look at a multistable landscape.
+     */
+    public double mostMultistable() {
+        int values = 81;
+        int best = -1;
+        int bestStart = 0;
+        int bestLength = 0;
+        int runStart = 0;
+        int previous = -1;
+        for (int k = 0; k <= values; k++) {
+            int count = k < values ? stableCount(lo + (hi - lo) * k / (values - 1)) : -1;
+            if (count != previous) {
+                int length = k - runStart;
+                if (previous > best || previous == best && length > bestLength) {
+                    best = previous;
+                    bestStart = runStart;
+                    bestLength = length;
+                }
+                runStart = k;
+                previous = count;
+            }
+        }
+        double middle = bestStart + (bestLength - 1) / 2.0;
+        return lo + (hi - lo) * middle / (values - 1);
+    }
+
+    private int stableCount(double value) {
+        int count = 0;
+        for (Branch b : branches) {
+            List<BranchPoint> pts = b.points();
+            for (int i = 0; i + 1 < pts.size(); i++) {
+                BranchPoint a = pts.get(i);
+                BranchPoint z = pts.get(i + 1);
+                boolean spans = Math.min(a.parameter(), z.parameter()) <= value
+                        && value < Math.max(a.parameter(), z.parameter());
+                if (spans && a.stable() && z.stable()) {
+                    count++;
+                }
+            }
+        }
+        return count;
+    }
+
+    /**
+     * The stationary landscape at control value {@code value}, solved on a grid (exact relative
+     * well depths) over a square box holding every branch; null unless the circuit has two species.
+     */
+    public DoubleFunction<QuasiPotential> landscape() {
+        CircuitSetup circuit = scenario.tissue().circuit();
+        if (circuit.network().speciesCount() != 2) {
+            return null;
+        }
+        double[] upper = {0, 0};
+        for (Branch b : branches) {
+            for (BranchPoint p : b.points()) {
+                upper[0] = Math.max(upper[0], 1.3 * p.state()[0]);
+                upper[1] = Math.max(upper[1], 1.3 * p.state()[1]);
+            }
+        }
+        for (int i = 0; i < 2; i++) {
+            upper[i] = Math.max(upper[i], 2 * circuit.initialState()[i] + 1e-3);
+        }
+        // A square box: both species on the same scale, and a mirror-symmetric circuit gets a
+        // mirror-symmetric grid.
+        upper[0] = Math.max(upper[0], upper[1]);
+        upper[1] = upper[0];
+        int[] indices = coupling.parameterIndices();
+        double[] base = scenario.tissue().mapping().base();
+        return value -> {
+            double[] params = base.clone();
+            for (int index : indices) {
+                params[index] = value;
+            }
+            return StationaryFokkerPlanck.solve(circuit.network(), params, circuit.systemSize(), 0, 1,
+                    new double[2], upper, LANDSCAPE_BINS);
+        };
+    }
+}
