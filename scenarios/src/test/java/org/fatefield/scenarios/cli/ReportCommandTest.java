@@ -10,10 +10,12 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Base64;
+import java.util.Locale;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import javax.imageio.ImageIO;
 import org.fatefield.scenarios.builtin.BuiltinScenarios;
+import org.hipparchus.stat.descriptive.DescriptiveStatistics;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -47,5 +49,38 @@ class ReportCommandTest {
         }
         assertEquals(6, count, "proportions, tissue, animation, profile, bifurcation, landscape");
         assertTrue(!html.contains("http://") && !html.contains("https://"), "the page needs no network");
+    }
+
+    @Test
+    void replicateSetReportGivesThePositionalErrorAndEachTissuesReport() throws Exception {
+        Path scenario = tmp.resolve("short.toml");
+        Files.writeString(scenario, new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8)
+                .replace("duration = 48.0", "duration = 10.0"));
+        Path set = tmp.resolve("set");
+        PrintWriter quiet = new PrintWriter(new StringWriter());
+        assertEquals(0, FatefieldCommand.execute(quiet, quiet, "replicates", scenario.toString(), "--runs", "3",
+                "--out", set.toString()));
+        assertEquals(0, FatefieldCommand.execute(quiet, quiet, "report", set.toString()));
+        String html = Files.readString(set.resolve("report.html"));
+        assertTrue(html.contains("not for clinical") && html.contains("Positional error"));
+        Matcher images = Pattern.compile("src=\"data:image/png;base64,").matcher(html);
+        int count = 0;
+        while (images.find()) {
+            count++;
+        }
+        assertEquals(3, count, "one replicate profile per fate");
+        for (int seed = 1; seed <= 3; seed++) {
+            assertTrue(html.contains("href=\"seed-" + seed + "/report.html\""));
+            assertTrue(Files.exists(set.resolve("seed-" + seed).resolve("report.html")));
+        }
+        // The positional error shown is the sample SD of the progenitor boundary across the
+        // tissues, recomputed here from replicates.csv with Hipparchus as the reference.
+        DescriptiveStatistics sd = new DescriptiveStatistics();
+        for (String line : Files.readAllLines(set.resolve("replicates.csv")).subList(1, 4)) {
+            sd.addValue(Double.parseDouble(line.split(",")[5]));
+        }
+        String expected = String.format(Locale.ROOT, "<td>progenitor</td><td>3</td><td>%.1f</td><td>%.1f</td>",
+                sd.getMean(), sd.getStandardDeviation());
+        assertTrue(html.contains(expected), "table row " + expected);
     }
 }

@@ -1,0 +1,135 @@
+package org.fatefield.scenarios.report;
+
+import com.google.gson.JsonElement;
+import com.google.gson.JsonObject;
+import com.google.gson.JsonParser;
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.Reader;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVRecord;
+import org.fatefield.scenarios.output.RunFolder;
+import org.fatefield.viz.chart.ChartFiles;
+import org.fatefield.viz.chart.ReplicateProfileChart;
+
+/**
+ * The report of a replicate set (the folder {@code fatefield replicates} writes): for each fate,
+ * its profile in every replicate tissue with the boundary's positional error; the positional
+ * error table; one row per replicate linking to that tissue's own report (written beside it);
+ * the scenario and provenance. Offline, images embedded.
+ */
+public final class ReplicateReport {
+
+    private ReplicateReport() {
+    }
+
+    /** True if {@code folder} holds a replicate set. */
+    public static boolean isReplicateSet(Path folder) {
+        return Files.exists(folder.resolve("replicates.json")) && Files.exists(folder.resolve("replicates.csv"));
+    }
+
+    /** The report of the replicate set {@code set}; also writes each replicate's own report. */
+    public static String html(Path set) throws IOException {
+        JsonObject summary = JsonParser.parseString(Files.readString(set.resolve("replicates.json"),
+                StandardCharsets.UTF_8)).getAsJsonObject();
+        List<CSVRecord> rows = csv(set.resolve("replicates.csv"));
+        if (rows.isEmpty()) {
+            throw new IOException(set.resolve("replicates.csv") + " lists no runs: has the replicate set started?");
+        }
+        List<Path> runs = new ArrayList<>();
+        for (CSVRecord row : rows) {
+            Path run = set.resolve("seed-" + row.get("seed"));
+            String html = RunReport.html(run);
+            RunFolder.open(run).writeText("report.html", w -> w.write(html));
+            runs.add(run);
+        }
+        JsonObject first = JsonParser.parseString(Files.readString(runs.get(0).resolve("run.json"),
+                StandardCharsets.UTF_8)).getAsJsonObject();
+        JsonObject metrics = JsonParser.parseString(Files.readString(runs.get(0).resolve("metrics.json"),
+                StandardCharsets.UTF_8)).getAsJsonObject();
+        List<String> fates = new ArrayList<>(metrics.getAsJsonObject("boundaries").keySet());
+        HtmlPage page = new HtmlPage("Fatefield replicate report: "
+                + first.getAsJsonObject("scenario").get("name").getAsString() + " (" + rows.size() + " tissues)");
+        page.paragraph("Research software output: for exploring models, not for clinical or diagnostic decisions.");
+        page.paragraph("Each tissue ran the same scenario on its own seed; the spread of a boundary across tissues"
+                + " is its positional error.");
+        page.heading("Figures");
+        double predicted = Double.NaN;
+        for (JsonElement e : metrics.getAsJsonArray("predicted_boundaries")) {
+            JsonElement p = e.getAsJsonObject().get("position_um");
+            if (p != null && !p.isJsonNull()) {
+                predicted = p.getAsDouble();
+                break;
+            }
+        }
+        for (String fate : fates) {
+            double[] x = null;
+            double[][] fractions = new double[runs.size()][];
+            double[] boundaries = new double[runs.size()];
+            for (int r = 0; r < runs.size(); r++) {
+                List<CSVRecord> profile = csv(runs.get(r).resolve("profile.csv"));
+                x = new double[profile.size()];
+                fractions[r] = new double[profile.size()];
+                for (int b = 0; b < profile.size(); b++) {
+                    x[b] = Double.parseDouble(profile.get(b).get("x_um"));
+                    fractions[r][b] = Double.parseDouble(profile.get(b).get("fraction_" + fate));
+                }
+                String value = rows.get(r).get("boundary_" + fate + "_um");
+                boundaries[r] = value.isEmpty() ? Double.NaN : Double.parseDouble(value);
+            }
+            ByteArrayOutputStream png = new ByteArrayOutputStream();
+            ChartFiles.png(ReplicateProfileChart.create(fate, x, fractions, boundaries, predicted), 900, 520, png);
+            page.image(fate + " along the gradient in every tissue, with the boundary's mean ± SD",
+                    png.toByteArray(), "png");
+        }
+        page.heading("Positional error");
+        List<List<String>> error = new ArrayList<>();
+        for (String fate : fates) {
+            JsonObject f = summary.getAsJsonObject(fate);
+            error.add(List.of(fate, f.get("runs_with_boundary").getAsString(), number(f.get("mean_boundary_um")),
+                    number(f.get("positional_error_sd_um"))));
+        }
+        page.table(List.of("fate", "tissues with a boundary", "mean boundary (µm)", "SD across tissues (µm)"), error);
+        page.heading("Tissues");
+        List<String> header = new ArrayList<>(rows.get(0).getParser().getHeaderNames());
+        List<List<String>> table = new ArrayList<>();
+        for (CSVRecord row : rows) {
+            List<String> cells = new ArrayList<>();
+            for (String h : header) {
+                cells.add(row.get(h));
+            }
+            table.add(cells);
+        }
+        page.table(header, table);
+        for (Path run : runs) {
+            page.link("report of " + run.getFileName(), run.getFileName() + "/report.html");
+        }
+        page.heading("Scenario");
+        page.preformatted(Files.readString(runs.get(0).resolve("scenario.toml"), StandardCharsets.UTF_8));
+        page.heading("Provenance");
+        JsonObject scenario = first.getAsJsonObject("scenario");
+        page.table(List.of("", ""), List.of(List.of("tissues", String.valueOf(rows.size())),
+                List.of("first seed", summary.get("first_seed").getAsString()),
+                List.of("tool version", first.get("tool_version").getAsString()),
+                List.of("java", first.get("java_version").getAsString()),
+                List.of("scenario SHA-256", scenario.get("sha256").getAsString())));
+        return page.finish();
+    }
+
+    private static String number(JsonElement e) {
+        return e == null || e.isJsonNull() ? "–" : String.format(java.util.Locale.ROOT, "%.1f", e.getAsDouble());
+    }
+
+    private static List<CSVRecord> csv(Path file) throws IOException {
+        try (Reader in = Files.newBufferedReader(file);
+                CSVParser parser = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get().parse(in)) {
+            return parser.getRecords();
+        }
+    }
+}
