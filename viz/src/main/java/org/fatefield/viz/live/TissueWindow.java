@@ -302,7 +302,15 @@ public final class TissueWindow extends JFrame {
         }
         s.append(String.format(Locale.ROOT, "morphogen %.3f, %s = %.3f%n", c.signal(), parameter,
                 t.spec().mapping().controlAt(c.signal())));
+        var extrinsic = t.spec().extrinsic();
+        for (int k = 0; k < extrinsic.size(); k++) {
+            s.append(String.format(Locale.ROOT, "own %s: × %.3f (inherited)%n", extrinsic.get(k).label(),
+                    extrinsic.get(k).factor(c.scores()[k])));
+        }
         s.append("fate: ").append(c.fate() >= 0 ? t.spec().fates().fateNames().get(c.fate()) : "not yet classified");
+        if (c.fate() >= 0 && Double.isFinite(c.fateSince())) {
+            s.append(String.format(Locale.ROOT, " since t = %.2f h", c.fateSince()));
+        }
         info.setText(s.toString());
     }
 
