@@ -6,7 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.ByteArrayInputStream;
 import java.io.PrintWriter;
 import java.io.StringWriter;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Base64;
@@ -14,7 +13,6 @@ import java.util.Locale;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import javax.imageio.ImageIO;
-import org.fatefield.scenarios.builtin.BuiltinScenarios;
 import org.hipparchus.stat.descriptive.DescriptiveStatistics;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -26,9 +24,7 @@ class ReportCommandTest {
 
     @Test
     void reportEmbedsEveryFigureAndTheTables() throws Exception {
-        Path scenario = tmp.resolve("short.toml");
-        Files.writeString(scenario, new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8)
-                .replace("duration = 48.0", "duration = 12.0"));
+        Path scenario = ShortDemo.write(tmp, "12.0");
         Path run = tmp.resolve("run");
         PrintWriter quiet = new PrintWriter(new StringWriter());
         assertEquals(0, FatefieldCommand.execute(quiet, quiet, "run", scenario.toString(), "--out", run.toString(),
@@ -53,9 +49,7 @@ class ReportCommandTest {
 
     @Test
     void replicateSetReportGivesThePositionalErrorAndEachTissuesReport() throws Exception {
-        Path scenario = tmp.resolve("short.toml");
-        Files.writeString(scenario, new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8)
-                .replace("duration = 48.0", "duration = 10.0"));
+        Path scenario = ShortDemo.write(tmp, "10.0");
         Path set = tmp.resolve("set");
         PrintWriter quiet = new PrintWriter(new StringWriter());
         assertEquals(0, FatefieldCommand.execute(quiet, quiet, "replicates", scenario.toString(), "--runs", "3",

@@ -18,7 +18,6 @@ import java.util.concurrent.TimeUnit;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import javax.imageio.ImageIO;
-import org.fatefield.scenarios.builtin.BuiltinScenarios;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -44,9 +43,7 @@ class ReportInBrowserTest {
         }
         assumeTrue(browser != null, "no chromium on PATH; report browser test skipped");
 
-        Path scenario = tmp.resolve("short.toml");
-        Files.writeString(scenario, new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8)
-                .replace("duration = 48.0", "duration = 8.0"));
+        Path scenario = ShortDemo.write(tmp, "8.0");
         Path run = tmp.resolve("run");
         PrintWriter quiet = new PrintWriter(new StringWriter());
         assertEquals(0, FatefieldCommand.execute(quiet, quiet, "run", scenario.toString(), "--out", run.toString(),
