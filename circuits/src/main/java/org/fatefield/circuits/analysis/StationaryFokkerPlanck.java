@@ -14,9 +14,12 @@ import org.fatefield.circuits.model.ReactionNetwork;
  * {@code (D / h^2) B(-+f h / D)} with the Bernoulli function {@code B(z) = z / (e^z - 1)}
  * (Scharfetter &amp; Gummel 1969, IEEE Trans. Electron Devices 16:64): every probability stays
  * positive and the ratio of opposite rates is exactly {@code exp(f h / D)}, so the stationary
- * density follows {@code exp(int f / D)} without the artificial diffusion of plain upwinding. Its stationary master equation is
- * solved directly by banded Gaussian elimination (the transposed generator is column diagonally
- * dominant, so no pivoting is needed), with one equation replaced by a normalisation. Walls are
+ * density follows {@code exp(int f / D)} without the artificial diffusion of plain upwinding. Its
+ * stationary master equation is solved directly, within the generator's band, by the
+ * subtraction-free state reduction of Grassmann, Taksar &amp; Heyman (1985, Operations Research
+ * 33:1107-1116), which keeps full relative accuracy however small the probabilities across a
+ * barrier (plain Gaussian elimination lost it: mirror-image wells drifted apart as the grid was
+ * refined). Walls are
  * reflecting. Cross-diffusion between the two axes is ignored, which is exact when no reaction
  * changes both species (as in the built-in switch).
  */
@@ -44,7 +47,7 @@ public final class StationaryFokkerPlanck {
         double hy = dims == 2 ? (upper[1] - lower[1]) / ny : 1;
         int size = nx * ny;
         int band = nx;
-        // Banded storage of M = Q^T: entry (r, c) at matrix[r][c - r + band].
+        // Banded storage of the jump rates Q: rate from r to c at matrix[r][c - r + band].
         double[][] matrix = new double[size][2 * band + 1];
         double[] x = new double[network.speciesCount()];
         double[] a = new double[network.reactionCount()];
@@ -75,22 +78,15 @@ public final class StationaryFokkerPlanck {
                     double up = diffusion > 0 ? diffusion / (hd * hd) * bernoulli(-peclet) : Math.max(0, f[s]) / hd;
                     double down = diffusion > 0 ? diffusion / (hd * hd) * bernoulli(peclet) : Math.max(0, -f[s]) / hd;
                     if (hasUp) {
-                        add(matrix, cell + step, cell, up, band);
-                        add(matrix, cell, cell, -up, band);
+                        add(matrix, cell, cell + step, up, band);
                     }
                     if (hasDown) {
-                        add(matrix, cell - step, cell, down, band);
-                        add(matrix, cell, cell, -down, band);
+                        add(matrix, cell, cell - step, down, band);
                     }
                 }
             }
         }
-        int anchor = anchorCell(matrix, size, band);
-        double[] rhs = new double[size];
-        java.util.Arrays.fill(matrix[anchor], 0);
-        matrix[anchor][band] = 1;
-        rhs[anchor] = 1;
-        double[] p = solveBanded(matrix, rhs, band);
+        double[] p = stateReduction(matrix, band);
         long[][] counts = new long[ny][nx];
         double[][] u = new double[ny][nx];
         double max = 0;
@@ -124,47 +120,51 @@ public final class StationaryFokkerPlanck {
     }
 
     /**
-     * The cell whose normalisation replaces its balance equation: the one with the smallest total
-     * escape rate, which sits where the drift vanishes, in a well, so its probability is not tiny.
+     * Stationary distribution (unnormalised) of the chain with banded jump rates {@code q}
+     * (modified in place) by GTH state reduction: states are censored out from the last down,
+     * each step using only additions, multiplications and divisions of positive numbers. Fill-in
+     * stays inside the band. The back pass rescales whenever values grow large, so states far
+     * less likely than the most likely one underflow to zero instead of overflowing the rest.
      */
-    private static int anchorCell(double[][] matrix, int size, int band) {
-        int best = 0;
-        double slowest = Double.POSITIVE_INFINITY;
-        for (int r = 0; r < size; r++) {
-            double out = -matrix[r][band];
-            if (out < slowest) {
-                slowest = out;
-                best = r;
+    private static double[] stateReduction(double[][] q, int band) {
+        int n = q.length;
+        for (int k = n - 1; k > 0; k--) {
+            int lo = Math.max(0, k - band);
+            double out = 0;
+            for (int j = lo; j < k; j++) {
+                out += q[k][j - k + band];
             }
-        }
-        return best;
-    }
-
-    /** Gaussian elimination without pivoting on a banded matrix (modified in place). */
-    private static double[] solveBanded(double[][] matrix, double[] rhs, int band) {
-        int n = rhs.length;
-        for (int k = 0; k < n; k++) {
-            double pivot = matrix[k][band];
-            int last = Math.min(n - 1, k + band);
-            for (int r = k + 1; r <= last; r++) {
-                double factor = matrix[r][k - r + band] / pivot;
-                if (factor == 0) {
+            if (!(out > 0)) {
+                throw new IllegalStateException("grid cell " + k + " cannot reach the cells before it: the chain on"
+                        + " the grid is not irreducible (is the diffusion zero somewhere?)");
+            }
+            for (int i = lo; i < k; i++) {
+                double toK = q[i][k - i + band] / out;
+                if (toK == 0) {
                     continue;
                 }
-                for (int c = k; c <= Math.min(n - 1, k + band); c++) {
-                    matrix[r][c - r + band] -= factor * matrix[k][c - k + band];
+                for (int j = lo; j < k; j++) {
+                    if (j != i) {
+                        q[i][j - i + band] += toK * q[k][j - k + band];
+                    }
                 }
-                rhs[r] -= factor * rhs[k];
+                q[i][k - i + band] = toK;
             }
         }
-        double[] out = new double[n];
-        for (int k = n - 1; k >= 0; k--) {
-            double s = rhs[k];
-            for (int c = k + 1; c <= Math.min(n - 1, k + band); c++) {
-                s -= matrix[k][c - k + band] * out[c];
+        double[] x = new double[n];
+        x[0] = 1;
+        for (int k = 1; k < n; k++) {
+            double sum = 0;
+            for (int i = Math.max(0, k - band); i < k; i++) {
+                sum += x[i] * q[i][k - i + band];
             }
-            out[k] = s / matrix[k][band];
+            x[k] = sum;
+            if (sum > 1e200) {
+                for (int i = 0; i <= k; i++) {
+                    x[i] /= sum;
+                }
+            }
         }
-        return out;
+        return x;
     }
 }
