@@ -2,17 +2,13 @@ package org.fatefield.scenarios.report;
 
 import com.google.gson.JsonElement;
 import com.google.gson.JsonObject;
-import com.google.gson.JsonParser;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.io.Reader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.viz.chart.ChartFiles;
@@ -36,23 +32,25 @@ public final class ReplicateReport {
 
     /** The report of the replicate set {@code set}; also writes each replicate's own report. */
     public static String html(Path set) throws IOException {
-        JsonObject summary = JsonParser.parseString(Files.readString(set.resolve("replicates.json"),
-                StandardCharsets.UTF_8)).getAsJsonObject();
-        List<CSVRecord> rows = csv(set.resolve("replicates.csv"));
+        JsonObject summary = RunFiles.json(set.resolve("replicates.json"));
+        List<CSVRecord> rows = RunFiles.csv(set.resolve("replicates.csv"));
         if (rows.isEmpty()) {
             throw new IOException(set.resolve("replicates.csv") + " lists no runs: has the replicate set started?");
         }
         List<Path> runs = new ArrayList<>();
+        List<RunReport.Figure> circuit = null;
         for (CSVRecord row : rows) {
             Path run = set.resolve("seed-" + row.get("seed"));
-            String html = RunReport.html(run);
+            if (circuit == null) {
+                circuit = RunReport.circuitFigures(Files.readString(run.resolve("scenario.toml"),
+                        StandardCharsets.UTF_8), run);
+            }
+            String html = RunReport.html(run, circuit);
             RunFolder.open(run).writeText("report.html", w -> w.write(html));
             runs.add(run);
         }
-        JsonObject first = JsonParser.parseString(Files.readString(runs.get(0).resolve("run.json"),
-                StandardCharsets.UTF_8)).getAsJsonObject();
-        JsonObject metrics = JsonParser.parseString(Files.readString(runs.get(0).resolve("metrics.json"),
-                StandardCharsets.UTF_8)).getAsJsonObject();
+        JsonObject first = RunFiles.json(runs.get(0).resolve("run.json"));
+        JsonObject metrics = RunFiles.json(runs.get(0).resolve("metrics.json"));
         List<String> fates = new ArrayList<>(metrics.getAsJsonObject("boundaries").keySet());
         HtmlPage page = new HtmlPage("Fatefield replicate report: "
                 + first.getAsJsonObject("scenario").get("name").getAsString() + " (" + rows.size() + " tissues)");
@@ -60,31 +58,24 @@ public final class ReplicateReport {
         page.paragraph("Each tissue ran the same scenario on its own seed; the spread of a boundary across tissues"
                 + " is its positional error.");
         page.heading("Figures");
-        double predicted = Double.NaN;
-        for (JsonElement e : metrics.getAsJsonArray("predicted_boundaries")) {
-            JsonElement p = e.getAsJsonObject().get("position_um");
-            if (p != null && !p.isJsonNull()) {
-                predicted = p.getAsDouble();
-                break;
-            }
+        double[] predictions = RunFiles.predictedBoundaries(metrics);
+        double predicted = predictions.length > 0 ? predictions[0] : Double.NaN;
+        List<RunFiles.Profile> profiles = new ArrayList<>();
+        for (Path run : runs) {
+            profiles.add(RunFiles.profile(run, fates));
         }
-        for (String fate : fates) {
-            double[] x = null;
+        for (int f = 0; f < fates.size(); f++) {
+            String fate = fates.get(f);
             double[][] fractions = new double[runs.size()][];
             double[] boundaries = new double[runs.size()];
             for (int r = 0; r < runs.size(); r++) {
-                List<CSVRecord> profile = csv(runs.get(r).resolve("profile.csv"));
-                x = new double[profile.size()];
-                fractions[r] = new double[profile.size()];
-                for (int b = 0; b < profile.size(); b++) {
-                    x[b] = Double.parseDouble(profile.get(b).get("x_um"));
-                    fractions[r][b] = Double.parseDouble(profile.get(b).get("fraction_" + fate));
-                }
+                fractions[r] = profiles.get(r).fractions()[f];
                 String value = rows.get(r).get("boundary_" + fate + "_um");
                 boundaries[r] = value.isEmpty() ? Double.NaN : Double.parseDouble(value);
             }
             ByteArrayOutputStream png = new ByteArrayOutputStream();
-            ChartFiles.png(ReplicateProfileChart.create(fate, x, fractions, boundaries, predicted), 900, 520, png);
+            ChartFiles.png(ReplicateProfileChart.create(fate, profiles.get(0).x(), fractions, boundaries, predicted),
+                    900, 520, png);
             page.image(fate + " along the gradient in every tissue, with the boundary's mean ± SD",
                     png.toByteArray(), "png");
         }
@@ -124,12 +115,5 @@ public final class ReplicateReport {
 
     private static String number(JsonElement e) {
         return e == null || e.isJsonNull() ? "–" : String.format(java.util.Locale.ROOT, "%.1f", e.getAsDouble());
-    }
-
-    private static List<CSVRecord> csv(Path file) throws IOException {
-        try (Reader in = Files.newBufferedReader(file);
-                CSVParser parser = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get().parse(in)) {
-            return parser.getRecords();
-        }
     }
 }

@@ -2,10 +2,8 @@ package org.fatefield.scenarios.report;
 
 import com.google.gson.JsonElement;
 import com.google.gson.JsonObject;
-import com.google.gson.JsonParser;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.io.Reader;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -14,9 +12,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.function.DoubleFunction;
 import java.util.Map;
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
-import org.apache.commons.csv.CSVRecord;
 import org.fatefield.circuits.analysis.QuasiPotential;
 import org.fatefield.scenarios.analysis.ControlCircuit;
 import org.fatefield.scenarios.format.Scenario;
@@ -42,10 +37,22 @@ public final class RunReport {
     private RunReport() {
     }
 
+    /** A figure for the page: caption and PNG bytes. */
+    record Figure(String caption, byte[] png) {
+    }
+
     /** The report of the run folder {@code run}. */
     public static String html(Path run) throws IOException {
-        JsonObject provenance = json(run.resolve("run.json"));
-        JsonObject metrics = json(run.resolve("metrics.json"));
+        return html(run, circuitFigures(Files.readString(run.resolve("scenario.toml"), StandardCharsets.UTF_8), run));
+    }
+
+    /**
+     * The report of {@code run} with the circuit's figures already drawn (they depend only on the
+     * scenario, so a replicate set draws them once for all its runs).
+     */
+    static String html(Path run, List<Figure> circuit) throws IOException {
+        JsonObject provenance = RunFiles.json(run.resolve("run.json"));
+        JsonObject metrics = RunFiles.json(run.resolve("metrics.json"));
         String scenarioText = Files.readString(run.resolve("scenario.toml"), StandardCharsets.UTF_8);
         HtmlPage page = new HtmlPage("Fatefield report: " + provenance.getAsJsonObject("scenario").get("name").getAsString());
         page.paragraph("Research software output: for exploring models, not for clinical or diagnostic decisions.");
@@ -57,7 +64,9 @@ public final class RunReport {
         }
         List<String> fates = new ArrayList<>(metrics.getAsJsonObject("boundaries").keySet());
         page.image("Fate profile along the gradient", profile(run, fates, metrics), "png");
-        circuitFigures(page, scenarioText, run);
+        for (Figure f : circuit) {
+            page.image(f.caption(), f.png(), "png");
+        }
         page.heading("Pattern");
         List<List<String>> rows = new ArrayList<>();
         for (String fate : fates) {
@@ -95,75 +104,50 @@ public final class RunReport {
     }
 
     private static byte[] profile(Path run, List<String> fates, JsonObject metrics) throws IOException {
-        List<double[]> columns = new ArrayList<>();
-        try (Reader in = Files.newBufferedReader(run.resolve("profile.csv"));
-                CSVParser parser = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get().parse(in)) {
-            List<CSVRecord> records = parser.getRecords();
-            double[] x = new double[records.size()];
-            double[][] fractions = new double[fates.size()][records.size()];
-            for (int b = 0; b < records.size(); b++) {
-                x[b] = Double.parseDouble(records.get(b).get("x_um"));
-                for (int f = 0; f < fates.size(); f++) {
-                    fractions[f][b] = Double.parseDouble(records.get(b).get("fraction_" + fates.get(f)));
-                }
-            }
-            columns.add(x);
-            JsonElement sim = metrics.getAsJsonObject("boundaries").getAsJsonObject(fates.get(fates.size() - 1))
-                    .get("position_um");
-            double simulated = sim == null || sim.isJsonNull() ? Double.NaN : sim.getAsDouble();
-            List<Double> predicted = new ArrayList<>();
-            for (JsonElement e : metrics.getAsJsonArray("predicted_boundaries")) {
-                JsonElement p = e.getAsJsonObject().get("position_um");
-                if (p != null && !p.isJsonNull()) {
-                    predicted.add(p.getAsDouble());
-                }
-            }
-            return png(ProfileChart.create(fates, x, fractions, simulated,
-                    predicted.stream().mapToDouble(Double::doubleValue).toArray()));
-        }
+        RunFiles.Profile profile = RunFiles.profile(run, fates);
+        JsonElement sim = metrics.getAsJsonObject("boundaries").getAsJsonObject(fates.get(fates.size() - 1))
+                .get("position_um");
+        double simulated = sim == null || sim.isJsonNull() ? Double.NaN : sim.getAsDouble();
+        return png(ProfileChart.create(fates, profile.x(), profile.fractions(), simulated,
+                RunFiles.predictedBoundaries(metrics)));
     }
 
     /**
      * The circuit's bifurcation diagram along its control parameter and its landscape where the
-     * most stable states coexist; nothing if the scenario has no coupling.
+     * most stable states coexist; none if the scenario has no coupling or does not parse.
      */
-    private static void circuitFigures(HtmlPage page, String scenarioText, Path run) throws IOException {
+    static List<Figure> circuitFigures(String scenarioText, Path run) throws IOException {
         Scenario scenario;
         try {
             scenario = ScenarioReader.parse("scenario.toml", "run", scenarioText.getBytes(StandardCharsets.UTF_8),
                     run.toAbsolutePath());
         } catch (ScenarioException e) {
-            return;
+            return List.of();
         }
         ControlCircuit circuit = ControlCircuit.of(scenario, 40);
         if (circuit == null) {
-            return;
+            return List.of();
         }
+        List<Figure> figures = new ArrayList<>();
         List<String> species = scenario.tissue().circuit().network().speciesNames();
-        page.image("Single-cell bifurcation diagram along the control parameter",
-                png(BifurcationDiagramChart.create(circuit.branches(), 0, circuit.parameter(), species.get(0))), "png");
+        figures.add(new Figure("Single-cell bifurcation diagram along the control parameter",
+                png(BifurcationDiagramChart.create(circuit.branches(), 0, circuit.parameter(), species.get(0)))));
         DoubleFunction<QuasiPotential> landscape = circuit.landscape();
         if (landscape != null) {
             double at = circuit.mostMultistable();
             QuasiPotential u = landscape.apply(at);
             String title = String.format(Locale.ROOT, "Landscape at %s = %.3f", circuit.parameter(), at);
-            page.image(title + " (U = -ln P of the stationary distribution, one cell, no morphogen change)",
+            figures.add(new Figure(title + " (U = -ln P of the stationary distribution, one cell, no morphogen change)",
                     png(GridMapChart.landscape(u.xs(), u.ys(), u.u(), LANDSCAPE_CEILING, species.get(0),
-                            species.get(1), title)), "png");
+                            species.get(1), title))));
         }
+        return figures;
     }
 
     private static byte[] png(JFreeChart chart) throws IOException {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         ChartFiles.png(chart, 900, 520, out);
         return out.toByteArray();
-    }
-
-    private static JsonObject json(Path file) throws IOException {
-        if (!Files.exists(file)) {
-            throw new IOException(file + " is missing: is this a finished Fatefield run folder?");
-        }
-        return JsonParser.parseString(Files.readString(file, StandardCharsets.UTF_8)).getAsJsonObject();
     }
 
     private static String text(JsonElement e) {
