@@ -1,6 +1,7 @@
 package org.fatefield.engine.cell;
 
 import org.apache.commons.rng.UniformRandomProvider;
+import org.fatefield.engine.division.SizeControl;
 
 /**
  * One cell: where it is, how far through its cycle, and its own copy of the circuit.
@@ -22,6 +23,8 @@ public final class Cell {
     private double y;
     private double age;
     private double signal;
+    private final double birthVolume;
+    private double volume;
     private int fate = -1;
     private double fateSince = Double.NaN;
     private final double birthX;
@@ -43,6 +46,23 @@ public final class Cell {
      */
     public Cell(long id, long parentId, int generation, double birthTime, double cycleTime, double[] state,
             UniformRandomProvider rng, double x, double y, double age) {
+        this(id, parentId, generation, birthTime, cycleTime, state, rng, x, y, age, 1.0,
+                SizeControl.TIMER.volume(1.0, age, cycleTime));
+    }
+
+    /**
+     * A cell of a given size: as {@link #Cell(long, long, int, double, double, double[],
+     * UniformRandomProvider, double, double, double)}, with {@code birthVolume} and the current
+     * {@code volume} in units of a mean newborn cell, both greater than 0.
+     */
+    public Cell(long id, long parentId, int generation, double birthTime, double cycleTime, double[] state,
+            UniformRandomProvider rng, double x, double y, double age, double birthVolume, double volume) {
+        if (!(birthVolume > 0) || !(volume > 0)) {
+            throw new IllegalArgumentException("cell " + id + ": volumes must be greater than 0, got birth volume "
+                    + birthVolume + " and volume " + volume);
+        }
+        this.birthVolume = birthVolume;
+        this.volume = volume;
         this.id = id;
         this.parentId = parentId;
         this.generation = generation;
@@ -76,6 +96,8 @@ public final class Cell {
         out.writeDouble(y);
         out.writeDouble(age);
         out.writeDouble(signal);
+        out.writeDouble(birthVolume);
+        out.writeDouble(volume);
         out.writeInt(fate);
         out.writeDouble(fateSince);
         out.writeDouble(birthX);
@@ -99,12 +121,15 @@ public final class Cell {
         double y = in.readDouble();
         double age = in.readDouble();
         double signal = in.readDouble();
+        double birthVolume = in.readDouble();
+        double volume = in.readDouble();
         int fate = in.readInt();
         double fateSince = in.readDouble();
         double birthX = in.readDouble();
         double birthY = in.readDouble();
         double[] scores = readArray(in);
-        Cell cell = new Cell(id, parentId, generation, birthTime, cycleTime, state, rng, birthX, birthY, 0.0);
+        Cell cell = new Cell(id, parentId, generation, birthTime, cycleTime, state, rng, birthX, birthY, 0.0,
+                birthVolume, volume);
         cell.x = x;
         cell.y = y;
         cell.age = age;
@@ -191,12 +216,21 @@ public final class Cell {
     }
 
     /**
-     * Radius (µm) for a cell of newborn radius {@code r0}: area grows linearly from that of a
-     * newborn to twice it at division.
+     * Radius (µm) for a cell of newborn radius {@code r0}: in two dimensions a cell's area is its
+     * volume, so the radius scales as the square root of the volume.
      */
     public double radius(double r0) {
-        double progress = Math.min(1.0, age / cycleTime);
-        return r0 * Math.sqrt(1.0 + progress);
+        return r0 * Math.sqrt(volume);
+    }
+
+    /** Volume now, in units of a mean newborn cell. */
+    public double volume() {
+        return volume;
+    }
+
+    /** Volume at birth, in units of a mean newborn cell. */
+    public double birthVolume() {
+        return birthVolume;
     }
 
     /** The cell's random stream; only the engine's tick draws from it. */
@@ -216,25 +250,25 @@ public final class Cell {
     }
 
     /**
-     * Dilutes the concentrations by the cell's growth over the next {@code dt} hours: the volume
-     * grows linearly from 1 to 2 newborn volumes over the cycle, so concentrations scale by
-     * {@code V(age) / V(age + dt)} exactly.
+     * Ages the cell by {@code dt} hours and grows its volume by {@code control}'s law; with
+     * {@code dilute}, the concentrations scale by {@code V(before) / V(after)}, exactly the
+     * dilution the growth causes over the step.
      */
-    public void dilute(double dt) {
-        double factor = (cycleTime + Math.min(age, cycleTime)) / (cycleTime + Math.min(age + dt, cycleTime));
-        for (int i = 0; i < state.length; i++) {
-            state[i] *= factor;
+    public void grow(double dt, SizeControl control, boolean dilute) {
+        double before = volume;
+        age += dt;
+        volume = control.volume(birthVolume, age, cycleTime);
+        if (dilute) {
+            double factor = before / volume;
+            for (int i = 0; i < state.length; i++) {
+                state[i] *= factor;
+            }
         }
     }
 
-    /** Adds {@code dt} hours to the cell's age. */
-    public void grow(double dt) {
-        this.age += dt;
-    }
-
-    /** True once the cell has reached its cycle time. */
-    public boolean readyToDivide() {
-        return age >= cycleTime;
+    /** True once the cell should divide under {@code control}. */
+    public boolean readyToDivide(SizeControl control) {
+        return control.ready(birthVolume, volume, age, cycleTime);
     }
 
     /** Records the morphogen level read at the cell. */

@@ -18,7 +18,12 @@ public enum PartitionMode {
      * Each division draws a share p from a Beta law around a mean, then each molecule goes to the
      * first daughter with probability p: the daughter's count is beta-binomial.
      */
-    ASYMMETRIC;
+    ASYMMETRIC,
+    /**
+     * Each molecule goes to the first daughter with probability equal to her share of the
+     * mother's volume; with equal volumes this is {@link #BINOMIAL}.
+     */
+    VOLUME;
 
     /**
      * Shares a mother's molecules between two daughters.
@@ -26,7 +31,8 @@ public enum PartitionMode {
      * <p>The mother, at division, has twice a newborn's volume and so holds
      * {@code round(2 Omega x)} molecules of a species at concentration {@code x}; a daughter
      * with {@code n} of them has concentration {@code n / Omega}. {@link #EQUAL} gives both
-     * daughters exactly the mother's concentrations.
+     * daughters exactly the mother's concentrations. Daughters here have equal volumes, so
+     * {@link #VOLUME} shares like {@link #BINOMIAL}; {@link Partitioning} handles unequal ones.
      *
      * @param mother     mother's concentrations, not modified
      * @param systemSize molecules per unit concentration in a newborn cell

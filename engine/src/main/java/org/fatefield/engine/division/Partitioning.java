@@ -12,7 +12,10 @@ import org.apache.commons.rng.sampling.distribution.AhrensDieterMarsagliaTsangGa
  * {@code N m (1 - m) (1 + (N - 1) / (concentration + 1))} (Huh &amp; Paulsson 2011, Nat. Genet.
  * 43:95, for partitioning noise).
  *
- * @param mode          binomial, equal or asymmetric
+ * <p>For {@link PartitionMode#VOLUME} each molecule goes to the first daughter with probability
+ * equal to her share of the mother's volume (see {@link CellSize}).
+ *
+ * @param mode          binomial, equal, asymmetric or volume
  * @param mean          mean share of the first daughter (asymmetric only), in (0, 1)
  * @param concentration Beta concentration alpha + beta (asymmetric only), greater than 0
  */
@@ -38,25 +41,61 @@ public record Partitioning(PartitionMode mode, double mean, double concentration
     }
 
     /**
-     * Shares a mother's molecules (see {@link PartitionMode#split}); for asymmetric division one
-     * share p is drawn per division and used for every species.
+     * Shares the molecules of a mother at the end of a fixed-size cycle (volume 2, equal halves);
+     * see {@link #split(double[], double, double, double, UniformRandomProvider, double[], double[])}.
      */
     public void split(double[] mother, double systemSize, UniformRandomProvider rng, double[] first, double[] second) {
-        if (mode != PartitionMode.ASYMMETRIC) {
-            mode.split(mother, systemSize, rng, first, second);
+        split(mother, 2.0, 0.5, systemSize, rng, first, second);
+    }
+
+    /**
+     * Shares a mother's molecules between daughters of unequal volume.
+     *
+     * <p>A mother of volume {@code V} (in newborn volumes) at concentration {@code x} holds
+     * {@code N = round(Omega V x)} molecules; the first daughter gets {@code n} of them, and its
+     * concentration is {@code n / (Omega f V)}, the second's {@code (N - n) / (Omega (1 - f) V)}.
+     * {@code n} is Binomial(N, 1/2) for binomial, Binomial(N, f) for volume (each molecule in the
+     * daughter whose space it happens to occupy), beta-binomial for asymmetric (one share p per
+     * division, used for every species); equal gives both daughters the mother's concentrations
+     * exactly.
+     *
+     * @param mother     mother's concentrations, not modified
+     * @param volume     mother's volume at division, in newborn volumes
+     * @param fraction   first daughter's share of that volume, in (0, 1)
+     * @param systemSize molecules per unit concentration in a volume of 1
+     * @param rng        the mother's random stream
+     * @param first      receives the first daughter's concentrations
+     * @param second     receives the second daughter's concentrations
+     */
+    public void split(double[] mother, double volume, double fraction, double systemSize, UniformRandomProvider rng,
+            double[] first, double[] second) {
+        if (mode == PartitionMode.EQUAL) {
+            System.arraycopy(mother, 0, first, 0, mother.length);
+            System.arraycopy(mother, 0, second, 0, mother.length);
             return;
         }
-        double p = beta(rng);
+        double p = switch (mode) {
+            case ASYMMETRIC -> beta(rng);
+            case VOLUME -> fraction;
+            default -> 0.5;
+        };
+        double firstMolecules = systemSize * volume * fraction;
+        double secondMolecules = systemSize * volume * (1.0 - fraction);
         for (int i = 0; i < mother.length; i++) {
-            long total = Math.round(2.0 * systemSize * Math.max(mother[i], 0.0));
-            long share = binomial(total, p, rng);
-            first[i] = share / systemSize;
-            second[i] = (total - share) / systemSize;
+            long total = Math.round(systemSize * volume * Math.max(mother[i], 0.0));
+            long share = p == 0.5 ? PartitionMode.fairBinomial(total, rng) : binomial(total, p, rng);
+            first[i] = share / firstMolecules;
+            second[i] = (total - share) / secondMolecules;
         }
     }
 
     /** One draw of the Beta(mean * c, (1 - mean) * c) share. */
     double beta(UniformRandomProvider rng) {
+        return betaShare(rng, mean, concentration);
+    }
+
+    /** One draw from the Beta law of mean {@code mean} and concentration {@code alpha + beta = concentration}. */
+    static double betaShare(UniformRandomProvider rng, double mean, double concentration) {
         double x = AhrensDieterMarsagliaTsangGammaSampler.of(rng, mean * concentration, 1.0).sample();
         double y = AhrensDieterMarsagliaTsangGammaSampler.of(rng, (1 - mean) * concentration, 1.0).sample();
         return x / (x + y);

@@ -14,7 +14,10 @@ package org.fatefield.engine.lineage;
  * @param fateAtEnd      fate index at the end of the run, -1 if it divided
  * @param commitmentTime time it last entered its final fate (to the recording interval), NaN if unknown
  * @param deathTime      time it died (h), NaN if it did not
+ * @param birthVolume    volume at birth, in mean newborn volumes
+ * @param finalVolume    volume at division, death or the end of the run, in mean newborn volumes
  */
 public record LineageRecord(long id, long parentId, int generation, double birthTime, double divisionTime,
-        double birthX, double birthY, int fateAtDivision, int fateAtEnd, double commitmentTime, double deathTime) {
+        double birthX, double birthY, int fateAtDivision, int fateAtEnd, double commitmentTime, double deathTime,
+        double birthVolume, double finalVolume) {
 }

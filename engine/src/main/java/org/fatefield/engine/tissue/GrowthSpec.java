@@ -1,5 +1,6 @@
 package org.fatefield.engine.tissue;
 
+import org.fatefield.engine.division.CellSize;
 import org.fatefield.engine.division.CycleTimeDistribution;
 import org.fatefield.engine.division.Partitioning;
 
@@ -17,14 +18,25 @@ import org.fatefield.engine.division.Partitioning;
  *                      linearly over the cycle); if false, degradation rates are taken to include dilution
  * @param adhesion      attraction rate between near neighbours (1 / h), at least 0
  * @param disc          true to confine cells to the disc inscribed in the domain rectangle
+ * @param size          when cells divide and how unequally they share their volume
  */
 public record GrowthSpec(int initialCells, double cellRadius, double repulsionRate, CycleTimeDistribution cycle,
-        Partitioning partition, DivisionAxis axis, double deathRate, boolean dilution, double adhesion, boolean disc) {
+        Partitioning partition, DivisionAxis axis, double deathRate, boolean dilution, double adhesion, boolean disc,
+        CellSize size) {
+
+    /** Timer division into equal halves. */
+    public GrowthSpec(int initialCells, double cellRadius, double repulsionRate, CycleTimeDistribution cycle,
+            Partitioning partition, DivisionAxis axis, double deathRate, boolean dilution, double adhesion,
+            boolean disc) {
+        this(initialCells, cellRadius, repulsionRate, cycle, partition, axis, deathRate, dilution, adhesion, disc,
+                CellSize.FIXED);
+    }
 
     /** Without adhesion, in a rectangle. */
     public GrowthSpec(int initialCells, double cellRadius, double repulsionRate, CycleTimeDistribution cycle,
             Partitioning partition, DivisionAxis axis, double deathRate, boolean dilution) {
-        this(initialCells, cellRadius, repulsionRate, cycle, partition, axis, deathRate, dilution, 0, false);
+        this(initialCells, cellRadius, repulsionRate, cycle, partition, axis, deathRate, dilution, 0, false,
+                CellSize.FIXED);
     }
 
     /** Direction of the division axis. */
@@ -40,7 +52,8 @@ public record GrowthSpec(int initialCells, double cellRadius, double repulsionRa
     /** Random axis, no death, dilution folded into degradation. */
     public GrowthSpec(int initialCells, double cellRadius, double repulsionRate, CycleTimeDistribution cycle,
             Partitioning partition) {
-        this(initialCells, cellRadius, repulsionRate, cycle, partition, DivisionAxis.RANDOM, 0.0, false, 0, false);
+        this(initialCells, cellRadius, repulsionRate, cycle, partition, DivisionAxis.RANDOM, 0.0, false, 0, false,
+                CellSize.FIXED);
     }
 
     /** Validates. */
@@ -56,6 +69,9 @@ public record GrowthSpec(int initialCells, double cellRadius, double repulsionRa
         }
         if (!(adhesion >= 0) || Double.isInfinite(adhesion)) {
             throw new IllegalArgumentException("adhesion must be finite and at least 0, got " + adhesion);
+        }
+        if (size == null) {
+            throw new IllegalArgumentException("cell size rules must be given (CellSize.FIXED for timer and equal halves)");
         }
         if (!(deathRate >= 0) || Double.isInfinite(deathRate)) {
             throw new IllegalArgumentException("death rate must be finite and at least 0, got " + deathRate);

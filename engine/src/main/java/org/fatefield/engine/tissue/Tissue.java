@@ -7,6 +7,7 @@ import org.fatefield.circuits.sim.CircuitStepper;
 import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.cell.CellPopulation;
 import org.fatefield.engine.coupling.ParameterMapping;
+import org.fatefield.engine.division.SizeControl;
 import org.fatefield.engine.field.MorphogenField;
 import org.fatefield.engine.lineage.Ancestry;
 import org.fatefield.engine.lineage.LineageRecord;
@@ -51,8 +52,7 @@ public final class Tissue extends SimState {
     private double[][] params;
     private double[] baseParameters;
     private int[] noisyIndices;
-    private double[] firstDaughter;
-    private double[] secondDaughter;
+    private CellDivision division;
     private long steps;
     private double blockSide;
     private LineageSink lineage = LineageSink.NONE;
@@ -107,9 +107,7 @@ public final class Tissue extends SimState {
         signals = new double[threads][fields.length];
         mechanics = new OverlapRepulsion(spec.width(), spec.height(), growth.repulsionRate(), growth.cellRadius(),
                 growth.adhesion(), 0.2, growth.disc());
-        int species = circuit.network().speciesCount();
-        firstDaughter = new double[species];
-        secondDaughter = new double[species];
+        division = new CellDivision(spec, streams);
         steps = 0;
         ancestry = new Ancestry();
         lineageClosed = false;
@@ -128,7 +126,8 @@ public final class Tissue extends SimState {
             UniformRandomProvider rng = streams.stream(id);
             double cycle = growth.cycle().sample(rng);
             double age = cycle * rng.nextDouble();
-            Cell founder = new Cell(id, -1, 0, -age, cycle, circuit.initialState(), rng, x, y, age);
+            Cell founder = new Cell(id, -1, 0, -age, cycle, circuit.initialState(), rng, x, y, age, 1.0,
+                    growth.size().control().volume(1.0, age, cycle));
             if (!spec.extrinsic().isEmpty()) {
                 founder.setScores(ExtrinsicNoise.founderScores(spec.extrinsic(), rng));
             }
@@ -151,7 +150,7 @@ public final class Tissue extends SimState {
         }
         stepCells(dt);
         steps++;
-        divide();
+        division.divideReady(population, ancestry, lineage, time());
         if (spec.growth().deathRate() > 0) {
             removeDead(dt);
         }
@@ -172,6 +171,7 @@ public final class Tissue extends SimState {
         ParameterMapping mapping = spec.mapping();
         CellPopulation cells = population;
         boolean dilute = spec.growth().dilution();
+        SizeControl size = spec.growth().size().control();
         List<ExtrinsicNoise> extrinsic = spec.extrinsic();
         int control = mapping.controlField();
         pool.forEach(cells.size(), (from, to, worker) -> {
@@ -192,39 +192,9 @@ public final class Tissue extends SimState {
                     extrinsic.get(k).apply(cell.scores()[k], p);
                 }
                 circuit.advance(cell.liveState(), p, dt, cell.random());
-                if (dilute) {
-                    cell.dilute(dt);
-                }
-                cell.grow(dt);
+                cell.grow(dt, size, dilute);
             }
         });
-    }
-
-    private void divide() {
-        int n = population.size();
-        double now = time();
-        GrowthSpec growth = spec.growth();
-        double offset = 0.5 * growth.cellRadius();
-        for (int i = 0; i < n; i++) {
-            Cell mother = population.get(i);
-            if (!mother.readyToDivide()) {
-                continue;
-            }
-            lineage.accept(new LineageRecord(mother.id(), mother.parentId(), mother.generation(), mother.birthTime(),
-                    now, mother.birthX(), mother.birthY(), spec.fates().classify(mother.liveState()), -1, Double.NaN,
-                    Double.NaN));
-            UniformRandomProvider rng = mother.random();
-            growth.partition().split(mother.liveState(), spec.circuit().systemSize(), rng, firstDaughter, secondDaughter);
-            double angle = switch (growth.axis()) {
-                case X -> 0.0;
-                case Y -> 0.5 * Math.PI;
-                case RANDOM -> 2 * Math.PI * rng.nextDouble();
-            };
-            double ox = offset * Math.cos(angle);
-            double oy = offset * Math.sin(angle);
-            population.replace(i, daughter(mother, firstDaughter, now, mother.x() + ox, mother.y() + oy));
-            population.add(daughter(mother, secondDaughter, now, mother.x() - ox, mother.y() - oy));
-        }
     }
 
     /** Resets the parameters extrinsic noise multiplies to their base values. */
@@ -248,26 +218,9 @@ public final class Tissue extends SimState {
             }
             lineage.accept(new LineageRecord(cell.id(), cell.parentId(), cell.generation(), cell.birthTime(),
                     Double.NaN, cell.birthX(), cell.birthY(), -1, spec.fates().classify(cell.liveState()),
-                    cell.fateSince(), now));
+                    cell.fateSince(), now, cell.birthVolume(), cell.volume()));
             return true;
         });
-    }
-
-    private Cell daughter(Cell mother, double[] state, double now, double x, double y) {
-        long id = population.newId();
-        ancestry.add(id, mother.id());
-        UniformRandomProvider rng = streams.stream(id);
-        double cycle = spec.growth().cycle().sample(rng);
-        double r = spec.growth().cellRadius();
-        double cx = Math.min(Math.max(x, r), spec.width() - r);
-        double cy = Math.min(Math.max(y, r), spec.height() - r);
-        Cell cell = new Cell(id, mother.id(), mother.generation() + 1, now, cycle, state.clone(), rng, cx, cy, 0.0);
-        cell.setSignal(mother.signal());
-        cell.setFate(mother.fate(), mother.fateSince());
-        if (!spec.extrinsic().isEmpty()) {
-            cell.setScores(ExtrinsicNoise.daughterScores(spec.extrinsic(), mother.scores(), rng));
-        }
-        return cell;
     }
 
     private void record() {
@@ -344,7 +297,8 @@ public final class Tissue extends SimState {
         lineageClosed = true;
         for (Cell cell : population.view()) {
             lineage.accept(new LineageRecord(cell.id(), cell.parentId(), cell.generation(), cell.birthTime(),
-                    Double.NaN, cell.birthX(), cell.birthY(), -1, cell.fate(), cell.fateSince(), Double.NaN));
+                    Double.NaN, cell.birthX(), cell.birthY(), -1, cell.fate(), cell.fateSince(), Double.NaN,
+                    cell.birthVolume(), cell.volume()));
         }
     }
 

@@ -13,7 +13,8 @@ import org.fatefield.engine.record.TimeSeries;
  */
 final class TissueCheckpoint {
 
-    private static final long MAGIC = 0x4646434b50543031L;
+    /** "FFCKPT02": version 2 added cell volumes. */
+    private static final long MAGIC = 0x4646434b50543032L;
 
     private TissueCheckpoint() {
     }
@@ -45,7 +46,8 @@ final class TissueCheckpoint {
 
     static void read(Tissue tissue, DataInputStream in) throws IOException {
         if (in.readLong() != MAGIC) {
-            throw new IOException("not a Fatefield tissue checkpoint");
+            throw new IOException("not a tissue checkpoint of this Fatefield version (an older version's checkpoint"
+                    + " cannot be resumed: start the run again)");
         }
         long steps = in.readLong();
         long nextId = in.readLong();

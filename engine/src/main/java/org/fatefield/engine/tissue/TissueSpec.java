@@ -63,6 +63,11 @@ public record TissueSpec(CircuitSetup circuit, ParameterMapping mapping, Morphog
             throw new IllegalArgumentException("parameter mapping has " + mapping.parameterCount()
                     + " parameters but the circuit has " + circuit.network().parameterNames().size());
         }
+        if (growth.size().variable() && circuit.noise() != NoiseMode.LANGEVIN && circuit.noise() != NoiseMode.NONE) {
+            throw new IllegalArgumentException("cells of unequal volume (size control " + growth.size().control()
+                    + ", volume split cv " + growth.size().splitCv() + ") need Langevin or deterministic circuits: the"
+                    + " molecule-count methods assume every newborn has the same volume");
+        }
         if (2 * growth.cellRadius() > Math.min(width, height)) {
             throw new IllegalArgumentException("a cell of radius " + growth.cellRadius()
                     + " µm does not fit in a " + width + " x " + height + " µm domain");

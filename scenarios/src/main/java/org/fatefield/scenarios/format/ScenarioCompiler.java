@@ -12,7 +12,9 @@ import org.fatefield.circuits.model.SelfActivatingSwitch;
 import org.fatefield.engine.coupling.CouplingForm;
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.coupling.SignalCoupling;
+import org.fatefield.engine.division.CellSize;
 import org.fatefield.engine.division.CycleTimeDistribution;
+import org.fatefield.engine.division.SizeControl;
 import org.fatefield.engine.division.PartitionMode;
 import org.fatefield.engine.division.Partitioning;
 import org.fatefield.engine.fate.FateClassifier;
@@ -264,12 +266,22 @@ final class ScenarioCompiler {
                     + " molecule-count methods keep whole numbers of molecules between divisions");
             return null;
         }
+        CellSize size = new CellSize(SizeControl.valueOf(values.text(division, "division", "size_control")
+                .toUpperCase(Locale.ROOT)), values.number(division, "division", "volume_split_cv"));
+        if (size.variable() && circuit != null && circuit.noise() != NoiseMode.LANGEVIN
+                && circuit.noise() != NoiseMode.NONE) {
+            values.fail(division, "division", size.splitCv() > 0 ? "volume_split_cv" : "size_control",
+                    "cells of unequal volume need circuit.noise = \"langevin\" or \"none\": the molecule-count"
+                            + " methods assume every newborn has the same volume (use size_control = \"timer\" and"
+                            + " volume_split_cv = 0 with them)");
+            return null;
+        }
         return new GrowthSpec((int) tissue.getLong("founders", () -> 200L), values.number(tissue, "tissue", "cell_radius"),
                 values.number(tissue, "tissue", "repulsion"),
                 new CycleTimeDistribution(kind, values.number(division, "division", "cycle_mean"), cv), partition,
                 GrowthSpec.DivisionAxis.valueOf(values.text(division, "division", "axis").toUpperCase(Locale.ROOT)),
                 values.number(division, "division", "death_rate"), dilution, values.number(tissue, "tissue", "adhesion"),
-                values.text(tissue, "tissue", "shape").equals("disc"));
+                values.text(tissue, "tissue", "shape").equals("disc"), size);
     }
 
 }

@@ -83,14 +83,25 @@ public final class ScenarioSchema {
                     Key.choice("cycle", "gamma", List.of("fixed", "gamma", "lognormal"), "cycle-time distribution"),
                     Key.positive("cycle_mean", "h", "12", "mean time from birth to division"),
                     Key.nonNegative("cycle_cv", "", "0.15", "coefficient of variation of the cycle time (ignored when fixed)"),
-                    Key.choice("partition", "binomial", List.of("binomial", "equal", "asymmetric"),
+                    Key.choice("partition", "binomial", List.of("binomial", "equal", "asymmetric", "volume"),
                             "how molecules are shared at division: binomial (each molecule to either daughter with"
-                                    + " probability 1/2), equal (exact halves: no partitioning noise) or asymmetric"
-                                    + " (a share p drawn per division from a Beta law, then binomial with p)"),
+                                    + " probability 1/2), equal (both daughters keep the mother's concentrations: no"
+                                    + " partitioning noise), asymmetric (a share p drawn per division from a Beta law,"
+                                    + " then binomial with p) or volume (each molecule to a daughter with probability"
+                                    + " her share of the mother's volume; see volume_split_cv)"),
                     new Key("asymmetry_mean", KeyType.NUMBER, "", "0.5", 0.0, true, 1.0, List.of(),
                             "asymmetric only: mean share of the first daughter (below 1)"),
                     Key.positive("asymmetry_concentration", "", "20",
                             "asymmetric only: Beta concentration alpha + beta; smaller means more variable shares"),
+                    Key.choice("size_control", "timer", List.of("timer", "adder", "sizer"),
+                            "when a cell divides: timer (at its drawn cycle time; volume grows linearly to twice the"
+                                    + " birth volume), adder (after adding one newborn volume) or sizer (on reaching two"
+                                    + " newborn volumes); adder and sizer grow exponentially, doubling in the drawn"
+                                    + " cycle time. Other than timer needs circuit.noise = langevin or none"),
+                    new Key("volume_split_cv", KeyType.NUMBER, "", "0", 0.0, false, 0.9, List.of(),
+                            "coefficient of variation of a daughter's share of her mother's volume (a Beta law"
+                                    + " around 1/2); 0 splits exactly in half. Above 0 needs circuit.noise = langevin"
+                                    + " or none"),
                     Key.choice("axis", "random", List.of("random", "x", "y"),
                             "direction along which the daughters are placed: random, x (the gradient axis) or y"),
                     Key.nonNegative("death_rate", "1/h", "0", "probability per hour that a cell dies and is removed"),

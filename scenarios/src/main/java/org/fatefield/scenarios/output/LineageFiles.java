@@ -35,7 +35,7 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
     public static final String TREES = "lineage.nwk";
 
     private static final String HEADER = "id,parent_id,generation,birth_time_h,division_time_h,birth_x_um,birth_y_um,"
-            + "fate_at_division,fate_at_end,commitment_time_h,death_time_h";
+            + "fate_at_division,fate_at_end,commitment_time_h,death_time_h,birth_volume,final_volume";
 
     private final Path folder;
     private final Path partial;
@@ -80,7 +80,8 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
             out.write(r.id() + "," + r.parentId() + "," + r.generation() + "," + RunTables.number(r.birthTime()) + ","
                     + RunTables.number(r.divisionTime()) + "," + RunTables.number(r.birthX()) + ","
                     + RunTables.number(r.birthY()) + "," + name(r.fateAtDivision()) + "," + name(r.fateAtEnd()) + ","
-                    + RunTables.number(r.commitmentTime()) + "," + RunTables.number(r.deathTime()) + "\n");
+                    + RunTables.number(r.commitmentTime()) + "," + RunTables.number(r.deathTime()) + ","
+                    + RunTables.number(r.birthVolume()) + "," + RunTables.number(r.finalVolume()) + "\n");
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write " + partial, e);
         }

@@ -7,6 +7,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
 import org.fatefield.scenarios.builtin.BuiltinScenarios;
+import org.fatefield.engine.division.CellSize;
+import org.fatefield.engine.division.PartitionMode;
+import org.fatefield.engine.division.SizeControl;
 import org.junit.jupiter.api.Test;
 
 class ScenarioReaderTest {
@@ -38,6 +41,24 @@ class ScenarioReaderTest {
         assertEquals(List.of("photocyte", "shieldcyte", "progenitor"), scenario.tissue().fates().fateNames());
         assertEquals(4800, scenario.tissue().timing().totalSteps());
         assertEquals(64, scenario.sha256().length());
+    }
+
+    @Test
+    void sizeControlKeysReachTheEngine() throws ScenarioException {
+        String text = demo().replace("partition = \"binomial\"",
+                "partition = \"volume\"\nsize_control = \"adder\"\nvolume_split_cv = 0.12");
+        Scenario scenario = ScenarioReader.parse("test", "test.toml", text.getBytes(StandardCharsets.UTF_8));
+        assertEquals(new CellSize(SizeControl.ADDER, 0.12), scenario.tissue().growth().size());
+        assertEquals(PartitionMode.VOLUME, scenario.tissue().growth().partition().mode());
+    }
+
+    @Test
+    void unequalVolumesWithMoleculeCountsAreRefused() {
+        String text = demo().replace("partition = \"binomial\"", "volume_split_cv = 0.1")
+                .replace("noise = \"langevin\"", "noise = \"exact\"");
+        Problem p = problems(text).get(0);
+        assertEquals("division.volume_split_cv", p.keyPath());
+        assertTrue(p.message().contains("langevin"), p.message());
     }
 
     @Test

@@ -1,0 +1,84 @@
+package org.fatefield.engine.tissue;
+
+import org.apache.commons.rng.UniformRandomProvider;
+import org.fatefield.circuits.random.RandomStreams;
+import org.fatefield.engine.cell.Cell;
+import org.fatefield.engine.cell.CellPopulation;
+import org.fatefield.engine.division.CellSize;
+import org.fatefield.engine.lineage.Ancestry;
+import org.fatefield.engine.lineage.LineageRecord;
+import org.fatefield.engine.lineage.LineageSink;
+import org.fatefield.engine.variability.ExtrinsicNoise;
+
+/**
+ * Divides every cell that is ready, in population order: writes the mother's lineage record,
+ * shares her volume and molecules, and puts the first daughter in her slot and the second at
+ * the end of the population. Every draw comes from the mother's own stream, then each daughter's.
+ */
+final class CellDivision {
+
+    private final TissueSpec spec;
+    private final RandomStreams streams;
+    private final double[] firstDaughter;
+    private final double[] secondDaughter;
+
+    CellDivision(TissueSpec spec, RandomStreams streams) {
+        this.spec = spec;
+        this.streams = streams;
+        int species = spec.circuit().network().speciesCount();
+        this.firstDaughter = new double[species];
+        this.secondDaughter = new double[species];
+    }
+
+    /** Divides the cells of {@code population} that are ready at time {@code now}. */
+    void divideReady(CellPopulation population, Ancestry ancestry, LineageSink lineage, double now) {
+        GrowthSpec growth = spec.growth();
+        CellSize size = growth.size();
+        int n = population.size();
+        for (int i = 0; i < n; i++) {
+            Cell mother = population.get(i);
+            if (!mother.readyToDivide(size.control())) {
+                continue;
+            }
+            lineage.accept(new LineageRecord(mother.id(), mother.parentId(), mother.generation(), mother.birthTime(),
+                    now, mother.birthX(), mother.birthY(), spec.fates().classify(mother.liveState()), -1, Double.NaN,
+                    Double.NaN, mother.birthVolume(), mother.volume()));
+            UniformRandomProvider rng = mother.random();
+            double fraction = size.firstFraction(rng);
+            growth.partition().split(mother.liveState(), mother.volume(), fraction, spec.circuit().systemSize(), rng,
+                    firstDaughter, secondDaughter);
+            double angle = switch (growth.axis()) {
+                case X -> 0.0;
+                case Y -> 0.5 * Math.PI;
+                case RANDOM -> 2 * Math.PI * rng.nextDouble();
+            };
+            double offset = 0.5 * growth.cellRadius() * Math.sqrt(mother.volume() / 2.0);
+            double ox = offset * Math.cos(angle);
+            double oy = offset * Math.sin(angle);
+            double v = mother.volume();
+            population.replace(i, daughter(population, ancestry, mother, firstDaughter, fraction * v, now,
+                    mother.x() + ox, mother.y() + oy));
+            population.add(daughter(population, ancestry, mother, secondDaughter, (1 - fraction) * v, now,
+                    mother.x() - ox, mother.y() - oy));
+        }
+    }
+
+    private Cell daughter(CellPopulation population, Ancestry ancestry, Cell mother, double[] state, double volume,
+            double now, double x, double y) {
+        long id = population.newId();
+        ancestry.add(id, mother.id());
+        UniformRandomProvider rng = streams.stream(id);
+        double cycle = spec.growth().cycle().sample(rng);
+        double r = spec.growth().cellRadius();
+        double cx = Math.min(Math.max(x, r), spec.width() - r);
+        double cy = Math.min(Math.max(y, r), spec.height() - r);
+        Cell cell = new Cell(id, mother.id(), mother.generation() + 1, now, cycle, state.clone(), rng, cx, cy, 0.0,
+                volume, volume);
+        cell.setSignal(mother.signal());
+        cell.setFate(mother.fate(), mother.fateSince());
+        if (!spec.extrinsic().isEmpty()) {
+            cell.setScores(ExtrinsicNoise.daughterScores(spec.extrinsic(), mother.scores(), rng));
+        }
+        return cell;
+    }
+}
