@@ -35,13 +35,23 @@ public final class RandomStreams {
 
     /** The stream for {@code key}; the same (seed, key) always gives the same sequence. */
     public UniformRandomProvider stream(long key) {
+        long[] words = seedWords(key);
+        return new XoRoShiRo128PlusPlus(words[0], words[1]);
+    }
+
+    /**
+     * The two xoroshiro128++ state words of the stream for {@code key} (never both zero), for
+     * generators that embed their state (see {@link EmbeddedStream}); such a generator gives
+     * exactly the sequence of {@link #stream(long)}.
+     */
+    public long[] seedWords(long key) {
         long base = mix(masterSeed ^ mix(key + GOLDEN_GAMMA));
         long s0 = mix(base + GOLDEN_GAMMA);
         long s1 = mix(base + 2 * GOLDEN_GAMMA);
         if (s0 == 0 && s1 == 0) {
             s1 = GOLDEN_GAMMA;
         }
-        return new XoRoShiRo128PlusPlus(s0, s1);
+        return new long[] {s0, s1};
     }
 
     /** The SplitMix64 output function (a bijection on 64-bit words). */

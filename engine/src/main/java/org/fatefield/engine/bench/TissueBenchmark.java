@@ -35,18 +35,36 @@ public final class TissueBenchmark {
     private TissueBenchmark() {
     }
 
+    /** Area per cell (µm²) of the template's founders: the density the tissue starts at. */
+    public static double founderArea(TissueSpec template) {
+        return template.width() * template.height() / template.growth().initialCells();
+    }
+
+    /**
+     * Area per cell (µm²) of a confluent tissue: the mean cell area over the cycle (1.5 newborn
+     * areas) over the packing fraction of discs in a hexagonal packing, 0.9 (common practice).
+     */
+    public static double confluentArea(TissueSpec template) {
+        double r = template.growth().cellRadius();
+        return 1.5 * Math.PI * r * r / 0.9;
+    }
+
     /**
      * Measures a tissue of {@code cells} cells built like {@code template} (same circuit, field
      * and coupling; the domain scaled to the template's founder density; no division), taking
      * the median of {@code repeats} timings of {@code steps} steps each.
      */
     public static Result measure(TissueSpec template, int cells, int steps, int repeats, long seed) {
-        return measure(template, cells, steps, repeats, seed, 1);
+        return measure(template, cells, steps, repeats, seed, 1, founderArea(template));
     }
 
-    /** As {@link #measure(TissueSpec, int, int, int, long)}, the tissue stepped on {@code threads} threads. */
-    public static Result measure(TissueSpec template, int cells, int steps, int repeats, long seed, int threads) {
-        double scale = Math.sqrt((double) cells / template.growth().initialCells());
+    /**
+     * As {@link #measure(TissueSpec, int, int, int, long)}, the tissue stepped on {@code threads}
+     * threads, in a domain of the template's aspect ratio with {@code areaPerCell} µm² per cell.
+     */
+    public static Result measure(TissueSpec template, int cells, int steps, int repeats, long seed, int threads,
+            double areaPerCell) {
+        double scale = Math.sqrt(cells * areaPerCell / (template.width() * template.height()));
         double width = template.width() * scale;
         double height = template.height() * scale;
         GrowthSpec growth = new GrowthSpec(cells, template.growth().cellRadius(), template.growth().repulsionRate(),
@@ -101,11 +119,12 @@ public final class TissueBenchmark {
 
     /**
      * Heap bytes per live cell of a tissue of {@code cells} founders built like {@code template}
-     * (cells, their states and streams, the field and the work buffers, divided by the cell count),
-     * measured as the change in used heap after garbage collection; approximate.
+     * with {@code areaPerCell} µm² per cell (cells, their states and streams, the field and the
+     * work buffers, divided by the cell count), measured as the change in used heap after garbage
+     * collection; approximate.
      */
-    public static double bytesPerCell(TissueSpec template, int cells) {
-        double scale = Math.sqrt((double) cells / template.growth().initialCells());
+    public static double bytesPerCell(TissueSpec template, int cells, double areaPerCell) {
+        double scale = Math.sqrt(cells * areaPerCell / (template.width() * template.height()));
         double width = template.width() * scale;
         double height = template.height() * scale;
         GrowthSpec growth = new GrowthSpec(cells, template.growth().cellRadius(), template.growth().repulsionRate(),

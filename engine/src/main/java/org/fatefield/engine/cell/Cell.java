@@ -1,16 +1,19 @@
 package org.fatefield.engine.cell;
 
 import org.apache.commons.rng.UniformRandomProvider;
+import org.fatefield.circuits.random.EmbeddedStream;
 import org.fatefield.engine.division.SizeControl;
 
 /**
  * One cell: where it is, how far through its cycle, and its own copy of the circuit.
  *
  * <p>Each cell draws only from its own random stream, derived from the run seed and its id, so
- * the tissue's history does not depend on the order or thread in which cells are stepped.
+ * the tissue's history does not depend on the order or thread in which cells are stepped. The
+ * stream's state is part of the cell (it extends {@link EmbeddedStream}): a million cells then
+ * need a million fewer objects.
  * The mutators are for the engine's tick; everything else only reads.
  */
-public final class Cell {
+public final class Cell extends EmbeddedStream {
 
     private final long id;
     private final long parentId;
@@ -18,7 +21,6 @@ public final class Cell {
     private final double birthTime;
     private final double cycleTime;
     private final double[] state;
-    private final UniformRandomProvider rng;
     private double x;
     private double y;
     private double age;
@@ -39,24 +41,25 @@ public final class Cell {
      * @param birthTime  time of birth (h)
      * @param cycleTime  time from birth to division (h)
      * @param state      circuit state (concentrations), owned by the cell from now on
-     * @param rng        the cell's own random stream
+     * @param stream     the two state words of the cell's own random stream (see RandomStreams.seedWords)
      * @param x          position (µm)
      * @param y          position (µm)
      * @param age        time since birth (h); founders start part-way through their cycle
      */
     public Cell(long id, long parentId, int generation, double birthTime, double cycleTime, double[] state,
-            UniformRandomProvider rng, double x, double y, double age) {
-        this(id, parentId, generation, birthTime, cycleTime, state, rng, x, y, age, 1.0,
+            long[] stream, double x, double y, double age) {
+        this(id, parentId, generation, birthTime, cycleTime, state, stream, x, y, age, 1.0,
                 SizeControl.TIMER.volume(1.0, age, cycleTime));
     }
 
     /**
      * A cell of a given size: as {@link #Cell(long, long, int, double, double, double[],
-     * UniformRandomProvider, double, double, double)}, with {@code birthVolume} and the current
+     * long[], double, double, double)}, with {@code birthVolume} and the current
      * {@code volume} in units of a mean newborn cell, both greater than 0.
      */
     public Cell(long id, long parentId, int generation, double birthTime, double cycleTime, double[] state,
-            UniformRandomProvider rng, double x, double y, double age, double birthVolume, double volume) {
+            long[] stream, double x, double y, double age, double birthVolume, double volume) {
+        super(stream);
         if (!(birthVolume > 0) || !(volume > 0)) {
             throw new IllegalArgumentException("cell " + id + ": volumes must be greater than 0, got birth volume "
                     + birthVolume + " and volume " + volume);
@@ -69,7 +72,6 @@ public final class Cell {
         this.birthTime = birthTime;
         this.cycleTime = cycleTime;
         this.state = state;
-        this.rng = rng;
         this.x = x;
         this.y = y;
         this.age = age;
@@ -88,10 +90,8 @@ public final class Cell {
         out.writeDouble(birthTime);
         out.writeDouble(cycleTime);
         writeArray(out, state);
-        byte[] stream = ((org.apache.commons.rng.core.RandomProviderDefaultState)
-                ((org.apache.commons.rng.RestorableUniformRandomProvider) rng).saveState()).getState();
-        out.writeInt(stream.length);
-        out.write(stream);
+        out.writeLong(streamWord0());
+        out.writeLong(streamWord1());
         out.writeDouble(x);
         out.writeDouble(y);
         out.writeDouble(age);
@@ -105,18 +105,15 @@ public final class Cell {
         writeArray(out, scores);
     }
 
-    /** Reads a cell written by {@link #write}; {@code rng} is any stream of the same kind, overwritten. */
-    public static Cell read(java.io.DataInputStream in, UniformRandomProvider rng) throws java.io.IOException {
+    /** Reads a cell written by {@link #write}. */
+    public static Cell read(java.io.DataInputStream in) throws java.io.IOException {
         long id = in.readLong();
         long parentId = in.readLong();
         int generation = in.readInt();
         double birthTime = in.readDouble();
         double cycleTime = in.readDouble();
         double[] state = readArray(in);
-        byte[] stream = new byte[in.readInt()];
-        in.readFully(stream);
-        ((org.apache.commons.rng.RestorableUniformRandomProvider) rng).restoreState(
-                new org.apache.commons.rng.core.RandomProviderDefaultState(stream));
+        long[] stream = {in.readLong(), in.readLong()};
         double x = in.readDouble();
         double y = in.readDouble();
         double age = in.readDouble();
@@ -128,7 +125,7 @@ public final class Cell {
         double birthX = in.readDouble();
         double birthY = in.readDouble();
         double[] scores = readArray(in);
-        Cell cell = new Cell(id, parentId, generation, birthTime, cycleTime, state, rng, birthX, birthY, 0.0,
+        Cell cell = new Cell(id, parentId, generation, birthTime, cycleTime, state, stream, birthX, birthY, 0.0,
                 birthVolume, volume);
         cell.x = x;
         cell.y = y;
@@ -233,9 +230,9 @@ public final class Cell {
         return birthVolume;
     }
 
-    /** The cell's random stream; only the engine's tick draws from it. */
+    /** The cell's random stream (the cell itself); only the engine's tick draws from it. */
     public UniformRandomProvider random() {
-        return rng;
+        return this;
     }
 
     /** The live circuit state, advanced in place by the tick. */

@@ -35,7 +35,8 @@ final class AdiSolver {
 
     /**
      * Advances {@code c} (row-major, x fastest) by {@code tau} in place. Cell secretion and uptake
-     * are treated explicitly in each half step; a fixed value at the left wall enters through a
+     * ({@code cellSource}, {@code cellUptake}, both null when cells exchange nothing) are treated
+     * explicitly in each half step; a fixed value at the left wall enters through a
      * mirrored ghost square ({@code 2 wall - c_0}).
      */
     void step(double[] c, double[] synthesis, double[] cellSource, double[] cellUptake, double tau, BlockParallel pool,
@@ -51,8 +52,8 @@ final class AdiSolver {
                     int k = row + i;
                     double down = j > 0 ? c[k - nx] : c[k];
                     double up = j < ny - 1 ? c[k + nx] : c[k];
-                    work[2 * nx + i] = c[k] + r * (down - 2 * c[k] + up) - q * c[k]
-                            + 0.5 * tau * (synthesis[k] + cellSource[k] - cellUptake[k] * c[k]);
+                    double cells = cellSource == null ? 0.0 : cellSource[k] - cellUptake[k] * c[k];
+                    work[2 * nx + i] = c[k] + r * (down - 2 * c[k] + up) - q * c[k] + 0.5 * tau * (synthesis[k] + cells);
                 }
                 if (leftFixed) {
                     work[2 * nx] += 2 * r * wall;
@@ -68,8 +69,9 @@ final class AdiSolver {
                     int k = j * nx + i;
                     double left = i > 0 ? half[k - 1] : leftFixed ? 2 * wall - half[k] : half[k];
                     double right = i < nx - 1 ? half[k + 1] : half[k];
+                    double cells = cellSource == null ? 0.0 : cellSource[k] - cellUptake[k] * half[k];
                     work[2 * ny + j] = half[k] + r * (left - 2 * half[k] + right) - q * half[k]
-                            + 0.5 * tau * (synthesis[k] + cellSource[k] - cellUptake[k] * half[k]);
+                            + 0.5 * tau * (synthesis[k] + cells);
                 }
                 solve(work, ny, r, q, c, i, nx, 0);
             }

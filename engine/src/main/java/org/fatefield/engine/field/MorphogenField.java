@@ -28,8 +28,9 @@ public final class MorphogenField {
     private double[] next;
     private AdiSolver adi;
     private final boolean timeVarying;
-    private final double[] exchangeSource;
-    private final double[] exchangeUptake;
+    /** Cells' secretion and uptake per square; null until cells first exchange (saves two grids). */
+    private double[] exchangeSource;
+    private double[] exchangeUptake;
     private double time;
     private int adiWorkers;
 
@@ -58,8 +59,6 @@ public final class MorphogenField {
         this.synthesis = new double[nx * ny];
         this.timeVarying = spec.sources().stream().anyMatch(s -> !s.amplitude().isConstant());
         setSynthesis(0.0);
-        this.exchangeSource = new double[nx * ny];
-        this.exchangeUptake = new double[nx * ny];
         if (spec.profile() != null) {
             for (int j = 0; j < ny; j++) {
                 for (int i = 0; i < nx; i++) {
@@ -79,6 +78,7 @@ public final class MorphogenField {
      * area: divide a cell's amount by the square's area). Arrays are copied.
      */
     public void setCellExchange(double[] amount, double[] uptake) {
+        allocateExchange();
         System.arraycopy(amount, 0, exchangeSource, 0, exchangeSource.length);
         System.arraycopy(uptake, 0, exchangeUptake, 0, exchangeUptake.length);
     }
@@ -91,6 +91,7 @@ public final class MorphogenField {
     public void gatherExchange(java.util.List<org.fatefield.engine.cell.Cell> cells, double newbornRadius) {
         MorphogenSpec.CellExchange exchange = spec.exchange();
         double area = h * h;
+        allocateExchange();
         java.util.Arrays.fill(exchangeSource, 0.0);
         java.util.Arrays.fill(exchangeUptake, 0.0);
         for (org.fatefield.engine.cell.Cell cell : cells) {
@@ -101,6 +102,13 @@ public final class MorphogenField {
             }
             double r = cell.radius(newbornRadius);
             exchangeUptake[k] += exchange.uptake() * Math.PI * r * r / area;
+        }
+    }
+
+    private void allocateExchange() {
+        if (exchangeSource == null) {
+            exchangeSource = new double[nx * ny];
+            exchangeUptake = new double[nx * ny];
         }
     }
 
@@ -189,6 +197,8 @@ public final class MorphogenField {
         double decayFactor = 1.0 - spec.decay() * tau;
         boolean fixed = leftFixed();
         double wall = spec.leftWall().value();
+        double[] cellSource = exchangeSource;
+        double[] cellUptake = exchangeUptake;
         for (int j = fromRow; j < toRow; j++) {
             int row = j * nx;
             int down = j > 0 ? row - nx : row;
@@ -199,8 +209,8 @@ public final class MorphogenField {
                 double left = i > 0 ? c[k - 1] : fixed ? 2 * wall - centre : centre;
                 double right = i < nx - 1 ? c[k + 1] : centre;
                 double laplacian = left + right + c[down + i] + c[up + i] - 4.0 * centre;
-                out[k] = decayFactor * centre + diffusionNumber * laplacian
-                        + tau * (synthesis[k] + exchangeSource[k] - exchangeUptake[k] * centre);
+                double cells = cellSource == null ? 0.0 : cellSource[k] - cellUptake[k] * centre;
+                out[k] = decayFactor * centre + diffusionNumber * laplacian + tau * (synthesis[k] + cells);
             }
         }
     }

@@ -4,19 +4,23 @@ import java.util.Arrays;
 
 /**
  * The mother of every cell ever born, by id (ids are dense from 0), kept in memory for lineage
- * statistics: eight bytes per cell ever born, while the full records go to disk.
+ * statistics: four bytes per cell ever born (ids up to 2^31 - 1), while the full records go to disk.
  */
 public final class Ancestry {
 
-    private long[] parent = new long[1024];
+    private int[] parent = new int[1024];
     private long size;
 
     /** Records that cell {@code id} is a daughter of {@code parentId} (-1 for a founder). */
     public void add(long id, long parentId) {
-        if (id >= parent.length) {
-            parent = Arrays.copyOf(parent, (int) Math.max(id + 1, 2L * parent.length));
+        if (id >= Integer.MAX_VALUE) {
+            throw new IllegalStateException("more than " + Integer.MAX_VALUE + " cells born in one run; the ancestry"
+                    + " table holds at most that many (shorten the run or lower the founder count)");
         }
-        parent[(int) id] = parentId;
+        if (id >= parent.length) {
+            parent = Arrays.copyOf(parent, (int) Math.min(Integer.MAX_VALUE - 8, Math.max(id + 1, 2L * parent.length)));
+        }
+        parent[(int) id] = (int) parentId;
         size = Math.max(size, id + 1);
     }
 
@@ -24,17 +28,17 @@ public final class Ancestry {
     public void write(java.io.DataOutputStream out) throws java.io.IOException {
         out.writeLong(size);
         for (long i = 0; i < size; i++) {
-            out.writeLong(parent[(int) i]);
+            out.writeInt(parent[(int) i]);
         }
     }
 
     /** Reads a table written by {@link #write}, replacing this one's contents. */
     public void read(java.io.DataInputStream in) throws java.io.IOException {
         long n = in.readLong();
-        parent = new long[(int) Math.max(1024, n)];
+        parent = new int[(int) Math.max(1024, n)];
         size = n;
         for (int i = 0; i < n; i++) {
-            parent[i] = in.readLong();
+            parent[i] = in.readInt();
         }
     }
 

@@ -28,16 +28,16 @@ public final class OverlapRepulsion {
     private double[] px = new double[0];
     private double[] py = new double[0];
     private double[] pr = new double[0];
-    private double[] dx = new double[0];
-    private double[] dy = new double[0];
     private int[] bucketStart = new int[0];
     private int[] bucketCells = new int[0];
+    private int[] bucketOfCell = new int[0];
+    private int[] bucketFill = new int[0];
 
     /**
      * @param width         domain width (µm)
      * @param height        domain height (µm)
      * @param rate          relaxation rate (1 / h): speed per µm of overlap, at least 0
-     * @param newbornRadius radius of a newborn cell in µm; grown cells reach sqrt(2) times it
+     * @param newbornRadius radius of a cell of volume 1 in µm (a cell of volume V has radius sqrt(V) times it)
      */
     public OverlapRepulsion(double width, double height, double rate, double newbornRadius) {
         this(width, height, rate, newbornRadius, 0, 0.2, false);
@@ -90,88 +90,94 @@ public final class OverlapRepulsion {
                 pr[i] = c.radius(newbornRadius);
             }
         });
-        double side = 2.0 * Math.sqrt(2.0) * newbornRadius * (1 + (adhesion > 0 ? adhesionRange : 0));
+        double largest = Math.sqrt(2.0) * newbornRadius;
+        for (int i = 0; i < n; i++) {
+            largest = Math.max(largest, pr[i]);
+        }
+        // Buckets at least one interaction range wide, so every neighbour is in the 3 x 3 block around a cell.
+        double side = 2.0 * largest * (1 + (adhesion > 0 ? adhesionRange : 0));
         int gx = Math.max(1, (int) Math.ceil(width / side));
         int gy = Math.max(1, (int) Math.ceil(height / side));
         fillBuckets(n, gx, gy, side);
         double step = 0.5 * dt;
-        pool.forEach(n, (from, to, worker) -> forces(from, to, gx, gy, side, step));
         pool.forEach(n, (from, to, worker) -> {
             for (int i = from; i < to; i++) {
-                double r = Math.min(pr[i], 0.5 * Math.min(width, height));
-                double nxp = Math.min(Math.max(px[i] + dx[i], r), width - r);
-                double nyp = Math.min(Math.max(py[i] + dy[i], r), height - r);
-                if (disc) {
-                    double cx = 0.5 * width;
-                    double cy = 0.5 * height;
-                    double limit = 0.5 * Math.min(width, height) - r;
-                    double ex = nxp - cx;
-                    double ey = nyp - cy;
-                    double d = Math.hypot(ex, ey);
-                    if (d > limit && d > 0) {
-                        nxp = cx + ex * limit / d;
-                        nyp = cy + ey * limit / d;
-                    }
-                }
-                population.get(i).moveTo(nxp, nyp);
+                move(population.get(i), i, gx, gy, side, step);
             }
         });
     }
 
-    private void forces(int from, int to, int gx, int gy, double side, double step) {
-        for (int i = from; i < to; i++) {
-            double fx = 0;
-            double fy = 0;
-            int bx = bucketOf(px[i], side, gx);
-            int by = bucketOf(py[i], side, gy);
-            for (int cy = Math.max(0, by - 1); cy <= Math.min(gy - 1, by + 1); cy++) {
-                for (int cx = Math.max(0, bx - 1); cx <= Math.min(gx - 1, bx + 1); cx++) {
-                    int b = cy * gx + cx;
-                    for (int k = bucketStart[b]; k < bucketStart[b + 1]; k++) {
-                        int j = bucketCells[k];
-                        if (j == i) {
-                            continue;
+    /**
+     * Moves cell {@code i} by one step of the net force of its neighbours in the snapshot,
+     * clamped to the walls. Reads only the snapshot arrays and writes only this cell, so blocks of
+     * cells can move in parallel, in any order, with the same result.
+     */
+    private void move(Cell cell, int i, int gx, int gy, double side, double step) {
+        double fx = 0;
+        double fy = 0;
+        int bx = bucketOf(px[i], side, gx);
+        int by = bucketOf(py[i], side, gy);
+        for (int cy = Math.max(0, by - 1); cy <= Math.min(gy - 1, by + 1); cy++) {
+            for (int cx = Math.max(0, bx - 1); cx <= Math.min(gx - 1, bx + 1); cx++) {
+                int b = cy * gx + cx;
+                for (int k = bucketStart[b]; k < bucketStart[b + 1]; k++) {
+                    int j = bucketCells[k];
+                    if (j == i) {
+                        continue;
+                    }
+                    double ex = px[i] - px[j];
+                    double ey = py[i] - py[j];
+                    double reach = pr[i] + pr[j];
+                    double d2 = ex * ex + ey * ey;
+                    if (d2 >= reach * reach) {
+                        double far = reach * (1 + adhesionRange);
+                        if (adhesion > 0 && d2 < far * far) {
+                            // Adhesion pulls neighbours within reach back towards contact.
+                            double d = Math.sqrt(d2);
+                            double pull = adhesion * (d - reach) / d;
+                            fx -= ex * pull;
+                            fy -= ey * pull;
                         }
-                        double ex = px[i] - px[j];
-                        double ey = py[i] - py[j];
-                        double reach = pr[i] + pr[j];
-                        double d2 = ex * ex + ey * ey;
-                        if (d2 >= reach * reach) {
-                            double far = reach * (1 + adhesionRange);
-                            if (adhesion > 0 && d2 < far * far) {
-                                // Adhesion pulls neighbours within reach back towards contact.
-                                double d = Math.sqrt(d2);
-                                double pull = adhesion * (d - reach) / d;
-                                fx -= ex * pull;
-                                fy -= ey * pull;
-                            }
-                            continue;
-                        }
-                        double d = Math.sqrt(d2);
-                        if (d > 1e-12) {
-                            double push = rate * (reach - d) / d;
-                            fx += ex * push;
-                            fy += ey * push;
-                        } else {
-                            // Coincident centres: separate along x by index order, deterministically.
-                            fx += rate * (i < j ? -reach : reach);
-                        }
+                        continue;
+                    }
+                    double d = Math.sqrt(d2);
+                    if (d > 1e-12) {
+                        double push = rate * (reach - d) / d;
+                        fx += ex * push;
+                        fy += ey * push;
+                    } else {
+                        // Coincident centres: separate along x by index order, deterministically.
+                        fx += rate * (i < j ? -reach : reach);
                     }
                 }
             }
-            dx[i] = step * fx;
-            dy[i] = step * fy;
         }
+        double r = Math.min(pr[i], 0.5 * Math.min(width, height));
+        double nxp = Math.min(Math.max(px[i] + step * fx, r), width - r);
+        double nyp = Math.min(Math.max(py[i] + step * fy, r), height - r);
+        if (disc) {
+            double cx = 0.5 * width;
+            double cy = 0.5 * height;
+            double limit = 0.5 * Math.min(width, height) - r;
+            double ex = nxp - cx;
+            double ey = nyp - cy;
+            double d = Math.hypot(ex, ey);
+            if (d > limit && d > 0) {
+                nxp = cx + ex * limit / d;
+                nyp = cy + ey * limit / d;
+            }
+        }
+        cell.moveTo(nxp, nyp);
     }
 
     private void fillBuckets(int n, int gx, int gy, double side) {
         int buckets = gx * gy;
         if (bucketStart.length < buckets + 1) {
             bucketStart = new int[buckets + 1];
+            bucketFill = new int[buckets];
         } else {
             Arrays.fill(bucketStart, 0, buckets + 1, 0);
         }
-        int[] bucketOfCell = new int[n];
         for (int i = 0; i < n; i++) {
             int b = bucketOf(py[i], side, gy) * gx + bucketOf(px[i], side, gx);
             bucketOfCell[i] = b;
@@ -180,9 +186,9 @@ public final class OverlapRepulsion {
         for (int b = 0; b < buckets; b++) {
             bucketStart[b + 1] += bucketStart[b];
         }
-        int[] fill = Arrays.copyOf(bucketStart, buckets);
+        System.arraycopy(bucketStart, 0, bucketFill, 0, buckets);
         for (int i = 0; i < n; i++) {
-            bucketCells[fill[bucketOfCell[i]]++] = i;
+            bucketCells[bucketFill[bucketOfCell[i]]++] = i;
         }
     }
 
@@ -197,9 +203,8 @@ public final class OverlapRepulsion {
             px = new double[size];
             py = new double[size];
             pr = new double[size];
-            dx = new double[size];
-            dy = new double[size];
             bucketCells = new int[size];
+            bucketOfCell = new int[size];
         }
     }
 }

@@ -1,6 +1,7 @@
 package org.fatefield.engine.tissue;
 
 import org.apache.commons.rng.UniformRandomProvider;
+import org.fatefield.circuits.random.EmbeddedStream;
 import org.fatefield.circuits.random.RandomStreams;
 import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.cell.CellPopulation;
@@ -67,17 +68,18 @@ final class CellDivision {
             double now, double x, double y) {
         long id = population.newId();
         ancestry.add(id, mother.id());
-        UniformRandomProvider rng = streams.stream(id);
-        double cycle = spec.growth().cycle().sample(rng);
+        EmbeddedStream.Detached birth = new EmbeddedStream.Detached(streams.seedWords(id));
+        double cycle = spec.growth().cycle().sample(birth);
         double r = spec.growth().cellRadius();
         double cx = Math.min(Math.max(x, r), spec.width() - r);
         double cy = Math.min(Math.max(y, r), spec.height() - r);
-        Cell cell = new Cell(id, mother.id(), mother.generation() + 1, now, cycle, state.clone(), rng, cx, cy, 0.0,
+        Cell cell = new Cell(id, mother.id(), mother.generation() + 1, now, cycle, state.clone(), birth.streamWords(),
+                cx, cy, 0.0,
                 volume, volume);
         cell.setSignal(mother.signal());
         cell.setFate(mother.fate(), mother.fateSince());
         if (!spec.extrinsic().isEmpty()) {
-            cell.setScores(ExtrinsicNoise.daughterScores(spec.extrinsic(), mother.scores(), rng));
+            cell.setScores(ExtrinsicNoise.daughterScores(spec.extrinsic(), mother.scores(), cell.random()));
         }
         return cell;
     }

@@ -2,6 +2,7 @@ package org.fatefield.engine.tissue;
 
 import java.util.List;
 import org.apache.commons.rng.UniformRandomProvider;
+import org.fatefield.circuits.random.EmbeddedStream;
 import org.fatefield.circuits.random.RandomStreams;
 import org.fatefield.circuits.sim.CircuitStepper;
 import org.fatefield.engine.cell.Cell;
@@ -123,13 +124,13 @@ public final class Tissue extends SimState {
             } while (growth.disc() && Math.hypot(x - 0.5 * spec.width(), y - 0.5 * spec.height())
                     > 0.5 * Math.min(spec.width(), spec.height()) - r);
             long id = population.newId();
-            UniformRandomProvider rng = streams.stream(id);
-            double cycle = growth.cycle().sample(rng);
-            double age = cycle * rng.nextDouble();
-            Cell founder = new Cell(id, -1, 0, -age, cycle, circuit.initialState(), rng, x, y, age, 1.0,
-                    growth.size().control().volume(1.0, age, cycle));
+            EmbeddedStream.Detached birth = new EmbeddedStream.Detached(streams.seedWords(id));
+            double cycle = growth.cycle().sample(birth);
+            double age = cycle * birth.nextDouble();
+            Cell founder = new Cell(id, -1, 0, -age, cycle, circuit.initialState(), birth.streamWords(), x, y, age,
+                    1.0, growth.size().control().volume(1.0, age, cycle));
             if (!spec.extrinsic().isEmpty()) {
-                founder.setScores(ExtrinsicNoise.founderScores(spec.extrinsic(), rng));
+                founder.setScores(ExtrinsicNoise.founderScores(spec.extrinsic(), founder.random()));
             }
             population.add(founder);
             ancestry.add(id, -1);
@@ -267,11 +268,6 @@ public final class Tissue extends SimState {
     void restoreProgress(long restoredSteps, TimeSeries restoredSeries) {
         this.steps = restoredSteps;
         this.series = restoredSeries;
-    }
-
-    /** A random stream of this run, to be overwritten by a restored state. */
-    UniformRandomProvider blankStream() {
-        return streams.stream(0);
     }
 
     /** Runs every remaining step. */

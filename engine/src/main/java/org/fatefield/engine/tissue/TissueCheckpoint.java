@@ -13,8 +13,8 @@ import org.fatefield.engine.record.TimeSeries;
  */
 final class TissueCheckpoint {
 
-    /** "FFCKPT02": version 2 added cell volumes. */
-    private static final long MAGIC = 0x4646434b50543032L;
+    /** "FFCKPT03": version 2 added cell volumes, 3 embedded random streams and a 4-byte ancestry. */
+    private static final long MAGIC = 0x4646434b50543033L;
 
     private TissueCheckpoint() {
     }
@@ -54,7 +54,7 @@ final class TissueCheckpoint {
         int n = in.readInt();
         tissue.population().reset(nextId);
         for (int i = 0; i < n; i++) {
-            tissue.population().add(Cell.read(in, tissue.blankStream()));
+            tissue.population().add(Cell.read(in));
         }
         for (MorphogenField f : tissue.fields()) {
             f.read(in);

@@ -42,6 +42,16 @@ final class BenchCommand implements Callable<Integer> {
             + " (0 to skip; default: ${DEFAULT-VALUE})", defaultValue = "0")
     private int memoryCells;
 
+    /** How densely the benchmark tissue is packed. */
+    enum Density {
+        confluent, founders
+    }
+
+    @Option(names = "--density", paramLabel = "KIND", defaultValue = "confluent",
+            description = "cell packing of the measured tissue: confluent (discs packed as in a grown tissue) or"
+                    + " founders (the scenario's founder density); default: ${DEFAULT-VALUE}")
+    private Density density;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
@@ -56,15 +66,18 @@ final class BenchCommand implements Callable<Integer> {
             spec.commandLine().getErr().println("bench needs a scenario with at least one [[coupling]]");
             return FatefieldCommand.INVALID_INPUT;
         }
-        out.printf("Fatefield benchmark, scenario %s, Java %s, %d processors; median of %d timings of %d steps%n",
-                loaded.name(), System.getProperty("java.version"), Runtime.getRuntime().availableProcessors(),
-                repeats, steps);
+        double area = density == Density.confluent ? TissueBenchmark.confluentArea(loaded.tissue())
+                : TissueBenchmark.founderArea(loaded.tissue());
+        out.printf("Fatefield benchmark, scenario %s, Java %s, %d processors; median of %d timings of %d steps;"
+                + " %s packing, %.0f µm² per cell%n", loaded.name(), System.getProperty("java.version"),
+                Runtime.getRuntime().availableProcessors(), repeats, steps, density, area);
         out.printf("%10s %8s %16s %16s %16s %10s %10s%n", "cells", "threads", "full tick /s", "cell loop /s",
                 "bare loop /s", "loop/bare", "speed-up");
         for (int cells : sizes) {
             double single = Double.NaN;
             for (int threads : threadCounts) {
-                TissueBenchmark.Result r = TissueBenchmark.measure(loaded.tissue(), cells, steps, repeats, 1L, threads);
+                TissueBenchmark.Result r = TissueBenchmark.measure(loaded.tissue(), cells, steps, repeats, 1L, threads,
+                        area);
                 if (Double.isNaN(single)) {
                     single = r.tickRate();
                 }
@@ -77,7 +90,7 @@ final class BenchCommand implements Callable<Integer> {
                 + " speed-up is the full tick against the first thread count.");
         if (memoryCells > 0) {
             out.printf("Heap per live cell at %d cells (cells, states, streams, field and buffers): %.0f bytes%n",
-                    memoryCells, TissueBenchmark.bytesPerCell(loaded.tissue(), memoryCells));
+                    memoryCells, TissueBenchmark.bytesPerCell(loaded.tissue(), memoryCells, area));
         }
         if (loaded.tissue().circuit().network() instanceof SelfActivatingSwitch sw) {
             SignalCoupling c = loaded.tissue().mapping().couplings().get(0);

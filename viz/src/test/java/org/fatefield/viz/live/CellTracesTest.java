@@ -6,7 +6,6 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 
 import java.awt.Color;
 import java.util.List;
-import org.apache.commons.rng.simple.RandomSource;
 import org.fatefield.engine.cell.Cell;
 import org.fatefield.viz.palette.FatePalette;
 import org.junit.jupiter.api.Test;
@@ -15,7 +14,7 @@ import org.junit.jupiter.api.Test;
 class CellTracesTest {
 
     private static Cell cell(long id, long parent, double a, double b) {
-        return new Cell(id, parent, 0, 0, 10, new double[] {a, b}, RandomSource.SPLIT_MIX_64.create(1L), 0, 0, 0);
+        return new Cell(id, parent, 0, 0, 10, new double[] {a, b}, new long[] {1L, 2L}, 0, 0, 0);
     }
 
     @Test
