@@ -8,7 +8,9 @@ import org.fatefield.engine.parallel.BlockParallel;
  * implicit along x and explicit along y, then the reverse, each a set of independent tridiagonal
  * systems (Thomas algorithm). Unconditionally stable and second order in time; its fixed point is
  * exactly the steady state of the five-point grid equations. Decay and synthesis are shared
- * equally between the half steps. Peaceman &amp; Rachford (1955), J. Soc. Indust. Appl. Math.
+ * equally between the half steps. Along a periodic y the implicit systems are cyclic tridiagonal,
+ * solved by the Sherman-Morrison correction of the Thomas algorithm (Press, Teukolsky,
+ * Vetterling &amp; Flannery 2007, Numerical Recipes, 3rd ed., section 2.7.2). Peaceman &amp; Rachford (1955), J. Soc. Indust. Appl. Math.
  * 3:28-41; Morton &amp; Mayers (2005), Numerical Solution of Partial Differential Equations, 2nd
  * ed., section 3.8.
  */
@@ -21,8 +23,10 @@ final class AdiSolver {
     private final double h;
     private final double[] half;
     private final double[][] scratch;
+    private final boolean periodicY;
 
-    AdiSolver(int nx, int ny, double diffusion, double decay, double h, int workers) {
+    AdiSolver(int nx, int ny, double diffusion, double decay, double h, int workers, boolean periodicY) {
+        this.periodicY = periodicY;
         this.nx = nx;
         this.ny = ny;
         this.diffusion = diffusion;
@@ -30,7 +34,7 @@ final class AdiSolver {
         this.h = h;
         this.half = new double[nx * ny];
         int longest = Math.max(nx, ny);
-        this.scratch = new double[workers][3 * longest];
+        this.scratch = new double[workers][4 * longest];
     }
 
     /**
@@ -50,8 +54,8 @@ final class AdiSolver {
                 int row = j * nx;
                 for (int i = 0; i < nx; i++) {
                     int k = row + i;
-                    double down = j > 0 ? c[k - nx] : c[k];
-                    double up = j < ny - 1 ? c[k + nx] : c[k];
+                    double down = j > 0 ? c[k - nx] : periodicY ? c[k + (ny - 1) * nx] : c[k];
+                    double up = j < ny - 1 ? c[k + nx] : periodicY ? c[i] : c[k];
                     double cells = cellSource == null ? 0.0 : cellSource[k] - cellUptake[k] * c[k];
                     work[2 * nx + i] = c[k] + r * (down - 2 * c[k] + up) - q * c[k] + 0.5 * tau * (synthesis[k] + cells);
                 }
@@ -73,7 +77,11 @@ final class AdiSolver {
                     work[2 * ny + j] = half[k] + r * (left - 2 * half[k] + right) - q * half[k]
                             + 0.5 * tau * (synthesis[k] + cells);
                 }
-                solve(work, ny, r, q, c, i, nx, 0);
+                if (periodicY) {
+                    solveCyclic(work, ny, r, q, c, i, nx);
+                } else {
+                    solve(work, ny, r, q, c, i, nx, 0);
+                }
             }
         });
     }
@@ -104,6 +112,40 @@ final class AdiSolver {
         for (int m = n - 2; m >= 0; m--) {
             x = work[n + m] - work[m] * x;
             out[offset + m * stride] = x;
+        }
+    }
+
+    /**
+     * Solves {@code (1 + q) x_m - r (x_(m-1) - 2 x_m + x_(m+1)) = d_m} with periodic ends
+     * ({@code x_(-1) = x_(n-1)}, {@code x_n = x_0}), n at least 3: the cyclic matrix is a
+     * tridiagonal T plus the rank-one {@code u v^T}, so {@code x = y - (v.y / (1 + v.z)) z} with
+     * {@code T y = d} and {@code T z = u}. {@code d} sits in {@code work[2n..3n)}, the result goes
+     * to {@code out[offset + m * stride]}.
+     */
+    private static void solveCyclic(double[] work, int n, double r, double q, double[] out, int offset, int stride) {
+        double b = 1 + q + 2 * r;
+        double gamma = -b;
+        double corner = -r;
+        double first = b - gamma;
+        double last = b - corner * corner / gamma;
+        // work[0..n): modified super-diagonal; [n..2n): y; [3n..4n): z.
+        work[0] = -r / first;
+        work[n] = work[2 * n] / first;
+        work[3 * n] = gamma / first;
+        for (int m = 1; m < n; m++) {
+            double denominator = (m == n - 1 ? last : b) + r * work[m - 1];
+            work[m] = -r / denominator;
+            work[n + m] = (work[2 * n + m] + r * work[n + m - 1]) / denominator;
+            work[3 * n + m] = ((m == n - 1 ? corner : 0.0) + r * work[3 * n + m - 1]) / denominator;
+        }
+        for (int m = n - 2; m >= 0; m--) {
+            work[n + m] -= work[m] * work[n + m + 1];
+            work[3 * n + m] -= work[m] * work[3 * n + m + 1];
+        }
+        double factor = (work[n] + corner * work[2 * n - 1] / gamma)
+                / (1 + work[3 * n] + corner * work[4 * n - 1] / gamma);
+        for (int m = 0; m < n; m++) {
+            out[offset + m * stride] = work[n + m] - factor * work[3 * n + m];
         }
     }
 }

@@ -28,6 +28,7 @@ public final class MorphogenField {
     private double[] next;
     private AdiSolver adi;
     private final boolean timeVarying;
+    private final boolean periodicY;
     /** Cells' secretion and uptake per square; null until cells first exchange (saves two grids). */
     private double[] exchangeSource;
     private double[] exchangeUptake;
@@ -41,6 +42,16 @@ public final class MorphogenField {
      *                                  4096 squares per side
      */
     public MorphogenField(MorphogenSpec spec, double width, double height) {
+        this(spec, width, height, false);
+    }
+
+    /**
+     * A field as {@link #MorphogenField(MorphogenSpec, double, double)}; with {@code periodicY}
+     * the field wraps around along y (a strip), which needs a height of a whole number of grid
+     * squares, at least three.
+     */
+    public MorphogenField(MorphogenSpec spec, double width, double height, boolean periodicY) {
+        this.periodicY = periodicY;
         if (!(width > 0) || !(height > 0)) {
             throw new IllegalArgumentException("domain must have positive width and height, got "
                     + width + " x " + height);
@@ -52,6 +63,11 @@ public final class MorphogenField {
         if (nx > 4096 || ny > 4096) {
             throw new IllegalArgumentException("grid of " + nx + " x " + ny
                     + " squares is too fine; raise the grid spacing (at most 4096 squares per side)");
+        }
+        if (periodicY && (ny < 3 || Math.abs(height / h - ny) > 1e-6 * ny)) {
+            throw new IllegalArgumentException("a strip's height (" + height + " µm) must be a whole number of grid"
+                    + " squares (grid spacing " + h + " µm), at least three, so that the field wraps around exactly;"
+                    + " change the height or the grid spacing");
         }
         this.current = new double[nx * ny];
         this.next = new double[nx * ny];
@@ -175,7 +191,7 @@ public final class MorphogenField {
         time += dt;
         if (spec.solver() == MorphogenSpec.Solver.ADI) {
             if (adi == null || adiWorkers < pool.workers()) {
-                adi = new AdiSolver(nx, ny, spec.diffusion(), spec.decay(), h, pool.workers());
+                adi = new AdiSolver(nx, ny, spec.diffusion(), spec.decay(), h, pool.workers(), periodicY);
                 adiWorkers = pool.workers();
             }
             adi.step(current, synthesis, exchangeSource, exchangeUptake, dt, pool, leftFixed(), spec.leftWall().value());
@@ -201,8 +217,8 @@ public final class MorphogenField {
         double[] cellUptake = exchangeUptake;
         for (int j = fromRow; j < toRow; j++) {
             int row = j * nx;
-            int down = j > 0 ? row - nx : row;
-            int up = j < ny - 1 ? row + nx : row;
+            int down = j > 0 ? row - nx : periodicY ? (ny - 1) * nx : row;
+            int up = j < ny - 1 ? row + nx : periodicY ? 0 : row;
             for (int i = 0; i < nx; i++) {
                 int k = row + i;
                 double centre = c[k];
@@ -217,7 +233,7 @@ public final class MorphogenField {
 
     /**
      * Concentration at a point (µm), interpolated bilinearly between grid-square centres and held
-     * constant beyond the outermost centres.
+     * constant beyond the outermost centres (along a periodic y, interpolated across the seam).
      */
     public double sample(double x, double y) {
         double gx = x / h - 0.5;
@@ -228,8 +244,8 @@ public final class MorphogenField {
         double fy = gy - j0;
         int ia = clamp(i0, nx);
         int ib = clamp(i0 + 1, nx);
-        int ja = clamp(j0, ny);
-        int jb = clamp(j0 + 1, ny);
+        int ja = periodicY ? Math.floorMod(j0, ny) : clamp(j0, ny);
+        int jb = periodicY ? Math.floorMod(j0 + 1, ny) : clamp(j0 + 1, ny);
         double bottom = current[ja * nx + ia] * (1 - fx) + current[ja * nx + ib] * fx;
         double top = current[jb * nx + ia] * (1 - fx) + current[jb * nx + ib] * fx;
         return bottom * (1 - fy) + top * fy;
@@ -237,6 +253,18 @@ public final class MorphogenField {
 
     private static int clamp(int index, int size) {
         return index < 0 ? 0 : (index >= size ? size - 1 : index);
+    }
+
+    /**
+     * Sets every grid square to {@code profile(x, y)} at its centre (µm): initial conditions for
+     * numerical studies and tests.
+     */
+    public void fill(java.util.function.DoubleBinaryOperator profile) {
+        for (int j = 0; j < ny; j++) {
+            for (int i = 0; i < nx; i++) {
+                current[j * nx + i] = profile.applyAsDouble((i + 0.5) * h, (j + 0.5) * h);
+            }
+        }
     }
 
     /** Writes the concentrations and the field's clock (checkpoints). */

@@ -6,8 +6,8 @@ import org.fatefield.engine.cell.CellPopulation;
 import org.fatefield.engine.parallel.BlockParallel;
 
 /**
- * Overdamped relaxation of overlapping discs inside a rectangle (or the disc inscribed in it)
- * with walls.
+ * Overdamped relaxation of overlapping discs inside a rectangle with walls, the disc inscribed
+ * in it, or a strip periodic along y (walls at x = 0 and x = width only).
  *
  * <p>Each overlapping pair pushes apart along the line of centres with speed
  * {@code rate * overlap} shared equally; with adhesion, neighbours a little beyond contact pull
@@ -24,7 +24,7 @@ public final class OverlapRepulsion {
     private final double newbornRadius;
     private final double adhesion;
     private final double adhesionRange;
-    private final boolean disc;
+    private final DomainShape shape;
     private double[] px = new double[0];
     private double[] py = new double[0];
     private double[] pr = new double[0];
@@ -40,17 +40,17 @@ public final class OverlapRepulsion {
      * @param newbornRadius radius of a cell of volume 1 in µm (a cell of volume V has radius sqrt(V) times it)
      */
     public OverlapRepulsion(double width, double height, double rate, double newbornRadius) {
-        this(width, height, rate, newbornRadius, 0, 0.2, false);
+        this(width, height, rate, newbornRadius, 0, 0.2, DomainShape.RECTANGLE);
     }
 
     /**
      * @param adhesion      attraction rate (1 / h): speed per µm of gap between neighbours closer than
      *                      contact distance times {@code 1 + adhesionRange}, at least 0
      * @param adhesionRange reach of adhesion beyond contact, as a fraction of the contact distance
-     * @param disc          true to confine cells to the disc inscribed in the rectangle
+     * @param shape         rectangle, the disc inscribed in it, or a strip periodic along y
      */
     public OverlapRepulsion(double width, double height, double rate, double newbornRadius, double adhesion,
-            double adhesionRange, boolean disc) {
+            double adhesionRange, DomainShape shape) {
         if (!(rate >= 0) || Double.isInfinite(rate)) {
             throw new IllegalArgumentException("repulsion rate must be finite and at least 0, got " + rate);
         }
@@ -64,7 +64,7 @@ public final class OverlapRepulsion {
         this.newbornRadius = newbornRadius;
         this.adhesion = adhesion;
         this.adhesionRange = adhesionRange;
-        this.disc = disc;
+        this.shape = shape;
     }
 
     /** Moves every cell by one overdamped step of {@code dt} hours, on the caller's thread. */
@@ -97,12 +97,15 @@ public final class OverlapRepulsion {
         // Buckets at least one interaction range wide, so every neighbour is in the 3 x 3 block around a cell.
         double side = 2.0 * largest * (1 + (adhesion > 0 ? adhesionRange : 0));
         int gx = Math.max(1, (int) Math.ceil(width / side));
-        int gy = Math.max(1, (int) Math.ceil(height / side));
-        fillBuckets(n, gx, gy, side);
+        // Periodic rows must all be at least one range tall, the row across the seam included.
+        int gy = shape == DomainShape.STRIP ? Math.max(1, (int) Math.floor(height / side))
+                : Math.max(1, (int) Math.ceil(height / side));
+        double sideY = shape == DomainShape.STRIP ? height / gy : side;
+        fillBuckets(n, gx, gy, side, sideY);
         double step = 0.5 * dt;
         pool.forEach(n, (from, to, worker) -> {
             for (int i = from; i < to; i++) {
-                move(population.get(i), i, gx, gy, side, step);
+                move(population.get(i), i, gx, gy, side, sideY, step);
             }
         });
     }
@@ -112,12 +115,20 @@ public final class OverlapRepulsion {
      * clamped to the walls. Reads only the snapshot arrays and writes only this cell, so blocks of
      * cells can move in parallel, in any order, with the same result.
      */
-    private void move(Cell cell, int i, int gx, int gy, double side, double step) {
+    private void move(Cell cell, int i, int gx, int gy, double side, double sideY, double step) {
         double fx = 0;
         double fy = 0;
         int bx = bucketOf(px[i], side, gx);
-        int by = bucketOf(py[i], side, gy);
-        for (int cy = Math.max(0, by - 1); cy <= Math.min(gy - 1, by + 1); cy++) {
+        int by = bucketOf(py[i], sideY, gy);
+        boolean periodic = shape == DomainShape.STRIP;
+        int rowFrom = periodic && gy >= 3 ? by - 1 : Math.max(0, by - 1);
+        int rowTo = periodic && gy >= 3 ? by + 1 : Math.min(gy - 1, by + 1);
+        if (periodic && gy < 3) {
+            rowFrom = 0;
+            rowTo = gy - 1;
+        }
+        for (int row = rowFrom; row <= rowTo; row++) {
+            int cy = row < 0 ? row + gy : (row >= gy ? row - gy : row);
             for (int cx = Math.max(0, bx - 1); cx <= Math.min(gx - 1, bx + 1); cx++) {
                 int b = cy * gx + cx;
                 for (int k = bucketStart[b]; k < bucketStart[b + 1]; k++) {
@@ -127,6 +138,10 @@ public final class OverlapRepulsion {
                     }
                     double ex = px[i] - px[j];
                     double ey = py[i] - py[j];
+                    if (periodic) {
+                        // Nearest image across the periodic edge.
+                        ey = ey > 0.5 * height ? ey - height : (ey < -0.5 * height ? ey + height : ey);
+                    }
                     double reach = pr[i] + pr[j];
                     double d2 = ex * ex + ey * ey;
                     if (d2 >= reach * reach) {
@@ -154,8 +169,9 @@ public final class OverlapRepulsion {
         }
         double r = Math.min(pr[i], 0.5 * Math.min(width, height));
         double nxp = Math.min(Math.max(px[i] + step * fx, r), width - r);
-        double nyp = Math.min(Math.max(py[i] + step * fy, r), height - r);
-        if (disc) {
+        double nyp = shape == DomainShape.STRIP ? wrap(py[i] + step * fy, height)
+                : Math.min(Math.max(py[i] + step * fy, r), height - r);
+        if (shape == DomainShape.DISC) {
             double cx = 0.5 * width;
             double cy = 0.5 * height;
             double limit = 0.5 * Math.min(width, height) - r;
@@ -170,7 +186,7 @@ public final class OverlapRepulsion {
         cell.moveTo(nxp, nyp);
     }
 
-    private void fillBuckets(int n, int gx, int gy, double side) {
+    private void fillBuckets(int n, int gx, int gy, double side, double sideY) {
         int buckets = gx * gy;
         if (bucketStart.length < buckets + 1) {
             bucketStart = new int[buckets + 1];
@@ -179,7 +195,7 @@ public final class OverlapRepulsion {
             Arrays.fill(bucketStart, 0, buckets + 1, 0);
         }
         for (int i = 0; i < n; i++) {
-            int b = bucketOf(py[i], side, gy) * gx + bucketOf(px[i], side, gx);
+            int b = bucketOf(py[i], sideY, gy) * gx + bucketOf(px[i], side, gx);
             bucketOfCell[i] = b;
             bucketStart[b + 1]++;
         }
@@ -190,6 +206,12 @@ public final class OverlapRepulsion {
         for (int i = 0; i < n; i++) {
             bucketCells[bucketFill[bucketOfCell[i]]++] = i;
         }
+    }
+
+    /** {@code y} brought into [0, period) by whole periods. */
+    public static double wrap(double y, double period) {
+        double w = y - period * Math.floor(y / period);
+        return w >= period ? 0.0 : w;
     }
 
     private static int bucketOf(double coordinate, double side, int count) {

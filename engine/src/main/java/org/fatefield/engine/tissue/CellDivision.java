@@ -9,6 +9,8 @@ import org.fatefield.engine.division.CellSize;
 import org.fatefield.engine.lineage.Ancestry;
 import org.fatefield.engine.lineage.LineageRecord;
 import org.fatefield.engine.lineage.LineageSink;
+import org.fatefield.engine.mechanics.DomainShape;
+import org.fatefield.engine.mechanics.OverlapRepulsion;
 import org.fatefield.engine.variability.ExtrinsicNoise;
 
 /**
@@ -72,7 +74,8 @@ final class CellDivision {
         double cycle = spec.growth().cycle().sample(birth);
         double r = spec.growth().cellRadius();
         double cx = Math.min(Math.max(x, r), spec.width() - r);
-        double cy = Math.min(Math.max(y, r), spec.height() - r);
+        double cy = spec.growth().shape() == DomainShape.STRIP ? OverlapRepulsion.wrap(y, spec.height())
+                : Math.min(Math.max(y, r), spec.height() - r);
         Cell cell = new Cell(id, mother.id(), mother.generation() + 1, now, cycle, state.clone(), birth.streamWords(),
                 cx, cy, 0.0,
                 volume, volume);

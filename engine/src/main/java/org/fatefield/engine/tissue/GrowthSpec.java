@@ -3,6 +3,7 @@ package org.fatefield.engine.tissue;
 import org.fatefield.engine.division.CellSize;
 import org.fatefield.engine.division.CycleTimeDistribution;
 import org.fatefield.engine.division.Partitioning;
+import org.fatefield.engine.mechanics.DomainShape;
 
 /**
  * Founding population, cell size, mechanics and division.
@@ -17,26 +18,19 @@ import org.fatefield.engine.division.Partitioning;
  * @param dilution      if true, concentrations dilute as the cell's volume grows (volume doubles
  *                      linearly over the cycle); if false, degradation rates are taken to include dilution
  * @param adhesion      attraction rate between near neighbours (1 / h), at least 0
- * @param disc          true to confine cells to the disc inscribed in the domain rectangle
+ * @param shape         where cells live: the rectangle, its inscribed disc, or a strip periodic along y
  * @param size          when cells divide and how unequally they share their volume
  */
 public record GrowthSpec(int initialCells, double cellRadius, double repulsionRate, CycleTimeDistribution cycle,
-        Partitioning partition, DivisionAxis axis, double deathRate, boolean dilution, double adhesion, boolean disc,
-        CellSize size) {
+        Partitioning partition, DivisionAxis axis, double deathRate, boolean dilution, double adhesion,
+        DomainShape shape, CellSize size) {
 
-    /** Timer division into equal halves. */
-    public GrowthSpec(int initialCells, double cellRadius, double repulsionRate, CycleTimeDistribution cycle,
-            Partitioning partition, DivisionAxis axis, double deathRate, boolean dilution, double adhesion,
-            boolean disc) {
-        this(initialCells, cellRadius, repulsionRate, cycle, partition, axis, deathRate, dilution, adhesion, disc,
-                CellSize.FIXED);
-    }
 
     /** Without adhesion, in a rectangle. */
     public GrowthSpec(int initialCells, double cellRadius, double repulsionRate, CycleTimeDistribution cycle,
             Partitioning partition, DivisionAxis axis, double deathRate, boolean dilution) {
-        this(initialCells, cellRadius, repulsionRate, cycle, partition, axis, deathRate, dilution, 0, false,
-                CellSize.FIXED);
+        this(initialCells, cellRadius, repulsionRate, cycle, partition, axis, deathRate, dilution, 0,
+                DomainShape.RECTANGLE, CellSize.FIXED);
     }
 
     /** Direction of the division axis. */
@@ -52,8 +46,8 @@ public record GrowthSpec(int initialCells, double cellRadius, double repulsionRa
     /** Random axis, no death, dilution folded into degradation. */
     public GrowthSpec(int initialCells, double cellRadius, double repulsionRate, CycleTimeDistribution cycle,
             Partitioning partition) {
-        this(initialCells, cellRadius, repulsionRate, cycle, partition, DivisionAxis.RANDOM, 0.0, false, 0, false,
-                CellSize.FIXED);
+        this(initialCells, cellRadius, repulsionRate, cycle, partition, DivisionAxis.RANDOM, 0.0, false, 0,
+                DomainShape.RECTANGLE, CellSize.FIXED);
     }
 
     /** Validates. */
@@ -69,6 +63,9 @@ public record GrowthSpec(int initialCells, double cellRadius, double repulsionRa
         }
         if (!(adhesion >= 0) || Double.isInfinite(adhesion)) {
             throw new IllegalArgumentException("adhesion must be finite and at least 0, got " + adhesion);
+        }
+        if (shape == null) {
+            throw new IllegalArgumentException("domain shape must be given (rectangle, disc or strip)");
         }
         if (size == null) {
             throw new IllegalArgumentException("cell size rules must be given (CellSize.FIXED for timer and equal halves)");

@@ -13,6 +13,7 @@ import org.fatefield.engine.field.MorphogenField;
 import org.fatefield.engine.lineage.Ancestry;
 import org.fatefield.engine.lineage.LineageRecord;
 import org.fatefield.engine.lineage.LineageSink;
+import org.fatefield.engine.mechanics.DomainShape;
 import org.fatefield.engine.mechanics.OverlapRepulsion;
 import org.fatefield.engine.parallel.BlockParallel;
 import org.fatefield.engine.variability.ExtrinsicNoise;
@@ -87,7 +88,8 @@ public final class Tissue extends SimState {
         List<org.fatefield.engine.field.MorphogenSpec> specs = spec.fields();
         fields = new MorphogenField[specs.size()];
         for (int f = 0; f < fields.length; f++) {
-            fields[f] = new MorphogenField(specs.get(f), spec.width(), spec.height());
+            fields[f] = new MorphogenField(specs.get(f), spec.width(), spec.height(),
+                    growth.shape() == DomainShape.STRIP);
         }
         field = fields[0];
         series = new TimeSeries(spec.fates().fateNames());
@@ -107,7 +109,7 @@ public final class Tissue extends SimState {
         }
         signals = new double[threads][fields.length];
         mechanics = new OverlapRepulsion(spec.width(), spec.height(), growth.repulsionRate(), growth.cellRadius(),
-                growth.adhesion(), 0.2, growth.disc());
+                growth.adhesion(), 0.2, growth.shape());
         division = new CellDivision(spec, streams);
         steps = 0;
         ancestry = new Ancestry();
@@ -118,10 +120,11 @@ public final class Tissue extends SimState {
         for (int i = 0; i < growth.initialCells(); i++) {
             double x;
             double y;
+            boolean strip = growth.shape() == DomainShape.STRIP;
             do {
                 x = r + (spec.width() - 2 * r) * placement.nextDouble();
-                y = r + (spec.height() - 2 * r) * placement.nextDouble();
-            } while (growth.disc() && Math.hypot(x - 0.5 * spec.width(), y - 0.5 * spec.height())
+                y = strip ? spec.height() * placement.nextDouble() : r + (spec.height() - 2 * r) * placement.nextDouble();
+            } while (growth.shape() == DomainShape.DISC && Math.hypot(x - 0.5 * spec.width(), y - 0.5 * spec.height())
                     > 0.5 * Math.min(spec.width(), spec.height()) - r);
             long id = population.newId();
             EmbeddedStream.Detached birth = new EmbeddedStream.Detached(streams.seedWords(id));

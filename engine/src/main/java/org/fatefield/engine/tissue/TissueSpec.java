@@ -5,6 +5,7 @@ import org.fatefield.engine.fate.FateClassifier;
 import java.util.List;
 import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.engine.field.MorphogenSpec;
+import org.fatefield.engine.mechanics.DomainShape;
 import org.fatefield.engine.variability.ExtrinsicNoise;
 
 /**
@@ -67,6 +68,19 @@ public record TissueSpec(CircuitSetup circuit, ParameterMapping mapping, Morphog
             throw new IllegalArgumentException("cells of unequal volume (size control " + growth.size().control()
                     + ", volume split cv " + growth.size().splitCv() + ") need Langevin or deterministic circuits: the"
                     + " molecule-count methods assume every newborn has the same volume");
+        }
+        if (growth.shape() == DomainShape.STRIP) {
+            List<MorphogenSpec> all = new java.util.ArrayList<>(others);
+            all.add(morphogen);
+            for (MorphogenSpec field : all) {
+                double squares = height / field.gridSpacing();
+                if (Math.abs(squares - Math.round(squares)) > 1e-6 * squares || Math.round(squares) < 3) {
+                    throw new IllegalArgumentException("a strip's height must be a whole number of morphogen grid"
+                            + " squares, at least three, so the fields wrap around exactly: height " + height
+                            + " µm / grid spacing " + field.gridSpacing() + " µm = " + squares
+                            + "; change tissue.height or the grid spacing");
+                }
+            }
         }
         if (2 * growth.cellRadius() > Math.min(width, height)) {
             throw new IllegalArgumentException("a cell of radius " + growth.cellRadius()

@@ -40,12 +40,37 @@ class OverlapRepulsionTest {
         CellPopulation population = new CellPopulation();
         population.add(cellAt(0, 50, 50));
         population.add(cellAt(1, 55.6, 50));
-        OverlapRepulsion mechanics = new OverlapRepulsion(100, 100, 10.0, 2.5, 4.0, 0.2, false);
+        OverlapRepulsion mechanics = new OverlapRepulsion(100, 100, 10.0, 2.5, 4.0, 0.2, DomainShape.RECTANGLE);
         for (int i = 0; i < 100; i++) {
             mechanics.relax(population, 0.01);
         }
         double gap = population.get(1).x() - population.get(0).x() - 5.0;
         assertEquals(0.6 * Math.pow(1 - 4.0 * 0.01, 100), gap, 1e-9);
+    }
+
+    /**
+     * On a strip two cells 2 µm apart across the seam overlap by 3 µm (radius 2.5), so in one
+     * step each moves 0.5 dt rate overlap = 0.15 µm away from the other, across the seam
+     * (computed by hand); in a rectangle they are 98 µm apart and do not move.
+     */
+    @Test
+    void stripCellsPushAcrossTheSeamAndWrapAround() {
+        CellPopulation strip = new CellPopulation();
+        strip.add(cellAt(0, 50, 1));
+        strip.add(cellAt(1, 50, 99));
+        strip.add(cellAt(2, 20, 0.1));
+        strip.add(cellAt(3, 20, 2.1));
+        new OverlapRepulsion(100, 100, 10.0, 2.5, 0, 0.2, DomainShape.STRIP).relax(strip, 0.01);
+        assertEquals(1.15, strip.get(0).y(), 1e-12);
+        assertEquals(98.85, strip.get(1).y(), 1e-12);
+        assertEquals(99.95, strip.get(2).y(), 1e-12);
+        assertEquals(2.25, strip.get(3).y(), 1e-12);
+        CellPopulation box = new CellPopulation();
+        box.add(cellAt(0, 50, 3));
+        box.add(cellAt(1, 50, 97));
+        new OverlapRepulsion(100, 100, 10.0, 2.5, 0, 0.2, DomainShape.RECTANGLE).relax(box, 0.01);
+        assertEquals(3.0, box.get(0).y(), 0.0);
+        assertEquals(97.0, box.get(1).y(), 0.0);
     }
 
     @Test
@@ -54,7 +79,7 @@ class OverlapRepulsionTest {
         for (int i = 0; i < 200; i++) {
             population.add(cellAt(i, 5 + 0.4 * i, 5 + 0.3 * (i % 17)));
         }
-        OverlapRepulsion mechanics = new OverlapRepulsion(100, 60, 20.0, 1.0, 0, 0.2, true);
+        OverlapRepulsion mechanics = new OverlapRepulsion(100, 60, 20.0, 1.0, 0, 0.2, DomainShape.DISC);
         mechanics.relax(population, 0.01);
         for (Cell c : population.view()) {
             assertTrue(Math.hypot(c.x() - 50, c.y() - 30) <= 30 - 1.0 + 1e-9, c.x() + "," + c.y());

@@ -36,7 +36,8 @@ class SizeControlTest {
     private static List<LineageRecord> grow(SizeControl control) {
         GrowthSpec growth = new GrowthSpec(150, 2, 0,
                 new CycleTimeDistribution(CycleTimeDistribution.Kind.GAMMA, 10, 0.1), Partitioning.equal(),
-                GrowthSpec.DivisionAxis.RANDOM, 0, true, 0, false, new CellSize(control, SPLIT_CV));
+                GrowthSpec.DivisionAxis.RANDOM, 0, true, 0, org.fatefield.engine.mechanics.DomainShape.RECTANGLE,
+                new CellSize(control, SPLIT_CV));
         TissueSpec spec = new TissueSpec(new CircuitSetup(INERT, NoiseMode.NONE, 100, new double[] {1.0}),
                 new ParameterMapping(INERT.defaultParameters(), List.of()), new MorphogenSpec(0, 0, 100, 0, List.of()),
                 2000, 2000, growth,

@@ -281,7 +281,7 @@ final class ScenarioCompiler {
                 new CycleTimeDistribution(kind, values.number(division, "division", "cycle_mean"), cv), partition,
                 GrowthSpec.DivisionAxis.valueOf(values.text(division, "division", "axis").toUpperCase(Locale.ROOT)),
                 values.number(division, "division", "death_rate"), dilution, values.number(tissue, "tissue", "adhesion"),
-                values.text(tissue, "tissue", "shape").equals("disc"), size);
+                org.fatefield.engine.mechanics.DomainShape.valueOf(values.text(tissue, "tissue", "shape").toUpperCase(Locale.ROOT)), size);
     }
 
 }

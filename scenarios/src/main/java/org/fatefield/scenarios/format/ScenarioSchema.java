@@ -75,9 +75,11 @@ public final class ScenarioSchema {
                             "overlap relaxation rate: speed (µm/h) per µm of overlap; keep repulsion * step below 0.2"),
                     Key.nonNegative("adhesion", "1/h", "0",
                             "attraction between neighbours up to 20% beyond contact: speed (µm/h) per µm of gap"),
-                    Key.choice("shape", "rectangle", List.of("rectangle", "disc"),
-                            "where cells live: the width x height rectangle, or the disc inscribed in it (the fields"
-                                    + " cover the whole rectangle)")),
+                    Key.choice("shape", "rectangle", List.of("rectangle", "disc", "strip"),
+                            "where cells live: the width x height rectangle; the disc inscribed in it (the fields"
+                                    + " cover the whole rectangle); or a strip, the rectangle made periodic along y (cells"
+                                    + " and fields leaving at the top re-enter at the bottom: a tissue without lateral"
+                                    + " edges; walls at x = 0 and x = width only)")),
                     "the domain (a rectangle with walls) and its founder cells"),
             new Section("division", false, false, List.of(
                     Key.choice("cycle", "gamma", List.of("fixed", "gamma", "lognormal"), "cycle-time distribution"),

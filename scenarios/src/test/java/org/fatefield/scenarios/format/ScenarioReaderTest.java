@@ -53,6 +53,22 @@ class ScenarioReaderTest {
     }
 
     @Test
+    void aStripRunsAndItsHeightMustFitTheGrid() throws ScenarioException {
+        String text = demo().replace("repulsion = 20.0", "repulsion = 20.0\nshape = \"strip\"")
+                .replace("duration = 48.0", "duration = 2.0");
+        Scenario scenario = ScenarioReader.parse("test", "test.toml", text.getBytes(StandardCharsets.UTF_8));
+        org.fatefield.engine.tissue.Tissue tissue = new org.fatefield.engine.tissue.Tissue(scenario.tissue(), 3);
+        tissue.start();
+        tissue.runToEnd();
+        for (org.fatefield.engine.cell.Cell c : tissue.cells()) {
+            assertTrue(c.y() >= 0 && c.y() < 300, "y = " + c.y());
+        }
+        tissue.finish();
+        Problem p = problems(text.replace("height = 300.0", "height = 305.0")).get(0);
+        assertTrue(p.message().contains("whole number of morphogen grid squares"), p.message());
+    }
+
+    @Test
     void unequalVolumesWithMoleculeCountsAreRefused() {
         String text = demo().replace("partition = \"binomial\"", "volume_split_cv = 0.1")
                 .replace("noise = \"langevin\"", "noise = \"exact\"");
