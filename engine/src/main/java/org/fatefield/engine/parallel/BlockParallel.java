@@ -6,13 +6,17 @@ import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
+import java.util.concurrent.atomic.AtomicInteger;
 
 /**
- * Runs a loop over {@code [0, n)} in contiguous blocks, one per worker, on a fixed set of
- * daemon threads. Work is split by index only, never by timing, and each worker has its own index
- * (for its own scratch buffers), so a loop whose iterations touch disjoint data and draw from
- * per-item random streams gives the same result for any number of workers. (MASON 18's
- * ParallelSequence is not used: it skips the last {@code size % threads} agents.)
+ * Runs a loop over {@code [0, n)} in contiguous chunks on the calling thread and a fixed set of
+ * daemon threads. The chunks are fixed by index only (about {@value #CHUNKS_PER_WORKER} per
+ * worker) and handed out to whichever worker is free, so a worker slowed by the garbage
+ * collector or another process does not hold the others up; each worker has its own index (for
+ * its own scratch buffers, which must not carry anything from one iteration to the next). A loop
+ * whose iterations touch disjoint data and draw from per-item random streams therefore gives the
+ * same result for any number of workers. (MASON 18's ParallelSequence is not used: it skips the
+ * last {@code size % threads} agents.)
  */
 public final class BlockParallel implements AutoCloseable {
 
@@ -23,16 +27,19 @@ public final class BlockParallel implements AutoCloseable {
         void run(int from, int to, int worker);
     }
 
+    /** Chunks per worker: enough to even out uneven chunks, few enough that handing them out is cheap. */
+    static final int CHUNKS_PER_WORKER = 8;
+
     private final int workers;
     private final ExecutorService executor;
 
-    /** A pool of {@code workers} threads (1 runs everything on the caller's thread). */
+    /** {@code workers} workers: the caller's thread and {@code workers - 1} pool threads. */
     public BlockParallel(int workers) {
         if (workers < 1) {
             throw new IllegalArgumentException("threads must be at least 1, got " + workers);
         }
         this.workers = workers;
-        this.executor = workers == 1 ? null : Executors.newFixedThreadPool(workers, runnable -> {
+        this.executor = workers == 1 ? null : Executors.newFixedThreadPool(workers - 1, runnable -> {
             Thread thread = new Thread(runnable, "fatefield-worker");
             thread.setDaemon(true);
             return thread;
@@ -44,18 +51,25 @@ public final class BlockParallel implements AutoCloseable {
         return workers;
     }
 
-    /** Runs {@code block} over {@code [0, n)} split into at most {@link #workers()} blocks, and waits. */
+    /** Runs {@code block} over {@code [0, n)} in chunks spread over the workers, and waits for all. */
     public void forEach(int n, Block block) {
         if (executor == null || n < 2 * workers) {
             block.run(0, n, 0);
             return;
         }
-        List<Future<?>> futures = new ArrayList<>(workers);
-        for (int w = 0; w < workers; w++) {
-            int from = (int) ((long) n * w / workers);
-            int to = (int) ((long) n * (w + 1) / workers);
+        int chunks = Math.min(n, workers * CHUNKS_PER_WORKER);
+        AtomicInteger next = new AtomicInteger();
+        List<Future<?>> futures = new ArrayList<>(workers - 1);
+        for (int w = 1; w < workers; w++) {
             int worker = w;
-            futures.add(executor.submit(() -> block.run(from, to, worker)));
+            futures.add(executor.submit(() -> drain(n, chunks, next, block, worker)));
+        }
+        RuntimeException failure = null;
+        try {
+            drain(n, chunks, next, block, 0);
+        } catch (RuntimeException e) {
+            failure = e;
+            next.set(chunks);
         }
         for (Future<?> future : futures) {
             try {
@@ -65,11 +79,22 @@ public final class BlockParallel implements AutoCloseable {
                 throw new IllegalStateException("interrupted while stepping cells", e);
             } catch (ExecutionException e) {
                 Throwable cause = e.getCause();
-                if (cause instanceof RuntimeException runtime) {
-                    throw runtime;
+                if (failure == null) {
+                    failure = cause instanceof RuntimeException runtime ? runtime : new IllegalStateException(cause);
                 }
-                throw new IllegalStateException(cause);
             }
+        }
+        if (failure != null) {
+            throw failure;
+        }
+    }
+
+    /** Takes chunks until none is left. */
+    private static void drain(int n, int chunks, AtomicInteger next, Block block, int worker) {
+        for (int c = next.getAndIncrement(); c < chunks; c = next.getAndIncrement()) {
+            int from = (int) ((long) n * c / chunks);
+            int to = (int) ((long) n * (c + 1) / chunks);
+            block.run(from, to, worker);
         }
     }
 
