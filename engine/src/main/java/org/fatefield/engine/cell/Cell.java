@@ -23,8 +23,6 @@ public final class Cell extends EmbeddedStream {
     private final double[] state;
     private double x;
     private double y;
-    private double age;
-    private double signal;
     private final double birthVolume;
     private double volume;
     private int fate = -1;
@@ -44,21 +42,20 @@ public final class Cell extends EmbeddedStream {
      * @param stream     the two state words of the cell's own random stream (see RandomStreams.seedWords)
      * @param x          position (µm)
      * @param y          position (µm)
-     * @param age        time since birth (h); founders start part-way through their cycle
      */
     public Cell(long id, long parentId, int generation, double birthTime, double cycleTime, double[] state,
-            long[] stream, double x, double y, double age) {
-        this(id, parentId, generation, birthTime, cycleTime, state, stream, x, y, age, 1.0,
-                SizeControl.TIMER.volume(1.0, age, cycleTime));
+            long[] stream, double x, double y) {
+        this(id, parentId, generation, birthTime, cycleTime, state, stream, x, y, 1.0, 1.0);
     }
 
     /**
      * A cell of a given size: as {@link #Cell(long, long, int, double, double, double[],
-     * long[], double, double, double)}, with {@code birthVolume} and the current
-     * {@code volume} in units of a mean newborn cell, both greater than 0.
+     * long[], double, double)}, with {@code birthVolume} and the current {@code volume} in units
+     * of a mean newborn cell, both greater than 0. A founder is born before time 0 (a negative
+     * birth time) so that it starts part-way through its cycle.
      */
     public Cell(long id, long parentId, int generation, double birthTime, double cycleTime, double[] state,
-            long[] stream, double x, double y, double age, double birthVolume, double volume) {
+            long[] stream, double x, double y, double birthVolume, double volume) {
         super(stream);
         if (!(birthVolume > 0) || !(volume > 0)) {
             throw new IllegalArgumentException("cell " + id + ": volumes must be greater than 0, got birth volume "
@@ -74,7 +71,6 @@ public final class Cell extends EmbeddedStream {
         this.state = state;
         this.x = x;
         this.y = y;
-        this.age = age;
         this.birthX = x;
         this.birthY = y;
     }
@@ -94,8 +90,6 @@ public final class Cell extends EmbeddedStream {
         out.writeLong(streamWord1());
         out.writeDouble(x);
         out.writeDouble(y);
-        out.writeDouble(age);
-        out.writeDouble(signal);
         out.writeDouble(birthVolume);
         out.writeDouble(volume);
         out.writeInt(fate);
@@ -116,8 +110,6 @@ public final class Cell extends EmbeddedStream {
         long[] stream = {in.readLong(), in.readLong()};
         double x = in.readDouble();
         double y = in.readDouble();
-        double age = in.readDouble();
-        double signal = in.readDouble();
         double birthVolume = in.readDouble();
         double volume = in.readDouble();
         int fate = in.readInt();
@@ -125,12 +117,10 @@ public final class Cell extends EmbeddedStream {
         double birthX = in.readDouble();
         double birthY = in.readDouble();
         double[] scores = readArray(in);
-        Cell cell = new Cell(id, parentId, generation, birthTime, cycleTime, state, stream, birthX, birthY, 0.0,
+        Cell cell = new Cell(id, parentId, generation, birthTime, cycleTime, state, stream, birthX, birthY,
                 birthVolume, volume);
         cell.x = x;
         cell.y = y;
-        cell.age = age;
-        cell.signal = signal;
         cell.fate = fate;
         cell.fateSince = fateSince;
         cell.scores = scores.length == 0 ? NO_SCORES : scores;
@@ -187,14 +177,9 @@ public final class Cell extends EmbeddedStream {
         return y;
     }
 
-    /** Time since birth (h). */
-    public double age() {
-        return age;
-    }
-
-    /** Morphogen level at the cell, as last read. */
-    public double signal() {
-        return signal;
+    /** Time since birth (h) at time {@code now} (h). */
+    public double age(double now) {
+        return now - birthTime;
     }
 
     /** Fate index, as last classified. */
@@ -247,14 +232,13 @@ public final class Cell extends EmbeddedStream {
     }
 
     /**
-     * Ages the cell by {@code dt} hours and grows its volume by {@code control}'s law; with
+     * Grows the cell's volume to its size at time {@code now} (h) by {@code control}'s law; with
      * {@code dilute}, the concentrations scale by {@code V(before) / V(after)}, exactly the
-     * dilution the growth causes over the step.
+     * dilution the growth causes since the last call.
      */
-    public void grow(double dt, SizeControl control, boolean dilute) {
+    public void grow(double now, SizeControl control, boolean dilute) {
         double before = volume;
-        age += dt;
-        volume = control.volume(birthVolume, age, cycleTime);
+        volume = control.volume(birthVolume, now - birthTime, cycleTime);
         if (dilute) {
             double factor = before / volume;
             for (int i = 0; i < state.length; i++) {
@@ -263,14 +247,9 @@ public final class Cell extends EmbeddedStream {
         }
     }
 
-    /** True once the cell should divide under {@code control}. */
-    public boolean readyToDivide(SizeControl control) {
-        return control.ready(birthVolume, volume, age, cycleTime);
-    }
-
-    /** Records the morphogen level read at the cell. */
-    public void setSignal(double value) {
-        this.signal = value;
+    /** True once the cell should divide under {@code control} at time {@code now} (h). */
+    public boolean readyToDivide(SizeControl control, double now) {
+        return control.ready(birthVolume, volume, now - birthTime, cycleTime);
     }
 
     /** Records the cell's fate index at time {@code now}; notes when it last changed. */

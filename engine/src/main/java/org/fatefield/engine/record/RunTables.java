@@ -82,8 +82,9 @@ public final class RunTables {
             for (int i = 0; i < species.size(); i++) {
                 values.add(Long.toString(Math.round(cell.concentration(i) * omega)));
             }
-            values.add(number(cell.signal()));
-            values.add(number(spec.mapping().controlAt(cell.signal())));
+            double signal = tissue.signalAt(cell);
+            values.add(number(signal));
+            values.add(number(spec.mapping().controlAt(signal)));
             values.add(fateNames.get(cell.fate()));
             printer.printRecord(values);
         }

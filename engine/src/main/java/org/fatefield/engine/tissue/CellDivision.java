@@ -40,7 +40,7 @@ final class CellDivision {
         int n = population.size();
         for (int i = 0; i < n; i++) {
             Cell mother = population.get(i);
-            if (!mother.readyToDivide(size.control())) {
+            if (!mother.readyToDivide(size.control(), now)) {
                 continue;
             }
             lineage.accept(new LineageRecord(mother.id(), mother.parentId(), mother.generation(), mother.birthTime(),
@@ -77,9 +77,7 @@ final class CellDivision {
         double cy = spec.growth().shape() == DomainShape.STRIP ? OverlapRepulsion.wrap(y, spec.height())
                 : Math.min(Math.max(y, r), spec.height() - r);
         Cell cell = new Cell(id, mother.id(), mother.generation() + 1, now, cycle, state.clone(), birth.streamWords(),
-                cx, cy, 0.0,
-                volume, volume);
-        cell.setSignal(mother.signal());
+                cx, cy, volume, volume);
         cell.setFate(mother.fate(), mother.fateSince());
         if (!spec.extrinsic().isEmpty()) {
             cell.setScores(ExtrinsicNoise.daughterScores(spec.extrinsic(), mother.scores(), cell.random()));

@@ -130,8 +130,8 @@ public final class Tissue extends SimState {
             EmbeddedStream.Detached birth = new EmbeddedStream.Detached(streams.seedWords(id));
             double cycle = growth.cycle().sample(birth);
             double age = cycle * birth.nextDouble();
-            Cell founder = new Cell(id, -1, 0, -age, cycle, circuit.initialState(), birth.streamWords(), x, y, age,
-                    1.0, growth.size().control().volume(1.0, age, cycle));
+            Cell founder = new Cell(id, -1, 0, -age, cycle, circuit.initialState(), birth.streamWords(), x, y, 1.0,
+                    growth.size().control().volume(1.0, age, cycle));
             if (!spec.extrinsic().isEmpty()) {
                 founder.setScores(ExtrinsicNoise.founderScores(spec.extrinsic(), founder.random()));
             }
@@ -152,7 +152,7 @@ public final class Tissue extends SimState {
             }
             f.advance(dt, pool);
         }
-        stepCells(dt);
+        stepCells(dt, (steps + 1) * dt);
         steps++;
         division.divideReady(population, ancestry, lineage, time());
         if (spec.growth().deathRate() > 0) {
@@ -171,13 +171,12 @@ public final class Tissue extends SimState {
      * The cell loop: each cell reads every field at its position, sets its parameters from them
      * (and its extrinsic factors), advances its circuit, dilutes and ages.
      */
-    private void stepCells(double dt) {
+    private void stepCells(double dt, double end) {
         ParameterMapping mapping = spec.mapping();
         CellPopulation cells = population;
         boolean dilute = spec.growth().dilution();
         SizeControl size = spec.growth().size().control();
         List<ExtrinsicNoise> extrinsic = spec.extrinsic();
-        int control = mapping.controlField();
         pool.forEach(cells.size(), (from, to, worker) -> {
             CircuitStepper circuit = steppers[worker];
             double[] p = params[worker];
@@ -187,7 +186,6 @@ public final class Tissue extends SimState {
                 for (int f = 0; f < fields.length; f++) {
                     levels[f] = fields[f].sample(cell.x(), cell.y());
                 }
-                cell.setSignal(levels[control]);
                 if (!extrinsic.isEmpty()) {
                     restoreNoisy(p);
                 }
@@ -196,7 +194,7 @@ public final class Tissue extends SimState {
                     extrinsic.get(k).apply(cell.scores()[k], p);
                 }
                 circuit.advance(cell.liveState(), p, dt, cell.random());
-                cell.grow(dt, size, dilute);
+                cell.grow(end, size, dilute);
             }
         });
     }
@@ -230,7 +228,6 @@ public final class Tissue extends SimState {
     private void record() {
         int[] counts = new int[spec.fates().fateCount()];
         for (Cell cell : population.view()) {
-            cell.setSignal(controlField().sample(cell.x(), cell.y()));
             int fate = spec.fates().classify(cell.liveState());
             cell.setFate(fate, time());
             counts[fate]++;
@@ -243,7 +240,7 @@ public final class Tissue extends SimState {
      * division: for benchmarks that separate the cell loop from the rest of the tick.
      */
     public void stepCellsOnly() {
-        stepCells(spec.timing().step());
+        stepCells(spec.timing().step(), time() + spec.timing().step());
     }
 
     /**
@@ -349,6 +346,11 @@ public final class Tissue extends SimState {
     /** Every field, the primary morphogen first. */
     public List<MorphogenField> fields() {
         return List.of(fields);
+    }
+
+    /** The level of the control field (the one the first coupling reads) at {@code cell} now. */
+    public double signalAt(Cell cell) {
+        return controlField().sample(cell.x(), cell.y());
     }
 
     /** The field the control parameter (the first coupling) reads. */

@@ -13,8 +13,11 @@ import org.fatefield.engine.record.TimeSeries;
  */
 final class TissueCheckpoint {
 
-    /** "FFCKPT03": version 2 added cell volumes, 3 embedded random streams and a 4-byte ancestry. */
-    private static final long MAGIC = 0x4646434b50543033L;
+    /**
+     * "FFCKPT04": version 2 added cell volumes; 3 embedded random streams and a 4-byte ancestry;
+     * 4 dropped the cells' age and signal (derived from the clock and the field).
+     */
+    private static final long MAGIC = 0x4646434b50543034L;
 
     private TissueCheckpoint() {
     }

@@ -93,7 +93,7 @@ class GrowthOptionsTest {
         int checked = 0;
         for (Cell cell : tissue.cells()) {
             if (cell.generation() == 0) {
-                double a0 = cell.age() - duration;
+                double a0 = cell.age(duration) - duration;
                 assertEquals((cycle + a0) / (cycle + a0 + duration), cell.concentration(0), 1e-9);
                 checked++;
             }

@@ -99,7 +99,7 @@ final class LiveCharts {
         int step = Math.max(1, tissue.cells().size() / 2000);
         for (int i = 0; i < tissue.cells().size(); i += step) {
             Cell c = tissue.cells().get(i);
-            cells.add(tissue.spec().mapping().controlAt(c.signal()), c.concentration(0), false);
+            cells.add(tissue.spec().mapping().controlAt(tissue.signalAt(c)), c.concentration(0), false);
         }
         cells.fireSeriesChanged();
     }

@@ -247,7 +247,7 @@ public final class TissueWindow extends JFrame {
     private void landscapeForSelection() {
         Cell c = gui.selected();
         if (c != null) {
-            showLandscape(gui.tissue().spec().mapping().controlAt(c.signal()));
+            showLandscape(gui.tissue().spec().mapping().controlAt(gui.tissue().signalAt(c)));
         }
     }
 
@@ -295,13 +295,13 @@ public final class TissueWindow extends JFrame {
         StringBuilder s = new StringBuilder();
         s.append(String.format(Locale.ROOT, "cell %d, generation %d, mother %d, founder %d%n", c.id(), c.generation(),
                 c.parentId(), t.ancestry().founder(c.id())));
-        s.append(String.format(Locale.ROOT, "at (%.1f, %.1f) µm, age %.2f h of %.2f h%n", c.x(), c.y(), c.age(),
+        s.append(String.format(Locale.ROOT, "at (%.1f, %.1f) µm, age %.2f h of %.2f h%n", c.x(), c.y(), c.age(t.time()),
                 c.cycleTime()));
         for (int i = 0; i < species.size(); i++) {
             s.append(String.format(Locale.ROOT, "%s = %.3f%n", species.get(i), c.concentration(i)));
         }
-        s.append(String.format(Locale.ROOT, "morphogen %.3f, %s = %.3f%n", c.signal(), parameter,
-                t.spec().mapping().controlAt(c.signal())));
+        s.append(String.format(Locale.ROOT, "morphogen %.3f, %s = %.3f%n", t.signalAt(c), parameter,
+                t.spec().mapping().controlAt(t.signalAt(c))));
         var extrinsic = t.spec().extrinsic();
         for (int k = 0; k < extrinsic.size(); k++) {
             s.append(String.format(Locale.ROOT, "own %s: × %.3f (inherited)%n", extrinsic.get(k).label(),
