@@ -127,6 +127,23 @@ public final class Cell extends EmbeddedStream {
         return cell;
     }
 
+    /**
+     * An identical cell in a new object, its state array allocated right after it (its random
+     * stream continues from where this one's is). Copying the population in stepping order lays
+     * the cells out in memory in that order, so the cell loop reads memory sequentially instead
+     * of missing the cache on every cell.
+     */
+    public Cell relocated() {
+        Cell cell = new Cell(id, parentId, generation, birthTime, cycleTime, state.clone(), streamWords(), birthX,
+                birthY, birthVolume, volume);
+        cell.x = x;
+        cell.y = y;
+        cell.fate = fate;
+        cell.fateSince = fateSince;
+        cell.scores = scores.length == 0 ? NO_SCORES : scores.clone();
+        return cell;
+    }
+
     private static void writeArray(java.io.DataOutputStream out, double[] values) throws java.io.IOException {
         out.writeInt(values.length);
         for (double v : values) {

@@ -88,6 +88,16 @@ public final class CellPopulation {
         }
     }
 
+    /**
+     * Replaces every cell by a {@link Cell#relocated()} copy, in order, so that memory order
+     * follows stepping order (until the garbage collector moves them, which keeps the order).
+     */
+    public void relocateInOrder() {
+        for (int i = 0; i < cells.size(); i++) {
+            cells.set(i, cells.get(i).relocated());
+        }
+    }
+
     /** Read-only view of the live cells, in order. */
     public List<Cell> view() {
         return Collections.unmodifiableList(cells);

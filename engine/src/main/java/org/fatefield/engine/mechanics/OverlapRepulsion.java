@@ -221,7 +221,7 @@ public final class OverlapRepulsion {
 
     private void ensureCapacity(int n) {
         if (px.length < n) {
-            int size = Math.max(n, 2 * px.length);
+            int size = Math.max(n, px.length + px.length / 4);
             px = new double[size];
             py = new double[size];
             pr = new double[size];

@@ -39,6 +39,8 @@ public final class Tissue extends SimState {
     private static final long PLACEMENT_STREAM = -1L;
     /** Steps between spatial reorderings of the population (for memory locality). */
     private static final int REORDER_EVERY = 10;
+    /** Steps between relocations of the cells in memory in stepping order (see CellPopulation). */
+    private static final int RELOCATE_EVERY = 100;
 
     private final TissueSpec spec;
     private final RandomStreams streams;
@@ -139,6 +141,7 @@ public final class Tissue extends SimState {
             ancestry.add(id, -1);
         }
         population.sortByBlock(blockSide, spec.width(), spec.height());
+        population.relocateInOrder();
         record();
         schedule.scheduleRepeating(Schedule.EPOCH, 0, new TissueTick(this), 1.0);
     }
@@ -161,6 +164,9 @@ public final class Tissue extends SimState {
         mechanics.relax(population, dt, pool);
         if (steps % REORDER_EVERY == 0) {
             population.sortByBlock(blockSide, spec.width(), spec.height());
+        }
+        if (steps % RELOCATE_EVERY == 0) {
+            population.relocateInOrder();
         }
         if (steps % spec.timing().stepsPerRecord() == 0 || steps == spec.timing().totalSteps()) {
             record();
