@@ -25,13 +25,15 @@ public final class OverlapRepulsion {
     private final double adhesion;
     private final double adhesionRange;
     private final DomainShape shape;
-    private double[] px = new double[0];
-    private double[] py = new double[0];
-    private double[] pr = new double[0];
-    private int[] bucketStart = new int[0];
-    private int[] bucketCells = new int[0];
+    /** Positions and radii in bucket order (slot order), so that a bucket row is read contiguously. */
+    private double[] sx = new double[0];
+    private double[] sy = new double[0];
+    private double[] sr = new double[0];
+    private int[] slotOfCell = new int[0];
     private int[] bucketOfCell = new int[0];
+    private int[] bucketStart = new int[0];
     private int[] bucketFill = new int[0];
+    private double[] largestOfWorker = new double[0];
 
     /**
      * @param width         domain width (µm)
@@ -81,18 +83,18 @@ public final class OverlapRepulsion {
      */
     public void relax(CellPopulation population, double dt, BlockParallel pool) {
         int n = population.size();
-        ensureCapacity(n);
+        ensureCapacity(n, pool.workers());
+        java.util.Arrays.fill(largestOfWorker, Math.sqrt(2.0) * newbornRadius);
         pool.forEach(n, (from, to, worker) -> {
+            double largest = largestOfWorker[worker];
             for (int i = from; i < to; i++) {
-                Cell c = population.get(i);
-                px[i] = c.x();
-                py[i] = c.y();
-                pr[i] = c.radius(newbornRadius);
+                largest = Math.max(largest, population.get(i).radius(newbornRadius));
             }
+            largestOfWorker[worker] = largest;
         });
-        double largest = Math.sqrt(2.0) * newbornRadius;
-        for (int i = 0; i < n; i++) {
-            largest = Math.max(largest, pr[i]);
+        double largest = 0;
+        for (double value : largestOfWorker) {
+            largest = Math.max(largest, value);
         }
         // Buckets at least one interaction range wide, so every neighbour is in the 3 x 3 block around a cell.
         double side = 2.0 * largest * (1 + (adhesion > 0 ? adhesionRange : 0));
@@ -101,25 +103,43 @@ public final class OverlapRepulsion {
         int gy = shape == DomainShape.STRIP ? Math.max(1, (int) Math.floor(height / side))
                 : Math.max(1, (int) Math.ceil(height / side));
         double sideY = shape == DomainShape.STRIP ? height / gy : side;
-        fillBuckets(n, gx, gy, side, sideY);
+        pool.forEach(n, (from, to, worker) -> {
+            for (int i = from; i < to; i++) {
+                Cell c = population.get(i);
+                bucketOfCell[i] = bucketOf(c.y(), sideY, gy) * gx + bucketOf(c.x(), side, gx);
+            }
+        });
+        assignSlots(n, gx * gy);
+        pool.forEach(n, (from, to, worker) -> {
+            for (int i = from; i < to; i++) {
+                Cell c = population.get(i);
+                int slot = slotOfCell[i];
+                sx[slot] = c.x();
+                sy[slot] = c.y();
+                sr[slot] = c.radius(newbornRadius);
+            }
+        });
         double step = 0.5 * dt;
         pool.forEach(n, (from, to, worker) -> {
             for (int i = from; i < to; i++) {
-                move(population.get(i), i, gx, gy, side, sideY, step);
+                move(population.get(i), slotOfCell[i], gx, gy, side, sideY, step);
             }
         });
     }
 
     /**
-     * Moves cell {@code i} by one step of the net force of its neighbours in the snapshot,
-     * clamped to the walls. Reads only the snapshot arrays and writes only this cell, so blocks of
-     * cells can move in parallel, in any order, with the same result.
+     * Moves the cell in slot {@code self} by one step of the net force of its neighbours in the
+     * snapshot, clamped to the walls. Reads only the snapshot arrays and writes only this cell, so
+     * blocks of cells can move in parallel, in any order, with the same result.
      */
-    private void move(Cell cell, int i, int gx, int gy, double side, double sideY, double step) {
+    private void move(Cell cell, int self, int gx, int gy, double side, double sideY, double step) {
+        double x = sx[self];
+        double y = sy[self];
+        double radius = sr[self];
         double fx = 0;
         double fy = 0;
-        int bx = bucketOf(px[i], side, gx);
-        int by = bucketOf(py[i], sideY, gy);
+        int bx = bucketOf(x, side, gx);
+        int by = bucketOf(y, sideY, gy);
         boolean periodic = shape == DomainShape.STRIP;
         int rowFrom = periodic && gy >= 3 ? by - 1 : Math.max(0, by - 1);
         int rowTo = periodic && gy >= 3 ? by + 1 : Math.min(gy - 1, by + 1);
@@ -127,50 +147,49 @@ public final class OverlapRepulsion {
             rowFrom = 0;
             rowTo = gy - 1;
         }
+        int columnFrom = Math.max(0, bx - 1);
+        int columnTo = Math.min(gx - 1, bx + 1);
         for (int row = rowFrom; row <= rowTo; row++) {
             int cy = row < 0 ? row + gy : (row >= gy ? row - gy : row);
-            for (int cx = Math.max(0, bx - 1); cx <= Math.min(gx - 1, bx + 1); cx++) {
-                int b = cy * gx + cx;
-                for (int k = bucketStart[b]; k < bucketStart[b + 1]; k++) {
-                    int j = bucketCells[k];
-                    if (j == i) {
-                        continue;
+            // The three buckets of a row are consecutive slots.
+            int end = bucketStart[cy * gx + columnTo + 1];
+            for (int k = bucketStart[cy * gx + columnFrom]; k < end; k++) {
+                if (k == self) {
+                    continue;
+                }
+                double ex = x - sx[k];
+                double ey = y - sy[k];
+                if (periodic) {
+                    // Nearest image across the periodic edge.
+                    ey = ey > 0.5 * height ? ey - height : (ey < -0.5 * height ? ey + height : ey);
+                }
+                double reach = radius + sr[k];
+                double d2 = ex * ex + ey * ey;
+                if (d2 >= reach * reach) {
+                    double far = reach * (1 + adhesionRange);
+                    if (adhesion > 0 && d2 < far * far) {
+                        // Adhesion pulls neighbours within reach back towards contact.
+                        double d = Math.sqrt(d2);
+                        double pull = adhesion * (d - reach) / d;
+                        fx -= ex * pull;
+                        fy -= ey * pull;
                     }
-                    double ex = px[i] - px[j];
-                    double ey = py[i] - py[j];
-                    if (periodic) {
-                        // Nearest image across the periodic edge.
-                        ey = ey > 0.5 * height ? ey - height : (ey < -0.5 * height ? ey + height : ey);
-                    }
-                    double reach = pr[i] + pr[j];
-                    double d2 = ex * ex + ey * ey;
-                    if (d2 >= reach * reach) {
-                        double far = reach * (1 + adhesionRange);
-                        if (adhesion > 0 && d2 < far * far) {
-                            // Adhesion pulls neighbours within reach back towards contact.
-                            double d = Math.sqrt(d2);
-                            double pull = adhesion * (d - reach) / d;
-                            fx -= ex * pull;
-                            fy -= ey * pull;
-                        }
-                        continue;
-                    }
-                    double d = Math.sqrt(d2);
-                    if (d > 1e-12) {
-                        double push = rate * (reach - d) / d;
-                        fx += ex * push;
-                        fy += ey * push;
-                    } else {
-                        // Coincident centres: separate along x by index order, deterministically.
-                        fx += rate * (i < j ? -reach : reach);
-                    }
+                    continue;
+                }
+                double d = Math.sqrt(d2);
+                if (d > 1e-12) {
+                    double push = rate * (reach - d) / d;
+                    fx += ex * push;
+                    fy += ey * push;
+                } else {
+                    // Coincident centres: separate along x by slot order, deterministically.
+                    fx += rate * (self < k ? -reach : reach);
                 }
             }
         }
-        double r = Math.min(pr[i], 0.5 * Math.min(width, height));
-        double nxp = Math.min(Math.max(px[i] + step * fx, r), width - r);
-        double nyp = shape == DomainShape.STRIP ? wrap(py[i] + step * fy, height)
-                : Math.min(Math.max(py[i] + step * fy, r), height - r);
+        double r = Math.min(radius, 0.5 * Math.min(width, height));
+        double nxp = Math.min(Math.max(x + step * fx, r), width - r);
+        double nyp = periodic ? wrap(y + step * fy, height) : Math.min(Math.max(y + step * fy, r), height - r);
         if (shape == DomainShape.DISC) {
             double cx = 0.5 * width;
             double cy = 0.5 * height;
@@ -186,8 +205,11 @@ public final class OverlapRepulsion {
         cell.moveTo(nxp, nyp);
     }
 
-    private void fillBuckets(int n, int gx, int gy, double side, double sideY) {
-        int buckets = gx * gy;
+    /**
+     * Counts the cells per bucket and gives each cell a slot, buckets in row-major order and
+     * cells in population order within a bucket (a counting sort: linear and deterministic).
+     */
+    private void assignSlots(int n, int buckets) {
         if (bucketStart.length < buckets + 1) {
             bucketStart = new int[buckets + 1];
             bucketFill = new int[buckets];
@@ -195,16 +217,14 @@ public final class OverlapRepulsion {
             Arrays.fill(bucketStart, 0, buckets + 1, 0);
         }
         for (int i = 0; i < n; i++) {
-            int b = bucketOf(py[i], sideY, gy) * gx + bucketOf(px[i], side, gx);
-            bucketOfCell[i] = b;
-            bucketStart[b + 1]++;
+            bucketStart[bucketOfCell[i] + 1]++;
         }
         for (int b = 0; b < buckets; b++) {
             bucketStart[b + 1] += bucketStart[b];
         }
         System.arraycopy(bucketStart, 0, bucketFill, 0, buckets);
         for (int i = 0; i < n; i++) {
-            bucketCells[bucketFill[bucketOfCell[i]]++] = i;
+            slotOfCell[i] = bucketFill[bucketOfCell[i]]++;
         }
     }
 
@@ -219,14 +239,17 @@ public final class OverlapRepulsion {
         return b < 0 ? 0 : (b >= count ? count - 1 : b);
     }
 
-    private void ensureCapacity(int n) {
-        if (px.length < n) {
-            int size = Math.max(n, px.length + px.length / 4);
-            px = new double[size];
-            py = new double[size];
-            pr = new double[size];
-            bucketCells = new int[size];
+    private void ensureCapacity(int n, int workers) {
+        if (sx.length < n) {
+            int size = Math.max(n, sx.length + sx.length / 4);
+            sx = new double[size];
+            sy = new double[size];
+            sr = new double[size];
+            slotOfCell = new int[size];
             bucketOfCell = new int[size];
+        }
+        if (largestOfWorker.length != workers) {
+            largestOfWorker = new double[workers];
         }
     }
 }
