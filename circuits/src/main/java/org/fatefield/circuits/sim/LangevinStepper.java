@@ -3,6 +3,7 @@ package org.fatefield.circuits.sim;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 import org.fatefield.circuits.model.ReactionNetwork;
+import org.fatefield.circuits.random.SwitchableSource;
 
 /**
  * Chemical Langevin equation integrated by the Euler–Maruyama scheme.
@@ -26,6 +27,8 @@ public final class LangevinStepper implements CircuitStepper {
     private final ReactionTable table;
     private final double[] propensity;
     private final double[] normals;
+    private final SwitchableSource source = new SwitchableSource();
+    private final ZigguratSampler.NormalizedGaussian gaussian = ZigguratSampler.NormalizedGaussian.of(source);
 
     private LangevinStepper(ReactionNetwork network, double systemSize) {
         this.network = network;
@@ -55,7 +58,7 @@ public final class LangevinStepper implements CircuitStepper {
 
     @Override
     public void advance(double[] state, double[] params, double dt, UniformRandomProvider rng) {
-        ZigguratSampler.NormalizedGaussian gaussian = ZigguratSampler.NormalizedGaussian.of(rng);
+        source.use(rng);
         for (int j = 0; j < normals.length; j++) {
             normals[j] = gaussian.sample();
         }

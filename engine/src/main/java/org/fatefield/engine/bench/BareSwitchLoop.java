@@ -4,6 +4,7 @@ import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 import org.fatefield.circuits.model.Hill;
 import org.fatefield.circuits.random.RandomStreams;
+import org.fatefield.circuits.random.SwitchableSource;
 
 /**
  * The baseline of the tissue benchmark: the two-gene switch's Langevin step written as one flat
@@ -23,6 +24,8 @@ public final class BareSwitchLoop {
     private final double couplingGain;
     private final double couplingHalfMax;
     private final double couplingHill;
+    private final SwitchableSource source = new SwitchableSource();
+    private final ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(source);
 
     /**
      * @param cells    number of cells
@@ -55,7 +58,7 @@ public final class BareSwitchLoop {
     public void step(double dt) {
         double noise = dt / omega;
         for (int i = 0; i < a.length; i++) {
-            ZigguratSampler.NormalizedGaussian g = ZigguratSampler.NormalizedGaussian.of(rng[i]);
+            source.use(rng[i]);
             double r = couplingBase + couplingGain * Hill.activation(signal[i], couplingHalfMax, couplingHill);
             double x = a[i];
             double y = b[i];
