@@ -44,6 +44,21 @@ class ScenarioReaderTest {
     }
 
     @Test
+    void everyExampleScenarioIsValid() throws Exception {
+        java.nio.file.Path folder = java.nio.file.Path.of("examples");
+        List<java.nio.file.Path> files;
+        try (var listing = java.nio.file.Files.list(folder)) {
+            files = listing.filter(p -> p.toString().endsWith(".toml")).toList();
+        }
+        assertTrue(!files.isEmpty(), "no examples in " + folder.toAbsolutePath());
+        for (java.nio.file.Path file : files) {
+            Scenario scenario = ScenarioReader.parse(file.getFileName().toString(), file.toString(),
+                    java.nio.file.Files.readAllBytes(file));
+            assertTrue(scenario.tissue().growth().initialCells() > 0, file.toString());
+        }
+    }
+
+    @Test
     void sizeControlKeysReachTheEngine() throws ScenarioException {
         String text = demo().replace("partition = \"binomial\"",
                 "partition = \"volume\"\nsize_control = \"adder\"\nvolume_split_cv = 0.12");
