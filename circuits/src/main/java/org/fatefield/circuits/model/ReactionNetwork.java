@@ -89,7 +89,7 @@ public interface ReactionNetwork {
 
     /**
      * Writes the deterministic drift {@code dx/dt = N a(x, p)} into {@code out}, using
-     * {@code work} (length {@link #reactionCount()}) for the propensities.
+     * {@code work} (length at least {@link #reactionCount()}) for the propensities.
      */
     default void drift(double[] x, double[] p, double[] out, double[] work) {
         propensities(x, p, work);
@@ -97,7 +97,8 @@ public interface ReactionNetwork {
         for (int i = 0; i < n; i++) {
             out[i] = 0.0;
         }
-        for (int j = 0; j < work.length; j++) {
+        int m = reactionCount();
+        for (int j = 0; j < m; j++) {
             for (int i = 0; i < n; i++) {
                 int nu = stoichiometry(j, i);
                 if (nu != 0) {

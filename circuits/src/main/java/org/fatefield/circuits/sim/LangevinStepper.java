@@ -27,6 +27,9 @@ public final class LangevinStepper implements CircuitStepper {
     private final ReactionTable table;
     private final double[] propensity;
     private final double[] normals;
+    private final int reactions;
+    /** Unused doubles after each work array, more than a cache line. */
+    static final int PADDING = 16;
     private final SwitchableSource source = new SwitchableSource();
     private final ZigguratSampler.NormalizedGaussian gaussian = ZigguratSampler.NormalizedGaussian.of(source);
 
@@ -34,8 +37,11 @@ public final class LangevinStepper implements CircuitStepper {
         this.network = network;
         this.systemSize = systemSize;
         this.table = new ReactionTable(network);
-        this.propensity = new double[network.reactionCount()];
-        this.normals = new double[network.reactionCount()];
+        // Padded by a cache line's worth at each end of the used part, so that steppers working
+        // side by side on different threads never write to the same cache line (false sharing).
+        this.reactions = network.reactionCount();
+        this.propensity = new double[reactions + PADDING];
+        this.normals = new double[reactions + PADDING];
     }
 
     /**
@@ -59,7 +65,7 @@ public final class LangevinStepper implements CircuitStepper {
     @Override
     public void advance(double[] state, double[] params, double dt, UniformRandomProvider rng) {
         source.use(rng);
-        for (int j = 0; j < normals.length; j++) {
+        for (int j = 0; j < reactions; j++) {
             normals[j] = gaussian.sample();
         }
         advance(state, params, dt, normals);
@@ -75,7 +81,7 @@ public final class LangevinStepper implements CircuitStepper {
     public void advance(double[] state, double[] params, double dt, double[] xi) {
         network.propensities(state, params, propensity);
         double noiseScale = dt / systemSize;
-        for (int j = 0; j < propensity.length; j++) {
+        for (int j = 0; j < reactions; j++) {
             double a = Math.max(propensity[j], 0.0);
             double increment = a * dt + Math.sqrt(a * noiseScale) * xi[j];
             table.fire(j, increment, 1.0, state);

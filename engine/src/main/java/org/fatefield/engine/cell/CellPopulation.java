@@ -3,6 +3,7 @@ package org.fatefield.engine.cell;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
+import org.fatefield.engine.parallel.BlockParallel;
 
 /**
  * The live cells of a tissue in a deterministic order, and the id counter.
@@ -64,16 +65,27 @@ public final class CellPopulation {
      * linear in the number of cells, and deterministic.
      */
     public void sortByBlock(double block, double width, double height) {
+        try (BlockParallel serial = new BlockParallel(1)) {
+            sortByBlock(block, width, height, serial);
+        }
+    }
+
+    /** As {@link #sortByBlock(double, double, double)}, the blocks of the cells found on {@code pool}. */
+    public void sortByBlock(double block, double width, double height, BlockParallel pool) {
         int columns = Math.max(1, (int) Math.ceil(width / block));
         int rows = Math.max(1, (int) Math.ceil(height / block));
         int n = cells.size();
         int[] keys = new int[n];
+        pool.forEach(n, (from, to, worker) -> {
+            for (int i = from; i < to; i++) {
+                Cell c = cells.get(i);
+                int bx = Math.min(columns - 1, Math.max(0, (int) (c.x() / block)));
+                int by = Math.min(rows - 1, Math.max(0, (int) (c.y() / block)));
+                keys[i] = by * columns + bx;
+            }
+        });
         int[] start = new int[columns * rows + 1];
         for (int i = 0; i < n; i++) {
-            Cell c = cells.get(i);
-            int bx = Math.min(columns - 1, Math.max(0, (int) (c.x() / block)));
-            int by = Math.min(rows - 1, Math.max(0, (int) (c.y() / block)));
-            keys[i] = by * columns + bx;
             start[keys[i] + 1]++;
         }
         for (int b = 0; b < columns * rows; b++) {

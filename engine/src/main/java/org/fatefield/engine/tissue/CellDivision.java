@@ -33,16 +33,20 @@ final class CellDivision {
         this.secondDaughter = new double[species];
     }
 
-    /** Divides the cells of {@code population} that are ready at time {@code now}. */
-    void divideReady(CellPopulation population, Ancestry ancestry, LineageSink lineage, double now) {
+    /**
+     * Divides the cells of {@code population} marked in {@code ready} (by population index, as
+     * the cell loop found them at time {@code now}), in index order.
+     */
+    void divideReady(CellPopulation population, boolean[] ready, Ancestry ancestry, LineageSink lineage,
+            double now) {
         GrowthSpec growth = spec.growth();
         CellSize size = growth.size();
         int n = population.size();
         for (int i = 0; i < n; i++) {
-            Cell mother = population.get(i);
-            if (!mother.readyToDivide(size.control(), now)) {
+            if (!ready[i]) {
                 continue;
             }
+            Cell mother = population.get(i);
             lineage.accept(new LineageRecord(mother.id(), mother.parentId(), mother.generation(), mother.birthTime(),
                     now, mother.birthX(), mother.birthY(), spec.fates().classify(mother.liveState()), -1, Double.NaN,
                     Double.NaN, mother.birthVolume(), mother.volume()));

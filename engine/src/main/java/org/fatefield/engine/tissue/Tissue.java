@@ -41,6 +41,11 @@ public final class Tissue extends SimState {
     private static final int REORDER_EVERY = 10;
     /** Steps between relocations of the cells in memory in stepping order (see CellPopulation). */
     private static final int RELOCATE_EVERY = 100;
+    /**
+     * Unused doubles after each worker's scratch arrays, so that two workers' arrays never share
+     * a cache line (false sharing would make every cell step wait on the other thread).
+     */
+    private static final int SCRATCH_PADDING = 16;
 
     private final TissueSpec spec;
     private final RandomStreams streams;
@@ -57,6 +62,8 @@ public final class Tissue extends SimState {
     private double[] baseParameters;
     private int[] noisyIndices;
     private CellDivision division;
+    /** Which cells the last cell loop found ready to divide, by population index. */
+    private boolean[] ready = new boolean[0];
     private long steps;
     private double blockSide;
     private LineageSink lineage = LineageSink.NONE;
@@ -107,9 +114,9 @@ public final class Tissue extends SimState {
         CircuitStepper prototype = circuit.noise().stepper(circuit.network(), circuit.systemSize());
         for (int w = 0; w < threads; w++) {
             steppers[w] = w == 0 ? prototype : prototype.copy();
-            params[w] = spec.mapping().base();
+            params[w] = java.util.Arrays.copyOf(spec.mapping().base(), spec.mapping().parameterCount() + SCRATCH_PADDING);
         }
-        signals = new double[threads][fields.length];
+        signals = new double[threads][fields.length + SCRATCH_PADDING];
         mechanics = new OverlapRepulsion(spec.width(), spec.height(), growth.repulsionRate(), growth.cellRadius(),
                 growth.adhesion(), 0.2, growth.shape());
         division = new CellDivision(spec, streams);
@@ -157,13 +164,13 @@ public final class Tissue extends SimState {
         }
         stepCells(dt, (steps + 1) * dt);
         steps++;
-        division.divideReady(population, ancestry, lineage, time());
+        division.divideReady(population, ready, ancestry, lineage, time());
         if (spec.growth().deathRate() > 0) {
             removeDead(dt);
         }
         mechanics.relax(population, dt, pool);
         if (steps % REORDER_EVERY == 0) {
-            population.sortByBlock(blockSide, spec.width(), spec.height());
+            population.sortByBlock(blockSide, spec.width(), spec.height(), pool);
         }
         if (steps % RELOCATE_EVERY == 0) {
             population.relocateInOrder();
@@ -183,6 +190,10 @@ public final class Tissue extends SimState {
         boolean dilute = spec.growth().dilution();
         SizeControl size = spec.growth().size().control();
         List<ExtrinsicNoise> extrinsic = spec.extrinsic();
+        if (ready.length < cells.size()) {
+            ready = new boolean[cells.size() + cells.size() / 4];
+        }
+        boolean[] readyNow = ready;
         pool.forEach(cells.size(), (from, to, worker) -> {
             CircuitStepper circuit = steppers[worker];
             double[] p = params[worker];
@@ -201,6 +212,7 @@ public final class Tissue extends SimState {
                 }
                 circuit.advance(cell.liveState(), p, dt, cell.random());
                 cell.grow(end, size, dilute);
+                readyNow[i] = cell.readyToDivide(size, end);
             }
         });
     }
