@@ -19,14 +19,19 @@ public final class GillespieDirectStepper implements CircuitStepper {
     private final ReactionTable table;
     private final double[] propensity;
     private final double[] concentration;
+    private final double[] counts;
+    private final int reactions;
     private long events;
 
     private GillespieDirectStepper(ReactionNetwork network, double systemSize) {
         this.network = network;
         this.systemSize = systemSize;
         this.table = new ReactionTable(network);
-        this.propensity = new double[network.reactionCount()];
-        this.concentration = new double[network.speciesCount()];
+        // Padded (see LangevinStepper): steppers on different threads never share a cache line.
+        this.reactions = network.reactionCount();
+        this.propensity = new double[reactions + LangevinStepper.PADDING];
+        this.concentration = new double[network.speciesCount() + LangevinStepper.PADDING];
+        this.counts = new double[network.speciesCount() + LangevinStepper.PADDING];
     }
 
     /** A direct-method stepper at system size {@code systemSize} (molecules per unit concentration). */
@@ -45,7 +50,6 @@ public final class GillespieDirectStepper implements CircuitStepper {
     @Override
     public void advance(double[] state, double[] params, double dt, UniformRandomProvider rng) {
         int n = state.length;
-        double[] counts = new double[n];
         for (int i = 0; i < n; i++) {
             counts[i] = Math.rint(state[i] * systemSize);
         }
@@ -57,7 +61,7 @@ public final class GillespieDirectStepper implements CircuitStepper {
             }
             network.propensities(concentration, params, propensity);
             double total = 0;
-            for (int j = 0; j < propensity.length; j++) {
+            for (int j = 0; j < reactions; j++) {
                 propensity[j] = Math.max(propensity[j], 0.0) * systemSize;
                 total += propensity[j];
             }
@@ -73,7 +77,7 @@ public final class GillespieDirectStepper implements CircuitStepper {
             double target = rng.nextDouble() * total;
             int j = 0;
             double cumulative = propensity[0];
-            while (cumulative <= target && j < propensity.length - 1) {
+            while (cumulative <= target && j < reactions - 1) {
                 cumulative += propensity[++j];
             }
             // Step 4: fire it.
