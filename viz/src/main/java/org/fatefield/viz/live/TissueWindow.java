@@ -139,6 +139,12 @@ public final class TissueWindow extends JFrame {
         south.add(legend(), BorderLayout.EAST);
         add(top, BorderLayout.NORTH);
         add(canvasHolder, BorderLayout.CENTER);
+        canvasHolder.addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent e) {
+                fitCanvas();
+            }
+        });
         add(side, BorderLayout.EAST);
         add(south, BorderLayout.SOUTH);
         reset();
@@ -178,6 +184,9 @@ public final class TissueWindow extends JFrame {
         double scale = Math.min(820 / tissue.spec().width(), 620 / tissue.spec().height());
         display = new Display2D(tissue.spec().width() * scale, tissue.spec().height() * scale, gui);
         display.header.setVisible(false);
+        // MASON always shows both scroll bars; show them only when zoomed past the window.
+        display.display.setVerticalScrollBarPolicy(javax.swing.ScrollPaneConstants.VERTICAL_SCROLLBAR_AS_NEEDED);
+        display.display.setHorizontalScrollBarPolicy(javax.swing.ScrollPaneConstants.HORIZONTAL_SCROLLBAR_AS_NEEDED);
         display.setBackdrop(Color.WHITE);
         display.insideDisplay.removeListeners();
         display.insideDisplay.addMouseListener(new MouseAdapter() {
@@ -202,6 +211,27 @@ public final class TissueWindow extends JFrame {
         showLandscape(middleOfBranches());
         refresh();
         revalidate();
+        javax.swing.SwingUtilities.invokeLater(this::fitCanvas);
+    }
+
+    /**
+     * Sizes the tissue at zoom 1 to fill the space the window gives the canvas (keeping its
+     * aspect), so that scroll bars appear only when zoomed in.
+     */
+    private void fitCanvas() {
+        int w = canvasHolder.getWidth() - 8;
+        int h = canvasHolder.getHeight() - 8;
+        if (display == null || gui == null || w <= 0 || h <= 0) {
+            return;
+        }
+        double width = gui.tissue().spec().width();
+        double height = gui.tissue().spec().height();
+        double fit = Math.min(w / width, h / height);
+        display.insideDisplay.width = width * fit;
+        display.insideDisplay.height = height * fit;
+        display.setScale(zoom.getValue() / 10.0);
+        display.display.revalidate();
+        display.repaint();
     }
 
     private void attach() {
