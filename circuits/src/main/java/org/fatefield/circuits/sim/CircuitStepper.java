@@ -12,6 +12,13 @@ import org.apache.commons.rng.UniformRandomProvider;
 public interface CircuitStepper {
 
     /**
+     * Unused doubles to put after a scratch array written on every step (more than a cache
+     * line), so that the buffers of steppers working side by side on different threads never
+     * share a cache line: false sharing made two threads slower than one.
+     */
+    int SCRATCH_PADDING = 16;
+
+    /**
      * Advances {@code state} by {@code dt}.
      *
      * @param state  concentrations, modified in place

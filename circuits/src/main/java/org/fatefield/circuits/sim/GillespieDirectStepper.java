@@ -27,11 +27,11 @@ public final class GillespieDirectStepper implements CircuitStepper {
         this.network = network;
         this.systemSize = systemSize;
         this.table = new ReactionTable(network);
-        // Padded (see LangevinStepper): steppers on different threads never share a cache line.
+        // Padded: see SCRATCH_PADDING.
         this.reactions = network.reactionCount();
-        this.propensity = new double[reactions + LangevinStepper.PADDING];
-        this.concentration = new double[network.speciesCount() + LangevinStepper.PADDING];
-        this.counts = new double[network.speciesCount() + LangevinStepper.PADDING];
+        this.propensity = new double[reactions + SCRATCH_PADDING];
+        this.concentration = new double[network.speciesCount() + SCRATCH_PADDING];
+        this.counts = new double[network.speciesCount() + SCRATCH_PADDING];
     }
 
     /** A direct-method stepper at system size {@code systemSize} (molecules per unit concentration). */

@@ -28,8 +28,6 @@ public final class LangevinStepper implements CircuitStepper {
     private final double[] propensity;
     private final double[] normals;
     private final int reactions;
-    /** Unused doubles after each work array, more than a cache line. */
-    static final int PADDING = 16;
     private final SwitchableSource source = new SwitchableSource();
     private final ZigguratSampler.NormalizedGaussian gaussian = ZigguratSampler.NormalizedGaussian.of(source);
 
@@ -37,11 +35,10 @@ public final class LangevinStepper implements CircuitStepper {
         this.network = network;
         this.systemSize = systemSize;
         this.table = new ReactionTable(network);
-        // Padded by a cache line's worth at each end of the used part, so that steppers working
-        // side by side on different threads never write to the same cache line (false sharing).
+        // Padded: see SCRATCH_PADDING.
         this.reactions = network.reactionCount();
-        this.propensity = new double[reactions + PADDING];
-        this.normals = new double[reactions + PADDING];
+        this.propensity = new double[reactions + SCRATCH_PADDING];
+        this.normals = new double[reactions + SCRATCH_PADDING];
     }
 
     /**

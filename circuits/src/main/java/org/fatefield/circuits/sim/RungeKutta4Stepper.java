@@ -21,14 +21,14 @@ public final class RungeKutta4Stepper implements CircuitStepper {
 
     private RungeKutta4Stepper(ReactionNetwork network) {
         this.network = network;
-        // Padded (see LangevinStepper): steppers on different threads never share a cache line.
-        int n = network.speciesCount() + LangevinStepper.PADDING;
+        // Padded: see SCRATCH_PADDING.
+        int n = network.speciesCount() + SCRATCH_PADDING;
         this.k1 = new double[n];
         this.k2 = new double[n];
         this.k3 = new double[n];
         this.k4 = new double[n];
         this.stage = new double[n];
-        this.work = new double[network.reactionCount() + LangevinStepper.PADDING];
+        this.work = new double[network.reactionCount() + SCRATCH_PADDING];
     }
 
     /** An RK4 stepper for {@code network}. */

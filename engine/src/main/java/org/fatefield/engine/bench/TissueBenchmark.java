@@ -64,14 +64,9 @@ public final class TissueBenchmark {
      */
     public static Result measure(TissueSpec template, int cells, int steps, int repeats, long seed, int threads,
             double areaPerCell) {
-        double scale = Math.sqrt(cells * areaPerCell / (template.width() * template.height()));
-        double width = template.width() * scale;
-        double height = template.height() * scale;
-        GrowthSpec growth = new GrowthSpec(cells, template.growth().cellRadius(), template.growth().repulsionRate(),
-                new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e9, 0), template.growth().partition());
         double dt = template.timing().step();
-        TissueSpec spec = new TissueSpec(template.circuit(), template.mapping(), scaledField(template, width, height),
-                width, height, growth, template.fates(), new Timing(dt * (repeats + 1) * steps * 3, dt, dt * steps));
+        Timing timing = new Timing(dt * (repeats + 1) * steps * 3, dt, dt * steps);
+        TissueSpec spec = scaled(template, cells, areaPerCell, timing);
         Tissue tissue = new Tissue(spec, seed, threads);
         tissue.start();
         SignalCoupling coupling = template.mapping().couplings().get(0);
@@ -116,6 +111,21 @@ public final class TissueBenchmark {
         return new Result(tissue.cells().size(), median(tick), median(cellsOnly), median(bareLoop));
     }
 
+    /**
+     * A tissue like {@code template} (circuit, field, coupling, fates) of {@code cells} founders
+     * that never divide, in a domain of the template's aspect ratio with {@code areaPerCell} µm²
+     * per cell.
+     */
+    private static TissueSpec scaled(TissueSpec template, int cells, double areaPerCell, Timing timing) {
+        double scale = Math.sqrt(cells * areaPerCell / (template.width() * template.height()));
+        double width = template.width() * scale;
+        double height = template.height() * scale;
+        GrowthSpec growth = new GrowthSpec(cells, template.growth().cellRadius(), template.growth().repulsionRate(),
+                new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e9, 0), template.growth().partition());
+        return new TissueSpec(template.circuit(), template.mapping(), scaledField(template, width, height), width,
+                height, growth, template.fates(), timing);
+    }
+
     /** The template's field with its grid coarsened, if needed, to at most 2048 squares a side. */
     private static MorphogenSpec scaledField(TissueSpec template, double width, double height) {
         MorphogenSpec m = template.morphogen();
@@ -130,14 +140,8 @@ public final class TissueBenchmark {
      * collection; approximate.
      */
     public static double bytesPerCell(TissueSpec template, int cells, double areaPerCell) {
-        double scale = Math.sqrt(cells * areaPerCell / (template.width() * template.height()));
-        double width = template.width() * scale;
-        double height = template.height() * scale;
-        GrowthSpec growth = new GrowthSpec(cells, template.growth().cellRadius(), template.growth().repulsionRate(),
-                new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e9, 0), template.growth().partition());
         double dt = template.timing().step();
-        TissueSpec spec = new TissueSpec(template.circuit(), template.mapping(), scaledField(template, width, height),
-                width, height, growth, template.fates(), new Timing(dt * 10, dt, dt));
+        TissueSpec spec = scaled(template, cells, areaPerCell, new Timing(dt * 10, dt, dt));
         long before = usedHeap();
         Tissue tissue = new Tissue(spec, 1L);
         tissue.start();

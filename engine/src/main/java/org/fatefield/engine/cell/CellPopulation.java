@@ -62,15 +62,8 @@ public final class CellPopulation {
      * Reorders the cells block by block (square blocks of side {@code block} µm, in row-major
      * order; the order inside a block is kept), so that cells stepped one after the other are
      * neighbours in space and read neighbouring parts of the morphogen grid. A counting sort:
-     * linear in the number of cells, and deterministic.
+     * linear in the number of cells, and deterministic; the cells' blocks are found on {@code pool}.
      */
-    public void sortByBlock(double block, double width, double height) {
-        try (BlockParallel serial = new BlockParallel(1)) {
-            sortByBlock(block, width, height, serial);
-        }
-    }
-
-    /** As {@link #sortByBlock(double, double, double)}, the blocks of the cells found on {@code pool}. */
     public void sortByBlock(double block, double width, double height, BlockParallel pool) {
         int columns = Math.max(1, (int) Math.ceil(width / block));
         int rows = Math.max(1, (int) Math.ceil(height / block));

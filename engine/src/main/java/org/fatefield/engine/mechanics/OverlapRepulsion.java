@@ -33,7 +33,7 @@ public final class OverlapRepulsion {
     private int[] bucketOfCell = new int[0];
     private int[] bucketStart = new int[0];
     private int[] bucketFill = new int[0];
-    private double[] largestOfWorker = new double[0];
+    private double[] largestVolumeOfWorker = new double[0];
 
     /**
      * @param width         domain width (µm)
@@ -84,18 +84,20 @@ public final class OverlapRepulsion {
     public void relax(CellPopulation population, double dt, BlockParallel pool) {
         int n = population.size();
         ensureCapacity(n, pool.workers());
-        java.util.Arrays.fill(largestOfWorker, Math.sqrt(2.0) * newbornRadius);
+        java.util.Arrays.fill(largestVolumeOfWorker, 2.0);
         pool.forEach(n, (from, to, worker) -> {
-            double largest = largestOfWorker[worker];
+            double volume = largestVolumeOfWorker[worker];
             for (int i = from; i < to; i++) {
-                largest = Math.max(largest, population.get(i).radius(newbornRadius));
+                volume = Math.max(volume, population.get(i).volume());
             }
-            largestOfWorker[worker] = largest;
+            largestVolumeOfWorker[worker] = volume;
         });
-        double largest = 0;
-        for (double value : largestOfWorker) {
-            largest = Math.max(largest, value);
+        double largestVolume = 0;
+        for (double value : largestVolumeOfWorker) {
+            largestVolume = Math.max(largestVolume, value);
         }
+        // Radius grows as the square root of volume (Cell.radius), so this is the largest radius.
+        double largest = newbornRadius * Math.sqrt(largestVolume);
         // Buckets at least one interaction range wide, so every neighbour is in the 3 x 3 block around a cell.
         double side = 2.0 * largest * (1 + (adhesion > 0 ? adhesionRange : 0));
         int gx = Math.max(1, (int) Math.ceil(width / side));
@@ -141,11 +143,12 @@ public final class OverlapRepulsion {
         int bx = bucketOf(x, side, gx);
         int by = bucketOf(y, sideY, gy);
         boolean periodic = shape == DomainShape.STRIP;
-        int rowFrom = periodic && gy >= 3 ? by - 1 : Math.max(0, by - 1);
-        int rowTo = periodic && gy >= 3 ? by + 1 : Math.min(gy - 1, by + 1);
-        if (periodic && gy < 3) {
-            rowFrom = 0;
-            rowTo = gy - 1;
+        // Rows by - 1 .. by + 1, wrapped on a strip (where fewer than three rows means all of them).
+        int rowFrom = Math.max(0, by - 1);
+        int rowTo = Math.min(gy - 1, by + 1);
+        if (periodic) {
+            rowFrom = gy >= 3 ? by - 1 : 0;
+            rowTo = gy >= 3 ? by + 1 : gy - 1;
         }
         int columnFrom = Math.max(0, bx - 1);
         int columnTo = Math.min(gx - 1, bx + 1);
@@ -248,8 +251,8 @@ public final class OverlapRepulsion {
             slotOfCell = new int[size];
             bucketOfCell = new int[size];
         }
-        if (largestOfWorker.length != workers) {
-            largestOfWorker = new double[workers];
+        if (largestVolumeOfWorker.length != workers) {
+            largestVolumeOfWorker = new double[workers];
         }
     }
 }

@@ -41,11 +41,6 @@ public final class Tissue extends SimState {
     private static final int REORDER_EVERY = 10;
     /** Steps between relocations of the cells in memory in stepping order (see CellPopulation). */
     private static final int RELOCATE_EVERY = 100;
-    /**
-     * Unused doubles after each worker's scratch arrays, so that two workers' arrays never share
-     * a cache line (false sharing would make every cell step wait on the other thread).
-     */
-    private static final int SCRATCH_PADDING = 16;
 
     private final TissueSpec spec;
     private final RandomStreams streams;
@@ -114,9 +109,10 @@ public final class Tissue extends SimState {
         CircuitStepper prototype = circuit.noise().stepper(circuit.network(), circuit.systemSize());
         for (int w = 0; w < threads; w++) {
             steppers[w] = w == 0 ? prototype : prototype.copy();
-            params[w] = java.util.Arrays.copyOf(spec.mapping().base(), spec.mapping().parameterCount() + SCRATCH_PADDING);
+            params[w] = java.util.Arrays.copyOf(spec.mapping().base(), spec.mapping().parameterCount()
+                    + CircuitStepper.SCRATCH_PADDING);
         }
-        signals = new double[threads][fields.length + SCRATCH_PADDING];
+        signals = new double[threads][fields.length + CircuitStepper.SCRATCH_PADDING];
         mechanics = new OverlapRepulsion(spec.width(), spec.height(), growth.repulsionRate(), growth.cellRadius(),
                 growth.adhesion(), 0.2, growth.shape());
         division = new CellDivision(spec, streams);
@@ -147,7 +143,7 @@ public final class Tissue extends SimState {
             population.add(founder);
             ancestry.add(id, -1);
         }
-        population.sortByBlock(blockSide, spec.width(), spec.height());
+        population.sortByBlock(blockSide, spec.width(), spec.height(), pool);
         population.relocateInOrder();
         record();
         schedule.scheduleRepeating(Schedule.EPOCH, 0, new TissueTick(this), 1.0);
