@@ -1,13 +1,12 @@
 package org.fatefield.viz;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
 import java.awt.Color;
 import java.awt.image.BufferedImage;
+import java.io.ByteArrayInputStream;
 import java.io.ByteArrayOutputStream;
 import java.nio.charset.StandardCharsets;
 import java.util.List;
+import javax.xml.parsers.DocumentBuilderFactory;
 import org.fatefield.circuits.model.CustomNetwork;
 import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.coupling.ParameterMapping;
@@ -20,14 +19,17 @@ import org.fatefield.engine.record.TimeSeries;
 import org.fatefield.engine.tissue.CircuitSetup;
 import org.fatefield.engine.tissue.GrowthSpec;
 import org.fatefield.engine.tissue.NoiseMode;
+import org.fatefield.engine.tissue.Timing;
 import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.engine.tissue.TissueSpec;
-import org.fatefield.engine.tissue.Timing;
 import org.fatefield.viz.chart.ChartFiles;
 import org.fatefield.viz.chart.FateProportionChart;
 import org.fatefield.viz.palette.FatePalette;
 import org.fatefield.viz.tissue.TissueRenderer;
 import org.junit.jupiter.api.Test;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
 
 /** Headless drawing checked pixel by pixel, and the SVG export checked as XML with its series. */
 class RenderingTest {
@@ -76,9 +78,9 @@ class RenderingTest {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         ChartFiles.svg(FateProportionChart.create(series, "Proportions"), 800, 500, out);
         String svg = out.toString(StandardCharsets.UTF_8);
-        var factory = javax.xml.parsers.DocumentBuilderFactory.newInstance();
+        var factory = DocumentBuilderFactory.newInstance();
         factory.setFeature("http://apache.org/xml/features/nonvalidating/load-external-dtd", false);
-        var doc = factory.newDocumentBuilder().parse(new java.io.ByteArrayInputStream(out.toByteArray()));
+        var doc = factory.newDocumentBuilder().parse(new ByteArrayInputStream(out.toByteArray()));
         assertEquals("svg", doc.getDocumentElement().getNodeName());
         for (String name : List.of("alpha", "beta", "rest", "population (right axis)", "Proportions")) {
             assertTrue(svg.contains(name), name + " in the SVG");

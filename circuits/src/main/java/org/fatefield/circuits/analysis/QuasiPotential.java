@@ -1,5 +1,6 @@
 package org.fatefield.circuits.analysis;
 
+import java.util.List;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.fatefield.circuits.model.ReactionNetwork;
 import org.fatefield.circuits.random.RandomStreams;
@@ -109,7 +110,7 @@ public record QuasiPotential(double[] xs, double[] ys, long[][] counts, double[]
      * time (the wells' shapes are then right; their relative depths reflect the starts).
      */
     public static QuasiPotential estimateFrom(ReactionNetwork network, double[] params, double systemSize,
-            java.util.List<double[]> starts, int xSpecies, int ySpecies, double[] lower, double[] upper, int bins,
+            List<double[]> starts, int xSpecies, int ySpecies, double[] lower, double[] upper, int bins,
             Sampling sampling) {
         QuasiPotential total = null;
         int per = Math.max(1, sampling.trajectories() / starts.size());

@@ -1,6 +1,7 @@
 package org.fatefield.circuits.model;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
@@ -145,7 +146,7 @@ public final class CustomNetwork implements ReactionNetwork {
             throw new IllegalArgumentException("'" + name + "' is not a valid name: use letters, digits and _,"
                     + " starting with a letter or _");
         }
-        if (java.util.Arrays.stream(Node.Function.values())
+        if (Arrays.stream(Node.Function.values())
                 .anyMatch(f -> f.word().equals(name))) {
             throw new IllegalArgumentException("'" + name + "' is a function name and cannot name a species or parameter");
         }
@@ -195,7 +196,7 @@ public final class CustomNetwork implements ReactionNetwork {
     public void jacobian(double[] x, double[] p, double[][] out) {
         int n = species.size();
         for (int i = 0; i < n; i++) {
-            java.util.Arrays.fill(out[i], 0.0);
+            Arrays.fill(out[i], 0.0);
         }
         for (int j = 0; j < rates.length; j++) {
             int[] ks = jacobianSpecies[j];

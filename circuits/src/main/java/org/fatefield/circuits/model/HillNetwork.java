@@ -1,6 +1,7 @@
 package org.fatefield.circuits.model;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 
 /**
@@ -182,7 +183,7 @@ public final class HillNetwork implements ReactionNetwork {
     public void jacobian(double[] x, double[] p, double[][] out) {
         int n = genes.size();
         for (int i = 0; i < n; i++) {
-            java.util.Arrays.fill(out[i], 0.0);
+            Arrays.fill(out[i], 0.0);
             out[i][i] = -p[3 * i + 2];
             int count = inputs[i].length;
             for (int k = 0; k < count; k++) {

@@ -1,14 +1,16 @@
 package org.fatefield.circuits.sim;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
-
+import org.apache.commons.rng.UniformRandomProvider;
 import org.fatefield.circuits.model.GeneKinetics;
 import org.fatefield.circuits.model.SelfActivatingSwitch;
+import org.fatefield.circuits.random.RandomStreams;
 import org.hipparchus.ode.ODEState;
 import org.hipparchus.ode.ODEStateAndDerivative;
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
 import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
 import org.junit.jupiter.api.Test;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+
 
 /** RK4 against Hipparchus' adaptive Dormand–Prince 8(5,3) at tight tolerance as the reference. */
 class RungeKutta4StepperTest {
@@ -49,7 +51,7 @@ class RungeKutta4StepperTest {
         // Langevin with the noise switched off (a huge system size) is explicit Euler: error O(dt).
         double[] z = x0.clone();
         LangevinStepper euler = LangevinStepper.of(circuit, 1e30);
-        org.apache.commons.rng.UniformRandomProvider rng = org.fatefield.circuits.random.RandomStreams.of(1).stream(1);
+        UniformRandomProvider rng = RandomStreams.of(1).stream(1);
         for (int i = 0; i < 50_000; i++) {
             euler.advance(z, p, 1e-4, rng);
         }

@@ -1,5 +1,8 @@
 package org.fatefield.engine.cell;
 
+import java.io.DataInputStream;
+import java.io.DataOutputStream;
+import java.io.IOException;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.fatefield.circuits.random.EmbeddedStream;
 import org.fatefield.engine.division.SizeControl;
@@ -79,7 +82,7 @@ public final class Cell extends EmbeddedStream {
      * Writes everything about this cell, its random stream's state included, so that
      * {@link #read} rebuilds an identical cell (checkpoints).
      */
-    public void write(java.io.DataOutputStream out) throws java.io.IOException {
+    public void write(DataOutputStream out) throws IOException {
         out.writeLong(id);
         out.writeLong(parentId);
         out.writeInt(generation);
@@ -100,7 +103,7 @@ public final class Cell extends EmbeddedStream {
     }
 
     /** Reads a cell written by {@link #write}. */
-    public static Cell read(java.io.DataInputStream in) throws java.io.IOException {
+    public static Cell read(DataInputStream in) throws IOException {
         long id = in.readLong();
         long parentId = in.readLong();
         int generation = in.readInt();
@@ -144,14 +147,14 @@ public final class Cell extends EmbeddedStream {
         return cell;
     }
 
-    private static void writeArray(java.io.DataOutputStream out, double[] values) throws java.io.IOException {
+    private static void writeArray(DataOutputStream out, double[] values) throws IOException {
         out.writeInt(values.length);
         for (double v : values) {
             out.writeDouble(v);
         }
     }
 
-    private static double[] readArray(java.io.DataInputStream in) throws java.io.IOException {
+    private static double[] readArray(DataInputStream in) throws IOException {
         double[] values = new double[in.readInt()];
         for (int i = 0; i < values.length; i++) {
             values[i] = in.readDouble();

@@ -3,6 +3,7 @@ package org.fatefield.engine.cell;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
+import java.util.function.Predicate;
 import org.fatefield.engine.parallel.BlockParallel;
 
 /**
@@ -44,7 +45,7 @@ public final class CellPopulation {
     }
 
     /** Removes every cell {@code test} accepts, keeping the others in order; {@code test} runs once per cell, in order. */
-    public void removeIf(java.util.function.Predicate<Cell> test) {
+    public void removeIf(Predicate<Cell> test) {
         cells.removeIf(test);
     }
 

@@ -1,5 +1,6 @@
 package org.fatefield.engine.division;
 
+import java.util.Locale;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.AhrensDieterMarsagliaTsangGammaSampler;
 import org.apache.commons.rng.sampling.distribution.LogNormalSampler;
@@ -32,7 +33,7 @@ public record CycleTimeDistribution(Kind kind, double mean, double cv) {
         }
         if (kind != Kind.FIXED && (!(cv > 0) || Double.isInfinite(cv))) {
             throw new IllegalArgumentException("cycle time cv must be finite and greater than 0 for "
-                    + kind.name().toLowerCase(java.util.Locale.ROOT) + ", got " + cv);
+                    + kind.name().toLowerCase(Locale.ROOT) + ", got " + cv);
         }
     }
 

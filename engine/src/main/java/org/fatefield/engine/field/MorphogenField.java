@@ -1,5 +1,12 @@
 package org.fatefield.engine.field;
 
+import java.io.DataInputStream;
+import java.io.DataOutputStream;
+import java.io.IOException;
+import java.util.Arrays;
+import java.util.List;
+import java.util.function.DoubleBinaryOperator;
+import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.parallel.BlockParallel;
 
 /**
@@ -71,7 +78,7 @@ public final class MorphogenField {
         }
         this.current = new double[nx * ny];
         this.next = new double[nx * ny];
-        java.util.Arrays.fill(current, spec.initial());
+        Arrays.fill(current, spec.initial());
         this.synthesis = new double[nx * ny];
         this.timeVarying = spec.sources().stream().anyMatch(s -> !s.amplitude().isConstant());
         setSynthesis(0.0);
@@ -104,13 +111,13 @@ public final class MorphogenField {
      * each secreting cell adds its amount over the area of its square; uptake scales with the
      * area the cell covers (radius from {@code newbornRadius} and its age).
      */
-    public void gatherExchange(java.util.List<org.fatefield.engine.cell.Cell> cells, double newbornRadius) {
+    public void gatherExchange(List<Cell> cells, double newbornRadius) {
         MorphogenSpec.CellExchange exchange = spec.exchange();
         double area = h * h;
         allocateExchange();
-        java.util.Arrays.fill(exchangeSource, 0.0);
-        java.util.Arrays.fill(exchangeUptake, 0.0);
-        for (org.fatefield.engine.cell.Cell cell : cells) {
+        Arrays.fill(exchangeSource, 0.0);
+        Arrays.fill(exchangeUptake, 0.0);
+        for (Cell cell : cells) {
             int k = squareOf(cell.x(), cell.y());
             int secreting = exchange.secretingFate();
             if (secreting == MorphogenSpec.CellExchange.ALL || secreting == cell.fate()) {
@@ -137,7 +144,7 @@ public final class MorphogenField {
 
     /** Fills the synthesis map with every source's rate times its amplitude at time {@code t}. */
     private void setSynthesis(double t) {
-        java.util.Arrays.fill(synthesis, 0.0);
+        Arrays.fill(synthesis, 0.0);
         if (spec.leftWall().kind() == MorphogenSpec.WallKind.FLUX) {
             for (int j = 0; j < ny; j++) {
                 synthesis[j * nx] += spec.leftWall().value() / h;
@@ -259,7 +266,7 @@ public final class MorphogenField {
      * Sets every grid square to {@code profile(x, y)} at its centre (µm): initial conditions for
      * numerical studies and tests.
      */
-    public void fill(java.util.function.DoubleBinaryOperator profile) {
+    public void fill(DoubleBinaryOperator profile) {
         for (int j = 0; j < ny; j++) {
             for (int i = 0; i < nx; i++) {
                 current[j * nx + i] = profile.applyAsDouble((i + 0.5) * h, (j + 0.5) * h);
@@ -268,7 +275,7 @@ public final class MorphogenField {
     }
 
     /** Writes the concentrations and the field's clock (checkpoints). */
-    public void write(java.io.DataOutputStream out) throws java.io.IOException {
+    public void write(DataOutputStream out) throws IOException {
         out.writeDouble(time);
         out.writeInt(current.length);
         for (double v : current) {
@@ -277,11 +284,11 @@ public final class MorphogenField {
     }
 
     /** Restores what {@link #write} wrote, into a field of the same grid. */
-    public void read(java.io.DataInputStream in) throws java.io.IOException {
+    public void read(DataInputStream in) throws IOException {
         time = in.readDouble();
         int n = in.readInt();
         if (n != current.length) {
-            throw new java.io.IOException("checkpoint field has " + n + " squares, this grid " + current.length);
+            throw new IOException("checkpoint field has " + n + " squares, this grid " + current.length);
         }
         for (int k = 0; k < n; k++) {
             current[k] = in.readDouble();

@@ -1,5 +1,8 @@
 package org.fatefield.engine.lineage;
 
+import java.io.DataInputStream;
+import java.io.DataOutputStream;
+import java.io.IOException;
 import java.util.Arrays;
 
 /**
@@ -25,7 +28,7 @@ public final class Ancestry {
     }
 
     /** Writes the table (checkpoints). */
-    public void write(java.io.DataOutputStream out) throws java.io.IOException {
+    public void write(DataOutputStream out) throws IOException {
         out.writeLong(size);
         for (long i = 0; i < size; i++) {
             out.writeInt(parent[(int) i]);
@@ -33,7 +36,7 @@ public final class Ancestry {
     }
 
     /** Reads a table written by {@link #write}, replacing this one's contents. */
-    public void read(java.io.DataInputStream in) throws java.io.IOException {
+    public void read(DataInputStream in) throws IOException {
         long n = in.readLong();
         parent = new int[(int) Math.max(1024, n)];
         size = n;

@@ -84,7 +84,7 @@ public final class OverlapRepulsion {
     public void relax(CellPopulation population, double dt, BlockParallel pool) {
         int n = population.size();
         ensureCapacity(n, pool.workers());
-        java.util.Arrays.fill(largestVolumeOfWorker, 2.0);
+        Arrays.fill(largestVolumeOfWorker, 2.0);
         pool.forEach(n, (from, to, worker) -> {
             double volume = largestVolumeOfWorker[worker];
             for (int i = from; i < to; i++) {

@@ -1,5 +1,6 @@
 package org.fatefield.engine.tissue;
 
+import java.util.Locale;
 import org.fatefield.circuits.model.ReactionNetwork;
 import org.fatefield.circuits.sim.CircuitStepper;
 import org.fatefield.circuits.sim.GillespieDirectStepper;
@@ -30,11 +31,11 @@ public enum NoiseMode {
 
     /** The word a scenario uses for this mode. */
     public String word() {
-        return name().toLowerCase(java.util.Locale.ROOT).replace('_', '-');
+        return name().toLowerCase(Locale.ROOT).replace('_', '-');
     }
 
     /** The mode a scenario word names. */
     public static NoiseMode fromWord(String word) {
-        return valueOf(word.toUpperCase(java.util.Locale.ROOT).replace('-', '_'));
+        return valueOf(word.toUpperCase(Locale.ROOT).replace('-', '_'));
     }
 }

@@ -1,5 +1,9 @@
 package org.fatefield.engine.tissue;
 
+import java.io.DataInputStream;
+import java.io.DataOutputStream;
+import java.io.IOException;
+import java.util.Arrays;
 import java.util.List;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.fatefield.circuits.random.EmbeddedStream;
@@ -10,14 +14,15 @@ import org.fatefield.engine.cell.CellPopulation;
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.division.SizeControl;
 import org.fatefield.engine.field.MorphogenField;
+import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.lineage.Ancestry;
 import org.fatefield.engine.lineage.LineageRecord;
 import org.fatefield.engine.lineage.LineageSink;
 import org.fatefield.engine.mechanics.DomainShape;
 import org.fatefield.engine.mechanics.OverlapRepulsion;
 import org.fatefield.engine.parallel.BlockParallel;
-import org.fatefield.engine.variability.ExtrinsicNoise;
 import org.fatefield.engine.record.TimeSeries;
+import org.fatefield.engine.variability.ExtrinsicNoise;
 import sim.engine.Schedule;
 import sim.engine.SimState;
 
@@ -89,7 +94,7 @@ public final class Tissue extends SimState {
         CircuitSetup circuit = spec.circuit();
         GrowthSpec growth = spec.growth();
         population = new CellPopulation();
-        List<org.fatefield.engine.field.MorphogenSpec> specs = spec.fields();
+        List<MorphogenSpec> specs = spec.fields();
         fields = new MorphogenField[specs.size()];
         for (int f = 0; f < fields.length; f++) {
             fields[f] = new MorphogenField(specs.get(f), spec.width(), spec.height(),
@@ -102,14 +107,14 @@ public final class Tissue extends SimState {
         }
         pool = new BlockParallel(threads);
         baseParameters = spec.mapping().base();
-        noisyIndices = spec.extrinsic().stream().flatMapToInt(noise -> java.util.Arrays.stream(noise.indices()))
+        noisyIndices = spec.extrinsic().stream().flatMapToInt(noise -> Arrays.stream(noise.indices()))
                 .distinct().toArray();
         steppers = new CircuitStepper[threads];
         params = new double[threads][];
         CircuitStepper prototype = circuit.noise().stepper(circuit.network(), circuit.systemSize());
         for (int w = 0; w < threads; w++) {
             steppers[w] = w == 0 ? prototype : prototype.copy();
-            params[w] = java.util.Arrays.copyOf(spec.mapping().base(), spec.mapping().parameterCount()
+            params[w] = Arrays.copyOf(spec.mapping().base(), spec.mapping().parameterCount()
                     + CircuitStepper.SCRATCH_PADDING);
         }
         signals = new double[threads][fields.length + CircuitStepper.SCRATCH_PADDING];
@@ -261,7 +266,7 @@ public final class Tissue extends SimState {
      * Writes everything the run needs to continue (cells with their random streams, the fields,
      * the records so far, the ancestry, the step count). Call between ticks.
      */
-    public void writeCheckpoint(java.io.DataOutputStream out) throws java.io.IOException {
+    public void writeCheckpoint(DataOutputStream out) throws IOException {
         TissueCheckpoint.write(this, out);
     }
 
@@ -269,7 +274,7 @@ public final class Tissue extends SimState {
      * Restores a checkpoint written by {@link #writeCheckpoint} from a run of the same scenario and
      * seed; call after {@link #start()}. The run then continues exactly as the original would have.
      */
-    public void readCheckpoint(java.io.DataInputStream in) throws java.io.IOException {
+    public void readCheckpoint(DataInputStream in) throws IOException {
         TissueCheckpoint.read(this, in);
     }
 

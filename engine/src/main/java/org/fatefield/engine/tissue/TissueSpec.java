@@ -1,9 +1,10 @@
 package org.fatefield.engine.tissue;
 
-import org.fatefield.engine.coupling.ParameterMapping;
-import org.fatefield.engine.fate.FateClassifier;
+import java.util.ArrayList;
 import java.util.List;
+import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.coupling.SignalCoupling;
+import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.mechanics.DomainShape;
 import org.fatefield.engine.variability.ExtrinsicNoise;
@@ -34,7 +35,7 @@ public record TissueSpec(CircuitSetup circuit, ParameterMapping mapping, Morphog
 
     /** All fields, the primary first. */
     public List<MorphogenSpec> fields() {
-        List<MorphogenSpec> all = new java.util.ArrayList<>();
+        List<MorphogenSpec> all = new ArrayList<>();
         all.add(morphogen);
         all.addAll(others);
         return all;
@@ -70,7 +71,7 @@ public record TissueSpec(CircuitSetup circuit, ParameterMapping mapping, Morphog
                     + " molecule-count methods assume every newborn has the same volume");
         }
         if (growth.shape() == DomainShape.STRIP) {
-            List<MorphogenSpec> all = new java.util.ArrayList<>(others);
+            List<MorphogenSpec> all = new ArrayList<>(others);
             all.add(morphogen);
             for (MorphogenSpec field : all) {
                 double squares = height / field.gridSpacing();

@@ -1,5 +1,6 @@
 package org.fatefield.engine.variability;
 
+import java.util.List;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 
@@ -60,7 +61,7 @@ public record ExtrinsicNoise(String label, int[] indices, double cv, double rho)
     }
 
     /** Scores of a founder, one per noise. */
-    public static double[] founderScores(java.util.List<ExtrinsicNoise> noises, UniformRandomProvider rng) {
+    public static double[] founderScores(List<ExtrinsicNoise> noises, UniformRandomProvider rng) {
         double[] scores = new double[noises.size()];
         for (int k = 0; k < scores.length; k++) {
             scores[k] = noises.get(k).founderScore(rng);
@@ -69,7 +70,7 @@ public record ExtrinsicNoise(String label, int[] indices, double cv, double rho)
     }
 
     /** Scores of a daughter from her mother's, one per noise. */
-    public static double[] daughterScores(java.util.List<ExtrinsicNoise> noises, double[] mother,
+    public static double[] daughterScores(List<ExtrinsicNoise> noises, double[] mother,
             UniformRandomProvider rng) {
         double[] scores = new double[noises.size()];
         for (int k = 0; k < scores.length; k++) {

@@ -1,8 +1,5 @@
 package org.fatefield.engine.tissue;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
@@ -16,8 +13,12 @@ import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.fate.FateRule;
 import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.lineage.LineageRecord;
+import org.fatefield.engine.variability.ExtrinsicNoise;
 import org.hipparchus.distribution.discrete.BinomialDistribution;
 import org.junit.jupiter.api.Test;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
 
 /** Division axis, death and dilution, each against a result computed by hand. */
 class GrowthOptionsTest {
@@ -111,8 +112,8 @@ class GrowthOptionsTest {
     void extrinsicFactorsHaveTheirMeanSpreadAndInheritance() {
         double cv = 0.3;
         double rho = 0.8;
-        org.fatefield.engine.variability.ExtrinsicNoise noise =
-                new org.fatefield.engine.variability.ExtrinsicNoise("k", new int[] {0}, cv, rho);
+        ExtrinsicNoise noise =
+                new ExtrinsicNoise("k", new int[] {0}, cv, rho);
         GrowthSpec growth = new GrowthSpec(3000, 2, 0, new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 2, 0),
                 Partitioning.equal(), GrowthSpec.DivisionAxis.RANDOM, 0, false);
         TissueSpec base = spec(3000, growth, 1.99);

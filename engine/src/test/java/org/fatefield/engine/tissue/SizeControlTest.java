@@ -1,8 +1,5 @@
 package org.fatefield.engine.tissue;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
@@ -17,7 +14,11 @@ import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.fate.FateRule;
 import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.lineage.LineageRecord;
+import org.fatefield.engine.mechanics.DomainShape;
 import org.junit.jupiter.api.Test;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
 
 /**
  * Cell-size control in a growing tissue against the analytic regressions of a daughter's birth
@@ -36,7 +37,7 @@ class SizeControlTest {
     private static List<LineageRecord> grow(SizeControl control) {
         GrowthSpec growth = new GrowthSpec(150, 2, 0,
                 new CycleTimeDistribution(CycleTimeDistribution.Kind.GAMMA, 10, 0.1), Partitioning.equal(),
-                GrowthSpec.DivisionAxis.RANDOM, 0, true, 0, org.fatefield.engine.mechanics.DomainShape.RECTANGLE,
+                GrowthSpec.DivisionAxis.RANDOM, 0, true, 0, DomainShape.RECTANGLE,
                 new CellSize(control, SPLIT_CV));
         TissueSpec spec = new TissueSpec(new CircuitSetup(INERT, NoiseMode.NONE, 100, new double[] {1.0}),
                 new ParameterMapping(INERT.defaultParameters(), List.of()), new MorphogenSpec(0, 0, 100, 0, List.of()),

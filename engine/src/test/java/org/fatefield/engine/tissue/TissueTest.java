@@ -1,9 +1,6 @@
 package org.fatefield.engine.tissue;
 
-import static org.junit.jupiter.api.Assertions.assertArrayEquals;
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
+import java.util.ArrayList;
 import java.util.List;
 import org.fatefield.circuits.analysis.SteadyState;
 import org.fatefield.circuits.analysis.SteadyStateFinder;
@@ -17,6 +14,10 @@ import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.fate.FateRule;
 import org.fatefield.engine.field.MorphogenSpec;
 import org.junit.jupiter.api.Test;
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
 
 class TissueTest {
 
@@ -84,7 +85,7 @@ class TissueTest {
         // Each cell draws only from its own stream and forces come from one snapshot, so the
         // thread count must not change a single bit (the design's promise).
         CycleTimeDistribution gamma = new CycleTimeDistribution(CycleTimeDistribution.Kind.GAMMA, 2.0, 0.3);
-        List<Tissue> runs = new java.util.ArrayList<>();
+        List<Tissue> runs = new ArrayList<>();
         for (int threads : new int[] {1, 2, 4}) {
             Tissue t = new Tissue(spec(300, new double[] {0.5, 0.5}, gamma, 5.0, 60.0), 31, threads);
             t.start();

@@ -1,20 +1,21 @@
 package org.fatefield.scenarios.analysis;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.fatefield.circuits.analysis.BasinMap;
 import org.fatefield.circuits.analysis.QuasiPotential;
-import org.fatefield.circuits.analysis.SteadyState;
 import org.fatefield.circuits.analysis.StationaryFokkerPlanck;
+import org.fatefield.circuits.analysis.SteadyState;
 import org.fatefield.circuits.analysis.SteadyStateFinder;
 import org.fatefield.circuits.analysis.Switching;
 import org.fatefield.circuits.analysis.continuation.Branch;
 import org.fatefield.circuits.analysis.continuation.BranchPoint;
 import org.fatefield.circuits.analysis.continuation.ContinuationSettings;
 import org.fatefield.circuits.analysis.continuation.EquilibriumContinuation;
-import org.fatefield.circuits.analysis.continuation.FoldCurveContinuation;
 import org.fatefield.circuits.analysis.continuation.FoldCurveContinuation.FoldCurve;
 import org.fatefield.circuits.analysis.continuation.FoldCurveContinuation.FoldPoint;
+import org.fatefield.circuits.analysis.continuation.FoldCurveContinuation;
 import org.fatefield.circuits.analysis.continuation.NetworkSystem;
 import org.fatefield.circuits.analysis.continuation.SpecialPoint;
 import org.fatefield.circuits.analysis.continuation.SpecialPointType;
@@ -226,7 +227,7 @@ public final class CircuitAnalysis {
         double largest = 0.0;
         for (int attempt = 0; attempt < 6; attempt++) {
             double[] box = new double[n];
-            java.util.Arrays.fill(box, side);
+            Arrays.fill(box, side);
             largest = 0.0;
             for (double value : new double[] {plan.min(), plan.at(), plan.max()}) {
                 for (SteadyState s : SteadyStateFinder.of(network).withStartsPerAxis(12)
@@ -242,7 +243,7 @@ public final class CircuitAnalysis {
             side *= 2;
         }
         double[] out = new double[n];
-        java.util.Arrays.fill(out, Math.max(1.0, 1.3 * largest));
+        Arrays.fill(out, Math.max(1.0, 1.3 * largest));
         return out;
     }
 

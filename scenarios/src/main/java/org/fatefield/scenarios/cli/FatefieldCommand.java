@@ -1,8 +1,9 @@
 package org.fatefield.scenarios.cli;
 
+import java.io.PrintWriter;
 import org.fatefield.scenarios.output.RunProvenance;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine;
 
 /** The {@code fatefield} command line. */
 @Command(name = "fatefield", mixinStandardHelpOptions = true, versionProvider = FatefieldCommand.Version.class,
@@ -35,7 +36,7 @@ public final class FatefieldCommand implements Runnable {
     }
 
     /** Runs the command line with its output and errors sent to the given writers. */
-    public static int execute(java.io.PrintWriter out, java.io.PrintWriter err, String... args) {
+    public static int execute(PrintWriter out, PrintWriter err, String... args) {
         return new CommandLine(new FatefieldCommand()).setOut(out).setErr(err).execute(args);
     }
 

@@ -1,5 +1,6 @@
 package org.fatefield.scenarios.cli;
 
+import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -20,7 +21,7 @@ final class ScenarioArgument {
      * Reads the scenario, or prints its problems to {@code err} and returns null (so a command
      * can return {@link FatefieldCommand#INVALID_INPUT}).
      */
-    static Scenario loadOrReport(String argument, java.io.PrintWriter err) {
+    static Scenario loadOrReport(String argument, PrintWriter err) {
         try {
             return load(argument);
         } catch (ScenarioException e) {

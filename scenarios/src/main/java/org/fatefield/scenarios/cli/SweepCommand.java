@@ -2,10 +2,12 @@ package org.fatefield.scenarios.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.net.URISyntaxException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.format.ScenarioReader;
@@ -16,10 +18,10 @@ import org.fatefield.scenarios.sweep.SlurmScript;
 import org.fatefield.scenarios.sweep.SweepCollector;
 import org.fatefield.scenarios.sweep.SweepDefinition;
 import org.fatefield.scenarios.sweep.SweepRunner;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
+import picocli.CommandLine;
 
 /** {@code fatefield sweep}: plan, run (locally or as a SLURM array), and collect parameter sweeps. */
 @Command(name = "sweep", mixinStandardHelpOptions = true,
@@ -130,7 +132,7 @@ final class SweepCommand implements Runnable {
         }
 
         /** The shard from --shard, else from a SLURM array task, else 1/1. */
-        static int[] shard(String option, java.util.Map<String, String> env) {
+        static int[] shard(String option, Map<String, String> env) {
             if (option != null) {
                 String[] parts = option.split("/");
                 if (parts.length != 2) {
@@ -197,7 +199,7 @@ final class SweepCommand implements Runnable {
             } catch (IllegalArgumentException e) {
                 spec.commandLine().getErr().println(e.getMessage());
                 return FatefieldCommand.INVALID_INPUT;
-            } catch (IOException | java.net.URISyntaxException e) {
+            } catch (IOException | URISyntaxException e) {
                 spec.commandLine().getErr().println("Cannot write the script: " + e.getMessage());
                 return FatefieldCommand.OUTPUT_ERROR;
             }

@@ -1,10 +1,13 @@
 package org.fatefield.scenarios.format;
 
 import java.util.ArrayList;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Set;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import java.util.stream.Collectors;
 import org.tomlj.Toml;
 import org.tomlj.TomlArray;
@@ -56,7 +59,7 @@ final class ScenarioChecker {
             return null;
         }
         Set<String> roots = ScenarioSchema.sections().stream().filter(this::inScope)
-                .map(s -> s.path().split("\\.")[0]).collect(Collectors.toCollection(java.util.LinkedHashSet::new));
+                .map(s -> s.path().split("\\.")[0]).collect(Collectors.toCollection(LinkedHashSet::new));
         circuitIncluded = scope == Scope.SCENARIO && toml.contains("circuit.file");
         if (scope == Scope.CIRCUIT_FILE && toml.contains("circuit.file")) {
             problems.add(at(toml.getTable("circuit"), "file", "circuit.file", null,
@@ -297,12 +300,12 @@ final class ScenarioChecker {
         if (line < 1 || line > lines.length) {
             return "";
         }
-        java.util.regex.Matcher key = java.util.regex.Pattern.compile("^\\s*([A-Za-z0-9_.\\-]+)\\s*=")
+        Matcher key = Pattern.compile("^\\s*([A-Za-z0-9_.\\-]+)\\s*=")
                 .matcher(lines[line - 1]);
         String table = "";
-        java.util.regex.Pattern header = java.util.regex.Pattern.compile("^\\s*\\[{1,2}\\s*([A-Za-z0-9_.\\-]+)\\s*]{1,2}");
+        Pattern header = Pattern.compile("^\\s*\\[{1,2}\\s*([A-Za-z0-9_.\\-]+)\\s*]{1,2}");
         for (int i = line - 1; i >= 0; i--) {
-            java.util.regex.Matcher h = header.matcher(lines[i]);
+            Matcher h = header.matcher(lines[i]);
             if (h.find()) {
                 table = h.group(1);
                 break;

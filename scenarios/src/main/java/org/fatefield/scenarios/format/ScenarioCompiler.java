@@ -1,5 +1,6 @@
 package org.fatefield.scenarios.format;
 
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.LinkedHashSet;
@@ -14,19 +15,20 @@ import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.engine.division.CellSize;
 import org.fatefield.engine.division.CycleTimeDistribution;
-import org.fatefield.engine.division.SizeControl;
 import org.fatefield.engine.division.PartitionMode;
 import org.fatefield.engine.division.Partitioning;
+import org.fatefield.engine.division.SizeControl;
 import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.fate.FateRule;
 import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.field.PiecewiseLinear;
+import org.fatefield.engine.mechanics.DomainShape;
 import org.fatefield.engine.tissue.CircuitSetup;
 import org.fatefield.engine.tissue.GrowthSpec;
-import org.fatefield.engine.variability.ExtrinsicNoise;
 import org.fatefield.engine.tissue.NoiseMode;
-import org.fatefield.engine.tissue.TissueSpec;
 import org.fatefield.engine.tissue.Timing;
+import org.fatefield.engine.tissue.TissueSpec;
+import org.fatefield.engine.variability.ExtrinsicNoise;
 import org.tomlj.TomlArray;
 import org.tomlj.TomlParseResult;
 import org.tomlj.TomlTable;
@@ -46,10 +48,10 @@ final class ScenarioCompiler {
     private final TomlValues values;
 
     private final CircuitDocument circuitDocument;
-    private final java.nio.file.Path folder;
+    private final Path folder;
 
     ScenarioCompiler(String file, TomlParseResult toml, ScenarioChecker locator, CircuitDocument circuitDocument,
-            java.nio.file.Path folder) {
+            Path folder) {
         this.folder = folder;
         this.file = file;
         this.toml = toml;
@@ -281,7 +283,7 @@ final class ScenarioCompiler {
                 new CycleTimeDistribution(kind, values.number(division, "division", "cycle_mean"), cv), partition,
                 GrowthSpec.DivisionAxis.valueOf(values.text(division, "division", "axis").toUpperCase(Locale.ROOT)),
                 values.number(division, "division", "death_rate"), dilution, values.number(tissue, "tissue", "adhesion"),
-                org.fatefield.engine.mechanics.DomainShape.valueOf(values.text(tissue, "tissue", "shape").toUpperCase(Locale.ROOT)), size);
+                DomainShape.valueOf(values.text(tissue, "tissue", "shape").toUpperCase(Locale.ROOT)), size);
     }
 
 }

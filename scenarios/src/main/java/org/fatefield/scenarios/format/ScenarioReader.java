@@ -7,10 +7,11 @@ import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.HashSet;
 import java.util.HexFormat;
-import java.util.Set;
 import java.util.List;
+import java.util.Set;
 import org.tomlj.TomlParseResult;
 
 /**
@@ -102,7 +103,7 @@ public final class ScenarioReader {
     }
 
     private static byte[] concat(byte[] a, byte[] b) {
-        byte[] out = java.util.Arrays.copyOf(a, a.length + b.length);
+        byte[] out = Arrays.copyOf(a, a.length + b.length);
         System.arraycopy(b, 0, out, a.length, b.length);
         return out;
     }

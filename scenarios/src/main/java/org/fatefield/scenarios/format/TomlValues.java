@@ -1,6 +1,7 @@
 package org.fatefield.scenarios.format;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.fatefield.engine.field.PiecewiseLinear;
 import org.tomlj.TomlArray;
@@ -79,7 +80,7 @@ final class TomlValues {
         double[][] out = new double[n][n];
         if (rows == null) {
             for (double[] row : out) {
-                java.util.Arrays.fill(row, fill);
+                Arrays.fill(row, fill);
             }
             return out;
         }

@@ -2,11 +2,13 @@ package org.fatefield.scenarios.output;
 
 import java.io.BufferedInputStream;
 import java.io.BufferedOutputStream;
+import java.io.ByteArrayInputStream;
 import java.io.DataInputStream;
 import java.io.DataOutputStream;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
 import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.scenarios.format.Scenario;
 
@@ -36,7 +38,7 @@ final class Checkpoints {
 
         /** Restores the tissue state into a started tissue. */
         void restoreInto(Tissue tissue) throws IOException {
-            tissue.readCheckpoint(new DataInputStream(new java.io.ByteArrayInputStream(state)));
+            tissue.readCheckpoint(new DataInputStream(new ByteArrayInputStream(state)));
         }
     }
 
@@ -49,8 +51,8 @@ final class Checkpoints {
             out.writeLong(lineageBytes);
             tissue.writeCheckpoint(out);
         }
-        Files.move(temporary, folder.resolve(NAME), java.nio.file.StandardCopyOption.REPLACE_EXISTING,
-                java.nio.file.StandardCopyOption.ATOMIC_MOVE);
+        Files.move(temporary, folder.resolve(NAME), StandardCopyOption.REPLACE_EXISTING,
+                StandardCopyOption.ATOMIC_MOVE);
     }
 
     /** Reads the folder's checkpoint, checking it belongs to this scenario and seed. */

@@ -5,10 +5,12 @@ import java.io.IOException;
 import java.io.Reader;
 import java.io.UncheckedIOException;
 import java.io.Writer;
+import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
 import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Deque;
@@ -56,11 +58,11 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
         this.partial = folder.resolve("." + TABLE + ".partial");
         this.fates = List.copyOf(fates);
         if (resumeAt >= 0) {
-            try (java.nio.channels.FileChannel channel = java.nio.channels.FileChannel.open(partial,
-                    java.nio.file.StandardOpenOption.WRITE)) {
+            try (FileChannel channel = FileChannel.open(partial,
+                    StandardOpenOption.WRITE)) {
                 channel.truncate(resumeAt);
             }
-            this.out = Files.newBufferedWriter(partial, StandardCharsets.UTF_8, java.nio.file.StandardOpenOption.APPEND);
+            this.out = Files.newBufferedWriter(partial, StandardCharsets.UTF_8, StandardOpenOption.APPEND);
         } else {
             this.out = Files.newBufferedWriter(partial, StandardCharsets.UTF_8);
             out.write(HEADER);

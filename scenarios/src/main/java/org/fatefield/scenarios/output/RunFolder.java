@@ -2,6 +2,7 @@ package org.fatefield.scenarios.output;
 
 import java.io.IOException;
 import java.io.OutputStream;
+import java.io.OutputStreamWriter;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
@@ -90,7 +91,7 @@ public final class RunFolder {
     /** Writes a UTF-8 text file atomically. */
     public Path writeText(String name, TextContent content) throws IOException {
         return write(name, out -> {
-            Writer writer = new java.io.OutputStreamWriter(out, StandardCharsets.UTF_8);
+            Writer writer = new OutputStreamWriter(out, StandardCharsets.UTF_8);
             content.writeTo(writer);
             writer.flush();
         });

@@ -116,7 +116,7 @@ public final class ScenarioRunner {
         folder.writeText(LineageFiles.TREES, w -> LineageFiles.writeTrees(out.resolve(LineageFiles.TABLE), tissue.time(), w));
         files.add(LineageFiles.TREES);
         files.addAll(RunMetrics.of(tissue).write(folder, tissue.series().fateNames(), seed,
-                scenario.tissue().growth().partition().mode().name().toLowerCase(java.util.Locale.ROOT)));
+                scenario.tissue().growth().partition().mode().name().toLowerCase(Locale.ROOT)));
         folder.writeText(TIMESERIES, w -> RunTables.writeTimeSeries(tissue.series(), w));
         files.add(TIMESERIES);
         folder.writeText(CELLS, w -> RunTables.writeCells(tissue, w));

@@ -9,6 +9,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import org.apache.commons.csv.CSVRecord;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.viz.chart.ChartFiles;
@@ -114,6 +115,6 @@ public final class ReplicateReport {
     }
 
     private static String number(JsonElement e) {
-        return e == null || e.isJsonNull() ? "–" : String.format(java.util.Locale.ROOT, "%.1f", e.getAsDouble());
+        return e == null || e.isJsonNull() ? "–" : String.format(Locale.ROOT, "%.1f", e.getAsDouble());
     }
 }

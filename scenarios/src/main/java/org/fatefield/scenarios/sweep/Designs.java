@@ -1,6 +1,7 @@
 package org.fatefield.scenarios.sweep;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.hipparchus.random.SobolSequenceGenerator;
@@ -28,7 +29,7 @@ public final class Designs {
             List<double[]> next = new ArrayList<>();
             for (double[] prefix : points) {
                 for (double v : p.gridValues()) {
-                    double[] point = java.util.Arrays.copyOf(prefix, prefix.length + 1);
+                    double[] point = Arrays.copyOf(prefix, prefix.length + 1);
                     point[prefix.length] = v;
                     next.add(point);
                 }

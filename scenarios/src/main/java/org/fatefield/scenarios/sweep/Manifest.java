@@ -10,6 +10,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVPrinter;
 import org.apache.commons.csv.CSVRecord;
 import org.fatefield.circuits.random.RandomStreams;
@@ -91,7 +92,7 @@ public record Manifest(List<String> keys, List<Run> runs) {
                     + folder);
         }
         try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8);
-                org.apache.commons.csv.CSVParser parser = CSVFormat.DEFAULT.builder().setHeader()
+                CSVParser parser = CSVFormat.DEFAULT.builder().setHeader()
                         .setSkipHeaderRecord(true).get().parse(in)) {
             List<String> header = parser.getHeaderNames();
             List<CSVRecord> records = parser.getRecords();

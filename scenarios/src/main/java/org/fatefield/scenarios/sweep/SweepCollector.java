@@ -7,6 +7,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -132,7 +133,7 @@ public final class SweepCollector {
         for (int p = 0; p < order.length; p++) {
             order[p] = p;
         }
-        java.util.Arrays.sort(order, (a, b) -> Double.compare(pointValues[a][0], pointValues[b][0]));
+        Arrays.sort(order, (a, b) -> Double.compare(pointValues[a][0], pointValues[b][0]));
         for (int m = 0; m < metricNames.size(); m++) {
             String metric = metricNames.get(m);
             double[] x = new double[order.length];
@@ -160,7 +161,7 @@ public final class SweepCollector {
         if (n == 0) {
             return new double[] {0, Double.NaN, Double.NaN, Double.NaN, Double.NaN};
         }
-        double mean = java.util.Arrays.stream(v).average().orElse(Double.NaN);
+        double mean = Arrays.stream(v).average().orElse(Double.NaN);
         if (n == 1) {
             return new double[] {1, mean, Double.NaN, Double.NaN, Double.NaN};
         }

@@ -7,11 +7,13 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import org.fatefield.circuits.random.RandomStreams;
 import org.fatefield.scenarios.builtin.BuiltinScenarios;
 import org.fatefield.scenarios.format.Problem;
 import org.fatefield.scenarios.format.ScenarioException;
 import org.tomlj.Toml;
 import org.tomlj.TomlArray;
+import org.tomlj.TomlInvalidTypeException;
 import org.tomlj.TomlParseResult;
 import org.tomlj.TomlPosition;
 import org.tomlj.TomlTable;
@@ -111,7 +113,7 @@ public record SweepDefinition(String scenarioText, String scenarioLabel, String 
             String path = "parameter[" + (i + 1) + "]";
             try {
                 parameters.add(parameter(p));
-            } catch (IllegalArgumentException | ClassCastException | org.tomlj.TomlInvalidTypeException e) {
+            } catch (IllegalArgumentException | ClassCastException | TomlInvalidTypeException e) {
                 problems.add(at(label, p, p.contains("key") ? "key" : p.keySet().iterator().next(), path,
                         e.getMessage()));
             }
@@ -172,7 +174,7 @@ public record SweepDefinition(String scenarioText, String scenarioLabel, String 
         }
         List<double[]> unit = design.equals("sobol") ? Designs.sobol(points, parameters.size())
                 : Designs.latinHypercube(points, parameters.size(),
-                        org.fatefield.circuits.random.RandomStreams.of(seed).stream(-7));
+                        RandomStreams.of(seed).stream(-7));
         for (double[] u : unit) {
             double[] v = new double[u.length];
             for (int j = 0; j < u.length; j++) {

@@ -12,6 +12,7 @@ import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
@@ -19,6 +20,7 @@ import java.util.concurrent.atomic.AtomicInteger;
 import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioReader;
+import org.fatefield.scenarios.output.Progress;
 import org.fatefield.scenarios.output.RunMetrics;
 
 /**
@@ -72,9 +74,9 @@ public final class SweepRunner {
         AtomicInteger failed = new AtomicInteger();
         long start = System.nanoTime();
         boolean terminal = System.console() != null;
-        org.fatefield.scenarios.output.Progress bar = terminal
-                ? org.fatefield.scenarios.output.Progress.forConsole("sweep", todo.size(), log)
-                : org.fatefield.scenarios.output.Progress.silent();
+        Progress bar = terminal
+                ? Progress.forConsole("sweep", todo.size(), log)
+                : Progress.silent();
         ExecutorService executor = Executors.newFixedThreadPool(Math.max(1, workers));
         try {
             List<Future<?>> futures = new ArrayList<>();
@@ -105,7 +107,7 @@ public final class SweepRunner {
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
             throw new IOException("interrupted", e);
-        } catch (java.util.concurrent.ExecutionException e) {
+        } catch (ExecutionException e) {
             throw new IOException("a run crashed the sweep runner: " + e.getCause(), e.getCause());
         } finally {
             executor.shutdownNow();

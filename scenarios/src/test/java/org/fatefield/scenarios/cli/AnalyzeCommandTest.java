@@ -1,9 +1,5 @@
 package org.fatefield.scenarios.cli;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertNotEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.Reader;
@@ -11,6 +7,7 @@ import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.function.DoubleUnaryOperator;
 import javax.xml.parsers.DocumentBuilderFactory;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
@@ -19,6 +16,10 @@ import org.hipparchus.analysis.solvers.BrentSolver;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.w3c.dom.Document;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
 
 class AnalyzeCommandTest {
 
@@ -42,7 +43,7 @@ class AnalyzeCommandTest {
         double s = 0.2;
         double theta = 0.5;
         double n = 4;
-        java.util.function.DoubleUnaryOperator r = x -> (1 - s * Hill.activationSlope(x, theta, n))
+        DoubleUnaryOperator r = x -> (1 - s * Hill.activationSlope(x, theta, n))
                 / Hill.activationSlope(x, theta, n);
         double state = new BrentSolver(1e-15, 1e-15, 1e-15).solve(1000,
                 x -> b + s * Hill.activation(x, theta, n) + r.applyAsDouble(x) * Hill.repression(x, theta, n) - x,

@@ -1,21 +1,22 @@
 package org.fatefield.scenarios.cli;
 
-import static org.junit.jupiter.api.Assertions.assertArrayEquals;
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
-import static org.junit.jupiter.api.Assertions.assertNotEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Arrays;
 import java.util.List;
 import org.fatefield.scenarios.builtin.BuiltinScenarios;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
 
 class RunCommandTest {
 
@@ -56,7 +57,7 @@ class RunCommandTest {
         }
         Path third = tmp.resolve("third");
         assertEquals(0, fatefield("run", scenario.toString(), "--out", third.toString(), "--seed", "6", "--quiet").code());
-        assertFalse(java.util.Arrays.equals(Files.readAllBytes(first.resolve("cells.csv")),
+        assertFalse(Arrays.equals(Files.readAllBytes(first.resolve("cells.csv")),
                 Files.readAllBytes(third.resolve("cells.csv"))), "another seed should give another tissue");
     }
 

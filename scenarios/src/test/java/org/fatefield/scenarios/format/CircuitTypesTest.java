@@ -1,16 +1,20 @@
 package org.fatefield.scenarios.format;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertThrows;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.util.List;
 import org.fatefield.circuits.model.CustomNetwork;
 import org.fatefield.circuits.model.HillNetwork;
 import org.fatefield.circuits.model.ReactionNetwork;
+import org.fatefield.engine.field.MorphogenField;
 import org.fatefield.scenarios.builtin.BuiltinScenarios;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
 
 /** Hill-network and custom circuits written in a scenario. */
 class CircuitTypesTest {
@@ -123,26 +127,26 @@ class CircuitTypesTest {
     }
 
     @Test
-    void aCircuitFileCanBeIncluded(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir) throws Exception {
-        java.nio.file.Files.writeString(dir.resolve("lum-ark.toml"), CUSTOM_CIRCUIT);
-        java.nio.file.Path scenario = dir.resolve("fold.toml");
-        java.nio.file.Files.writeString(scenario, demoWithCircuit("[circuit]\nfile = \"lum-ark.toml\"\n"));
+    void aCircuitFileCanBeIncluded(@TempDir Path dir) throws Exception {
+        Files.writeString(dir.resolve("lum-ark.toml"), CUSTOM_CIRCUIT);
+        Path scenario = dir.resolve("fold.toml");
+        Files.writeString(scenario, demoWithCircuit("[circuit]\nfile = \"lum-ark.toml\"\n"));
         Scenario s = ScenarioReader.read(scenario);
         assertTrue(s.tissue().circuit().network() instanceof CustomNetwork);
         assertEquals(List.of("Lum", "Ark"), s.tissue().circuit().network().speciesNames());
 
-        java.nio.file.Files.writeString(dir.resolve("lum-ark.toml"), CUSTOM_CIRCUIT.replace("d = 1.0", "d = \"one\""));
+        Files.writeString(dir.resolve("lum-ark.toml"), CUSTOM_CIRCUIT.replace("d = 1.0", "d = \"one\""));
         ScenarioException bad = assertThrows(ScenarioException.class, () -> ScenarioReader.read(scenario));
         Problem p = bad.problems().get(0);
         assertTrue(p.file().endsWith("lum-ark.toml"), p.format());
         assertEquals("circuit.parameters.d", p.keyPath());
         assertEquals(List.of(CUSTOM_CIRCUIT.split("\n")).indexOf("d = 1.0") + 1, p.line());
 
-        java.nio.file.Files.writeString(scenario, demoWithCircuit("[circuit]\nfile = \"../elsewhere.toml\"\n"));
+        Files.writeString(scenario, demoWithCircuit("[circuit]\nfile = \"../elsewhere.toml\"\n"));
         ScenarioException outside = assertThrows(ScenarioException.class, () -> ScenarioReader.read(scenario));
         assertTrue(outside.getMessage().contains("in this scenario's folder"), outside.getMessage());
 
-        java.nio.file.Files.writeString(scenario,
+        Files.writeString(scenario,
                 demoWithCircuit("[circuit]\nfile = \"lum-ark.toml\"\nnoise = \"none\"\n"));
         ScenarioException mixed = assertThrows(ScenarioException.class, () -> ScenarioReader.read(scenario));
         assertTrue(mixed.problems().stream().anyMatch(q -> q.keyPath().equals("circuit.noise")), mixed.getMessage());
@@ -161,28 +165,28 @@ class CircuitTypesTest {
     }
 
     @Test
-    void furtherFieldsSecretionAndMeasuredProfiles(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir)
+    void furtherFieldsSecretionAndMeasuredProfiles(@TempDir Path dir)
             throws Exception {
         String demo = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8);
-        java.nio.file.Files.writeString(dir.resolve("glim.csv"), "x_um,value\n0,3.0\n300,0.5\n600,0.0\n");
+        Files.writeString(dir.resolve("glim.csv"), "x_um,value\n0,3.0\n300,0.5\n600,0.0\n");
         String text = demo.replace("initial = 0.0\n", "initial = 0.0\nprofile = \"glim.csv\"\n")
                 .replace("[[coupling]]", "[[field]]\nname = \"quench\"\ndiffusion = 400.0\ndecay = 1.0\n"
                         + "secreted_by = \"photocyte\"\nsecretion_rate = 50.0\nuptake = 0.1\n\n[[coupling]]")
                 .replace("hill = 2\n", "hill = 2\n\n[[coupling]]\nparameter = \"Lum.basal\"\nfield = \"quench\"\n"
                         + "form = \"linear\"\nbase = 0.05\ngain = -0.01\n");
-        java.nio.file.Path file = dir.resolve("two-fields.toml");
-        java.nio.file.Files.writeString(file, text);
+        Path file = dir.resolve("two-fields.toml");
+        Files.writeString(file, text);
         Scenario s = ScenarioReader.read(file);
         assertEquals(1, s.tissue().others().size());
         assertEquals("quench", s.tissue().others().get(0).name());
         assertEquals(1, s.tissue().mapping().couplings().get(1).field());
         assertEquals(0, s.tissue().others().get(0).exchange().secretingFate());
-        org.fatefield.engine.field.MorphogenField measured = new org.fatefield.engine.field.MorphogenField(
+        MorphogenField measured = new MorphogenField(
                 s.tissue().morphogen(), 600, 300);
         // Square 14 is centred at x = 145 µm: 3.0 + (0.5 - 3.0) * 145 / 300 by the table.
         assertEquals(3.0 - 2.5 * 145 / 300, measured.value(14, 3), 1e-12);
 
-        java.nio.file.Files.writeString(file, text.replace("field = \"quench\"", "field = \"quenc\"")
+        Files.writeString(file, text.replace("field = \"quench\"", "field = \"quenc\"")
                 .replace("secreted_by = \"photocyte\"", "secreted_by = \"photocytes\""));
         ScenarioException e = assertThrows(ScenarioException.class, () -> ScenarioReader.read(file));
         assertTrue(e.getMessage().contains("secreted_by = \"photocytes\": is not a fate"), e.getMessage());

@@ -1,16 +1,20 @@
 package org.fatefield.scenarios.format;
 
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.fatefield.engine.cell.Cell;
+import org.fatefield.engine.division.CellSize;
+import org.fatefield.engine.division.PartitionMode;
+import org.fatefield.engine.division.SizeControl;
+import org.fatefield.engine.tissue.Tissue;
+import org.fatefield.scenarios.builtin.BuiltinScenarios;
+import org.junit.jupiter.api.Test;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.nio.charset.StandardCharsets;
-import java.util.List;
-import org.fatefield.scenarios.builtin.BuiltinScenarios;
-import org.fatefield.engine.division.CellSize;
-import org.fatefield.engine.division.PartitionMode;
-import org.fatefield.engine.division.SizeControl;
-import org.junit.jupiter.api.Test;
 
 class ScenarioReaderTest {
 
@@ -45,15 +49,15 @@ class ScenarioReaderTest {
 
     @Test
     void everyExampleScenarioIsValid() throws Exception {
-        java.nio.file.Path folder = java.nio.file.Path.of("examples");
-        List<java.nio.file.Path> files;
-        try (var listing = java.nio.file.Files.list(folder)) {
+        Path folder = Path.of("examples");
+        List<Path> files;
+        try (var listing = Files.list(folder)) {
             files = listing.filter(p -> p.toString().endsWith(".toml")).toList();
         }
         assertTrue(!files.isEmpty(), "no examples in " + folder.toAbsolutePath());
-        for (java.nio.file.Path file : files) {
+        for (Path file : files) {
             Scenario scenario = ScenarioReader.parse(file.getFileName().toString(), file.toString(),
-                    java.nio.file.Files.readAllBytes(file));
+                    Files.readAllBytes(file));
             assertTrue(scenario.tissue().growth().initialCells() > 0, file.toString());
         }
     }
@@ -72,10 +76,10 @@ class ScenarioReaderTest {
         String text = demo().replace("repulsion = 20.0", "repulsion = 20.0\nshape = \"strip\"")
                 .replace("duration = 48.0", "duration = 2.0");
         Scenario scenario = ScenarioReader.parse("test", "test.toml", text.getBytes(StandardCharsets.UTF_8));
-        org.fatefield.engine.tissue.Tissue tissue = new org.fatefield.engine.tissue.Tissue(scenario.tissue(), 3);
+        Tissue tissue = new Tissue(scenario.tissue(), 3);
         tissue.start();
         tissue.runToEnd();
-        for (org.fatefield.engine.cell.Cell c : tissue.cells()) {
+        for (Cell c : tissue.cells()) {
             assertTrue(c.y() >= 0 && c.y() < 300, "y = " + c.y());
         }
         tissue.finish();

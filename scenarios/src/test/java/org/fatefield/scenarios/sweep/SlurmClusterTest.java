@@ -1,17 +1,19 @@
 package org.fatefield.scenarios.sweep;
 
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.concurrent.TimeUnit;
+import org.fatefield.scenarios.builtin.BuiltinScenarios;
+import org.fatefield.scenarios.cli.FatefieldCommandAccess;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.Path;
-import org.fatefield.scenarios.builtin.BuiltinScenarios;
-import org.fatefield.scenarios.cli.FatefieldCommandAccess;
-import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 
 /**
  * A sweep submitted to a real SLURM scheduler (the single-node cluster .ci/run starts) gives the
@@ -26,8 +28,8 @@ class SlurmClusterTest {
     private static boolean schedulerAnswers() {
         try {
             Process p = new ProcessBuilder("sinfo", "-h").redirectErrorStream(true).start();
-            return p.waitFor(20, java.util.concurrent.TimeUnit.SECONDS) && p.exitValue() == 0;
-        } catch (java.io.IOException e) {
+            return p.waitFor(20, TimeUnit.SECONDS) && p.exitValue() == 0;
+        } catch (IOException e) {
             return false;
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();

@@ -1,10 +1,5 @@
 package org.fatefield.scenarios.sweep;
 
-import static org.junit.jupiter.api.Assertions.assertArrayEquals;
-import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertFalse;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
@@ -13,6 +8,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 import org.fatefield.circuits.random.RandomStreams;
 import org.fatefield.scenarios.builtin.BuiltinScenarios;
@@ -20,6 +16,11 @@ import org.fatefield.scenarios.cli.FatefieldCommandAccess;
 import org.fatefield.scenarios.format.ScenarioReader;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
 
 class SweepTest {
 
@@ -52,7 +53,7 @@ class SweepTest {
         assertEquals(24, seen.size());
         // SLURM array task 5 of 7 (ids 3..9) is shard 3/7.
         assertArrayEquals(new int[] {3, 7}, FatefieldCommandAccess.shard(null,
-                java.util.Map.of("SLURM_ARRAY_TASK_ID", "5", "SLURM_ARRAY_TASK_COUNT", "7", "SLURM_ARRAY_TASK_MIN", "3")));
+                Map.of("SLURM_ARRAY_TASK_ID", "5", "SLURM_ARRAY_TASK_COUNT", "7", "SLURM_ARRAY_TASK_MIN", "3")));
     }
 
     @Test

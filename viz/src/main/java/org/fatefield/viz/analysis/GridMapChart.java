@@ -5,6 +5,8 @@ import java.awt.Paint;
 import org.fatefield.viz.chart.ChartStyle;
 import org.fatefield.viz.palette.FatePalette;
 import org.jfree.chart.JFreeChart;
+import org.jfree.chart.LegendItem;
+import org.jfree.chart.LegendItemCollection;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.LookupPaintScale;
@@ -42,9 +44,9 @@ public final class GridMapChart {
         }
         JFreeChart chart = chart(data, scale, xs, ys, xName, yName, "Basins of attraction", true);
         XYPlot plot = (XYPlot) chart.getPlot();
-        org.jfree.chart.LegendItemCollection items = new org.jfree.chart.LegendItemCollection();
+        LegendItemCollection items = new LegendItemCollection();
         for (int k = 0; k < attractorNames.length; k++) {
-            items.add(new org.jfree.chart.LegendItem(attractorNames[k], (Paint) scale.getPaint(k)));
+            items.add(new LegendItem(attractorNames[k], (Paint) scale.getPaint(k)));
         }
         plot.setFixedLegendItems(items);
         return chart;

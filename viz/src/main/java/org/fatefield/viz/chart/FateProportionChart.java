@@ -11,6 +11,7 @@ import org.fatefield.viz.palette.FatePalette;
 import org.jfree.chart.ChartUtils;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.block.BlockBorder;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.title.TextTitle;
@@ -76,7 +77,7 @@ public final class FateProportionChart {
         chart.setTitle(new TextTitle(title, TITLE));
         chart.setBackgroundPaint(Color.WHITE);
         chart.getLegend().setItemFont(LABEL);
-        chart.getLegend().setFrame(org.jfree.chart.block.BlockBorder.NONE);
+        chart.getLegend().setFrame(BlockBorder.NONE);
         return chart;
     }
 

@@ -4,6 +4,8 @@ import java.awt.BorderLayout;
 import java.awt.Color;
 import java.awt.Dimension;
 import java.awt.GridLayout;
+import java.awt.event.ComponentAdapter;
+import java.awt.event.ComponentEvent;
 import java.awt.event.MouseAdapter;
 import java.awt.event.MouseEvent;
 import java.awt.geom.Point2D;
@@ -20,7 +22,10 @@ import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JSlider;
 import javax.swing.JTextArea;
+import javax.swing.JTextField;
 import javax.swing.JToggleButton;
+import javax.swing.ScrollPaneConstants;
+import javax.swing.SwingUtilities;
 import javax.swing.Timer;
 import org.fatefield.circuits.analysis.QuasiPotential;
 import org.fatefield.circuits.analysis.continuation.Branch;
@@ -50,7 +55,7 @@ public final class TissueWindow extends JFrame {
     private static final double LANDSCAPE_CEILING = 12;
 
     private final Function<String, Tissue> factory;
-    private final javax.swing.JTextField settings = new javax.swing.JTextField(28);
+    private final JTextField settings = new JTextField(28);
     private final List<Branch> branches;
     private final String parameter;
     private final DoubleFunction<QuasiPotential> landscape;
@@ -139,9 +144,9 @@ public final class TissueWindow extends JFrame {
         south.add(legend(), BorderLayout.EAST);
         add(top, BorderLayout.NORTH);
         add(canvasHolder, BorderLayout.CENTER);
-        canvasHolder.addComponentListener(new java.awt.event.ComponentAdapter() {
+        canvasHolder.addComponentListener(new ComponentAdapter() {
             @Override
-            public void componentResized(java.awt.event.ComponentEvent e) {
+            public void componentResized(ComponentEvent e) {
                 fitCanvas();
             }
         });
@@ -185,8 +190,8 @@ public final class TissueWindow extends JFrame {
         display = new Display2D(tissue.spec().width() * scale, tissue.spec().height() * scale, gui);
         display.header.setVisible(false);
         // MASON always shows both scroll bars; show them only when zoomed past the window.
-        display.display.setVerticalScrollBarPolicy(javax.swing.ScrollPaneConstants.VERTICAL_SCROLLBAR_AS_NEEDED);
-        display.display.setHorizontalScrollBarPolicy(javax.swing.ScrollPaneConstants.HORIZONTAL_SCROLLBAR_AS_NEEDED);
+        display.display.setVerticalScrollBarPolicy(ScrollPaneConstants.VERTICAL_SCROLLBAR_AS_NEEDED);
+        display.display.setHorizontalScrollBarPolicy(ScrollPaneConstants.HORIZONTAL_SCROLLBAR_AS_NEEDED);
         display.setBackdrop(Color.WHITE);
         display.insideDisplay.removeListeners();
         display.insideDisplay.addMouseListener(new MouseAdapter() {
@@ -211,7 +216,7 @@ public final class TissueWindow extends JFrame {
         showLandscape(middleOfBranches());
         refresh();
         revalidate();
-        javax.swing.SwingUtilities.invokeLater(this::fitCanvas);
+        SwingUtilities.invokeLater(this::fitCanvas);
     }
 
     /**

@@ -3,6 +3,7 @@ package org.fatefield.viz.tissue;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.io.OutputStream;
+import java.nio.file.Path;
 import java.util.List;
 import javax.imageio.IIOImage;
 import javax.imageio.ImageIO;
@@ -22,12 +23,12 @@ public final class AnimatedGif {
     }
 
     /** Writes the PNG frames in {@code files} (read one at a time), each shown for {@code delayMillis}. */
-    public static void write(List<java.nio.file.Path> files, int delayMillis, OutputStream out) throws IOException {
+    public static void write(List<Path> files, int delayMillis, OutputStream out) throws IOException {
         List<BufferedImage> none = List.of();
         write(none, files, delayMillis, out);
     }
 
-    private static void write(List<BufferedImage> frames, List<java.nio.file.Path> files, int delayMillis,
+    private static void write(List<BufferedImage> frames, List<Path> files, int delayMillis,
             OutputStream out) throws IOException {
         int count = frames.isEmpty() ? files.size() : frames.size();
         if (count == 0) {

@@ -1,10 +1,11 @@
 package org.fatefield.circuits.analysis.continuation;
 
+import java.util.Arrays;
+import java.util.List;
+import org.junit.jupiter.api.Test;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.util.List;
-import org.junit.jupiter.api.Test;
 
 /**
  * The Bratu problem u'' + lambda e^u = 0, u(0) = u(1) = 0, by central finite differences with N
@@ -34,7 +35,7 @@ class BratuTest {
             @Override
             public void jacobian(double[] u, double lambda, double[][] out) {
                 for (int i = 0; i < points; i++) {
-                    java.util.Arrays.fill(out[i], 0.0);
+                    Arrays.fill(out[i], 0.0);
                     out[i][i] = -2 / h2 + lambda * Math.exp(u[i]);
                     if (i > 0) {
                         out[i][i - 1] = 1 / h2;
