@@ -1,6 +1,6 @@
 package org.fatefield.circuits.expr;
 
-import org.fatefield.circuits.model.Hill;
+import org.fatefield.circuits.kinetics.Hill;
 
 /**
  * A rate law compiled for fast repeated evaluation: the tree becomes a tree of small final

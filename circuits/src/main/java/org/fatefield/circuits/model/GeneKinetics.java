@@ -1,5 +1,7 @@
 package org.fatefield.circuits.model;
 
+import org.fatefield.circuits.kinetics.Hill;
+
 /**
  * Kinetic parameters of one gene of the self-activating mutual-repression switch.
  *

@@ -3,6 +3,7 @@ package org.fatefield.circuits.model;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import org.fatefield.circuits.kinetics.Hill;
 
 /**
  * A general gene-regulatory network of n genes with Hill-type interactions.

@@ -2,6 +2,7 @@ package org.fatefield.circuits.model;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.fatefield.circuits.kinetics.Hill;
 
 /**
  * The two-gene switch in which each gene activates itself and represses the other.

@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.fatefield.circuits.model.GeneKinetics;
-import org.fatefield.circuits.model.Hill;
+import org.fatefield.circuits.kinetics.Hill;
 import org.fatefield.circuits.model.SelfActivatingSwitch;
 import org.hipparchus.analysis.UnivariateFunction;
 import org.hipparchus.analysis.solvers.BrentSolver;

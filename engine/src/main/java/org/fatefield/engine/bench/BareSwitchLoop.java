@@ -2,7 +2,7 @@ package org.fatefield.engine.bench;
 
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
-import org.fatefield.circuits.model.Hill;
+import org.fatefield.circuits.kinetics.Hill;
 import org.fatefield.circuits.random.RandomStreams;
 import org.fatefield.circuits.random.SwitchableSource;
 

@@ -1,7 +1,7 @@
 package org.fatefield.engine.coupling;
 
 import java.util.Arrays;
-import org.fatefield.circuits.model.Hill;
+import org.fatefield.circuits.kinetics.Hill;
 import org.fatefield.engine.field.PiecewiseLinear;
 
 /**

@@ -16,8 +16,8 @@ import org.fatefield.circuits.analysis.continuation.FoldCurveContinuation.FoldCu
 import org.fatefield.circuits.analysis.continuation.FoldCurveContinuation.FoldPoint;
 import org.fatefield.circuits.analysis.continuation.SpecialPoint;
 import org.fatefield.circuits.model.ReactionNetwork;
-import org.fatefield.engine.record.RunTables;
 import org.fatefield.scenarios.output.RunFolder;
+import org.fatefield.scenarios.output.RunTables;
 import org.fatefield.viz.analysis.BifurcationDiagramChart;
 import org.fatefield.viz.analysis.BistableRegionChart;
 import org.fatefield.viz.analysis.GridMapChart;

@@ -12,17 +12,17 @@ import java.util.concurrent.Callable;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.fatefield.engine.metrics.FateProfile;
-import org.fatefield.engine.record.RunTables;
 import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.output.Progress;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.output.RunMetrics;
+import org.fatefield.scenarios.output.RunTables;
 import org.fatefield.scenarios.output.ScenarioRunner;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
+import picocli.CommandLine;
 
 /** {@code fatefield replicates}: the same scenario on several seeds, and the precision of its boundaries. */
 @Command(name = "replicates", mixinStandardHelpOptions = true,

@@ -8,17 +8,17 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
-import org.fatefield.engine.record.RunTables;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.output.RunFolder;
+import org.fatefield.scenarios.output.RunTables;
 import org.fatefield.scenarios.robustness.Perturbation;
 import org.fatefield.scenarios.robustness.RobustnessAnalysis;
 import org.fatefield.viz.chart.ChartFiles;
 import org.fatefield.viz.chart.SensitivityChart;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
+import picocli.CommandLine;
 
 /** {@code fatefield robustness}: how the pattern shifts when each quantity changes a little. */
 @Command(name = "robustness", mixinStandardHelpOptions = true,

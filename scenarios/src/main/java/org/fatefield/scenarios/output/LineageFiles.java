@@ -21,7 +21,6 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.fatefield.engine.lineage.LineageRecord;
 import org.fatefield.engine.lineage.LineageSink;
-import org.fatefield.engine.record.RunTables;
 
 /**
  * {@code lineage.csv}, streamed to disk as cells divide (so memory does not grow with history;

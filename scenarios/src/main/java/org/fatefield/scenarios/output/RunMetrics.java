@@ -12,7 +12,6 @@ import org.apache.commons.csv.CSVPrinter;
 import org.fatefield.engine.metrics.FateProfile;
 import org.fatefield.engine.metrics.LineageStatistics;
 import org.fatefield.engine.metrics.PredictedBoundary;
-import org.fatefield.engine.record.RunTables;
 import org.fatefield.engine.tissue.Tissue;
 
 /**

@@ -11,7 +11,7 @@ import java.util.function.DoubleUnaryOperator;
 import javax.xml.parsers.DocumentBuilderFactory;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
-import org.fatefield.circuits.model.Hill;
+import org.fatefield.circuits.kinetics.Hill;
 import org.hipparchus.analysis.solvers.BrentSolver;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;

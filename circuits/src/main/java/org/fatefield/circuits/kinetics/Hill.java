@@ -1,4 +1,4 @@
-package org.fatefield.circuits.model;
+package org.fatefield.circuits.kinetics;
 
 /**
  * Hill functions, the standard phenomenological form of cooperative activation and repression.

@@ -1,4 +1,6 @@
-package org.fatefield.engine.record;
+package org.fatefield.scenarios.output;
+
+import org.fatefield.engine.record.TimeSeries;
 
 import java.io.IOException;
 import java.io.Writer;
