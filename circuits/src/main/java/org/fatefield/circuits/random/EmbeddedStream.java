@@ -10,7 +10,9 @@ import org.apache.commons.rng.UniformRandomProvider;
  * <p>Why not Commons RNG's {@code XoRoShiRo128PlusPlus}, which gives the same sequence: a tissue
  * holds one stream per cell, and a separate generator object costs each cell about 52 bytes
  * (object header, cached bits, a reference) and a pointer chase on every draw; at a million
- * cells that is a fifth of the heap. A class that embeds the state (a cell) extends this one.
+ * cells that is a fifth of the heap. A class whose objects must hold their own stream extends
+ * this one; where the stream must not be part of the object's public face (a cell), the words
+ * are kept as plain fields and stepped by {@link XoroshiroStep}.
  * Only {@link #nextLong()} is implemented here; the other draws are
  * {@link UniformRandomProvider}'s defaults built on it. Tests check the sequence word for word
  * against Commons RNG.
@@ -29,11 +31,9 @@ public abstract class EmbeddedStream implements UniformRandomProvider {
     public final long nextLong() {
         long s0 = state0;
         long s1 = state1;
-        long result = Long.rotateLeft(s0 + s1, 17) + s0;
-        s1 ^= s0;
-        state0 = Long.rotateLeft(s0, 49) ^ s1 ^ (s1 << 21);
-        state1 = Long.rotateLeft(s1, 28);
-        return result;
+        state0 = XoroshiroStep.nextWord0(s0, s1);
+        state1 = XoroshiroStep.nextWord1(s0, s1);
+        return XoroshiroStep.output(s0, s1);
     }
 
     /** First state word (checkpoints). */
@@ -48,9 +48,7 @@ public abstract class EmbeddedStream implements UniformRandomProvider {
 
     /** Sets the state words, as saved by {@link #streamWord0()} and {@link #streamWord1()}. */
     protected final void restoreStream(long word0, long word1) {
-        if (word0 == 0 && word1 == 0) {
-            throw new IllegalArgumentException("xoroshiro128++ state must not be all zero");
-        }
+        XoroshiroStep.checkState(word0, word1);
         this.state0 = word0;
         this.state1 = word1;
     }

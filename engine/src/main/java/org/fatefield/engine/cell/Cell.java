@@ -3,8 +3,7 @@ package org.fatefield.engine.cell;
 import java.io.DataInputStream;
 import java.io.DataOutputStream;
 import java.io.IOException;
-import org.apache.commons.rng.UniformRandomProvider;
-import org.fatefield.circuits.random.EmbeddedStream;
+import org.fatefield.circuits.random.XoroshiroStep;
 import org.fatefield.engine.division.SizeControl;
 
 /**
@@ -12,11 +11,17 @@ import org.fatefield.engine.division.SizeControl;
  *
  * <p>Each cell draws only from its own random stream, derived from the run seed and its id, so
  * the tissue's history does not depend on the order or thread in which cells are stepped. The
- * stream's state is part of the cell (it extends {@link EmbeddedStream}): a million cells then
- * need a million fewer objects.
+ * stream's two state words are fields of the cell (a million cells then need a million fewer
+ * objects), but the cell is not itself a random source: only a {@link CellRandom} pointed at it
+ * draws, and the architecture test allows that only inside the engine's tick, so a viewer
+ * cannot change a run by drawing from a cell.
  * The mutators are for the engine's tick; everything else only reads.
  */
-public final class Cell extends EmbeddedStream {
+public final class Cell {
+
+    /** State words of the cell's own xoroshiro128++ stream, stepped by {@link CellRandom}. */
+    long stream0;
+    long stream1;
 
     private final long id;
     private final long parentId;
@@ -59,7 +64,9 @@ public final class Cell extends EmbeddedStream {
      */
     public Cell(long id, long parentId, int generation, double birthTime, double cycleTime, double[] state,
             long[] stream, double x, double y, double birthVolume, double volume) {
-        super(stream);
+        XoroshiroStep.checkState(stream[0], stream[1]);
+        this.stream0 = stream[0];
+        this.stream1 = stream[1];
         if (!(birthVolume > 0) || !(volume > 0)) {
             throw new IllegalArgumentException("cell " + id + ": volumes must be greater than 0, got birth volume "
                     + birthVolume + " and volume " + volume);
@@ -89,8 +96,8 @@ public final class Cell extends EmbeddedStream {
         out.writeDouble(birthTime);
         out.writeDouble(cycleTime);
         writeArray(out, state);
-        out.writeLong(streamWord0());
-        out.writeLong(streamWord1());
+        out.writeLong(stream0);
+        out.writeLong(stream1);
         out.writeDouble(x);
         out.writeDouble(y);
         out.writeDouble(birthVolume);
@@ -137,7 +144,7 @@ public final class Cell extends EmbeddedStream {
      * of missing the cache on every cell.
      */
     public Cell relocated() {
-        Cell cell = new Cell(id, parentId, generation, birthTime, cycleTime, state.clone(), streamWords(), birthX,
+        Cell cell = new Cell(id, parentId, generation, birthTime, cycleTime, state.clone(), new long[] {stream0, stream1}, birthX,
                 birthY, birthVolume, volume);
         cell.x = x;
         cell.y = y;
@@ -233,11 +240,6 @@ public final class Cell extends EmbeddedStream {
     /** Volume at birth, in units of a mean newborn cell. */
     public double birthVolume() {
         return birthVolume;
-    }
-
-    /** The cell's random stream (the cell itself); only the engine's tick draws from it. */
-    public UniformRandomProvider random() {
-        return this;
     }
 
     /** The live circuit state, advanced in place by the tick. */

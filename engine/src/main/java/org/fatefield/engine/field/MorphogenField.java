@@ -39,6 +39,10 @@ public final class MorphogenField {
     /** Cells' secretion and uptake per square; null until cells first exchange (saves two grids). */
     private double[] exchangeSource;
     private double[] exchangeUptake;
+    /** Secreting cells and their summed volume (fixed point) per grid square, for gatherExchange. */
+    private int[] secretingCells;
+    private long[] coveredVolume;
+    private static final double FIXED_POINT = 0x1p40;
     private double time;
     private int adiWorkers;
 
@@ -109,22 +113,29 @@ public final class MorphogenField {
     /**
      * Gathers secretion and uptake by {@code cells} onto this field's grid for the next step:
      * each secreting cell adds its amount over the area of its square; uptake scales with the
-     * area the cell covers (radius from {@code newbornRadius} and its age).
+     * area the cell covers ({@code pi r^2}, which is the newborn area times the cell's volume).
+     * Counts and volumes are summed exactly (volumes in fixed point, to 2^-40), so the result does
+     * not depend on the order of {@code cells}.
      */
     public void gatherExchange(List<Cell> cells, double newbornRadius) {
         MorphogenSpec.CellExchange exchange = spec.exchange();
         double area = h * h;
         allocateExchange();
-        Arrays.fill(exchangeSource, 0.0);
-        Arrays.fill(exchangeUptake, 0.0);
+        Arrays.fill(secretingCells, 0);
+        Arrays.fill(coveredVolume, 0L);
+        int secreting = exchange.secretingFate();
         for (Cell cell : cells) {
             int k = squareOf(cell.x(), cell.y());
-            int secreting = exchange.secretingFate();
             if (secreting == MorphogenSpec.CellExchange.ALL || secreting == cell.fate()) {
-                exchangeSource[k] += exchange.secretionRate() / area;
+                secretingCells[k]++;
             }
-            double r = cell.radius(newbornRadius);
-            exchangeUptake[k] += exchange.uptake() * Math.PI * r * r / area;
+            coveredVolume[k] += Math.round(cell.volume() * FIXED_POINT);
+        }
+        double perCell = exchange.secretionRate() / area;
+        double perVolume = exchange.uptake() * Math.PI * newbornRadius * newbornRadius / area / FIXED_POINT;
+        for (int k = 0; k < exchangeSource.length; k++) {
+            exchangeSource[k] = secretingCells[k] * perCell;
+            exchangeUptake[k] = coveredVolume[k] * perVolume;
         }
     }
 
@@ -132,6 +143,8 @@ public final class MorphogenField {
         if (exchangeSource == null) {
             exchangeSource = new double[nx * ny];
             exchangeUptake = new double[nx * ny];
+            secretingCells = new int[nx * ny];
+            coveredVolume = new long[nx * ny];
         }
     }
 

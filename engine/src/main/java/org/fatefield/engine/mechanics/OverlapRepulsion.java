@@ -12,7 +12,8 @@ import org.fatefield.engine.parallel.BlockParallel;
  * <p>Each overlapping pair pushes apart along the line of centres with speed
  * {@code rate * overlap} shared equally; with adhesion, neighbours a little beyond contact pull
  * together with speed {@code adhesion * gap}; walls hold every disc inside the domain. Forces come
- * from a snapshot of positions (so the result does not depend on the order cells are visited)
+ * from a snapshot of positions in bucket and id order (so the result does not depend on the
+ * order cells are visited or stored)
  * and neighbours from a uniform bucket grid of side one largest diameter, so a step costs time
  * linear in the number of cells.
  */
@@ -30,6 +31,8 @@ public final class OverlapRepulsion {
     private double[] sy = new double[0];
     private double[] sr = new double[0];
     private int[] slotOfCell = new int[0];
+    private int[] cellOfSlot = new int[0];
+    private long[] idOfSlot = new long[0];
     private int[] bucketOfCell = new int[0];
     private int[] bucketStart = new int[0];
     private int[] bucketFill = new int[0];
@@ -111,7 +114,7 @@ public final class OverlapRepulsion {
                 bucketOfCell[i] = bucketOf(c.y(), sideY, gy) * gx + bucketOf(c.x(), side, gx);
             }
         });
-        assignSlots(n, gx * gy);
+        assignSlots(population, gx * gy);
         pool.forEach(n, (from, to, worker) -> {
             for (int i = from; i < to; i++) {
                 Cell c = population.get(i);
@@ -210,9 +213,13 @@ public final class OverlapRepulsion {
 
     /**
      * Counts the cells per bucket and gives each cell a slot, buckets in row-major order and
-     * cells in population order within a bucket (a counting sort: linear and deterministic).
+     * cells in order of id within a bucket (a counting sort, then an insertion sort of each
+     * bucket's few cells). The force on a cell is then summed in an order fixed by positions
+     * and ids, never by the population's memory order, so floating-point results do not depend
+     * on when the population was last reordered.
      */
-    private void assignSlots(int n, int buckets) {
+    private void assignSlots(CellPopulation population, int buckets) {
+        int n = population.size();
         if (bucketStart.length < buckets + 1) {
             bucketStart = new int[buckets + 1];
             bucketFill = new int[buckets];
@@ -227,7 +234,31 @@ public final class OverlapRepulsion {
         }
         System.arraycopy(bucketStart, 0, bucketFill, 0, buckets);
         for (int i = 0; i < n; i++) {
-            slotOfCell[i] = bucketFill[bucketOfCell[i]]++;
+            int slot = bucketFill[bucketOfCell[i]]++;
+            slotOfCell[i] = slot;
+            cellOfSlot[slot] = i;
+            idOfSlot[slot] = population.get(i).id();
+        }
+        for (int b = 0; b < buckets; b++) {
+            sortBucketById(bucketStart[b], bucketStart[b + 1]);
+        }
+    }
+
+    /** Insertion sort of slots {@code [from, to)} by cell id, keeping {@link #slotOfCell} in step. */
+    private void sortBucketById(int from, int to) {
+        for (int k = from + 1; k < to; k++) {
+            long id = idOfSlot[k];
+            int cell = cellOfSlot[k];
+            int j = k - 1;
+            while (j >= from && idOfSlot[j] > id) {
+                idOfSlot[j + 1] = idOfSlot[j];
+                cellOfSlot[j + 1] = cellOfSlot[j];
+                slotOfCell[cellOfSlot[j + 1]] = j + 1;
+                j--;
+            }
+            idOfSlot[j + 1] = id;
+            cellOfSlot[j + 1] = cell;
+            slotOfCell[cell] = j + 1;
         }
     }
 
@@ -249,6 +280,8 @@ public final class OverlapRepulsion {
             sy = new double[size];
             sr = new double[size];
             slotOfCell = new int[size];
+            cellOfSlot = new int[size];
+            idOfSlot = new long[size];
             bucketOfCell = new int[size];
         }
         if (largestVolumeOfWorker.length != workers) {

@@ -1,10 +1,12 @@
 package org.fatefield.engine.tissue;
 
+import java.util.Arrays;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.fatefield.circuits.random.EmbeddedStream;
 import org.fatefield.circuits.random.RandomStreams;
 import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.cell.CellPopulation;
+import org.fatefield.engine.cell.CellRandom;
 import org.fatefield.engine.division.CellSize;
 import org.fatefield.engine.lineage.Ancestry;
 import org.fatefield.engine.lineage.LineageRecord;
@@ -14,9 +16,11 @@ import org.fatefield.engine.mechanics.OverlapRepulsion;
 import org.fatefield.engine.variability.ExtrinsicNoise;
 
 /**
- * Divides every cell that is ready, in population order: writes the mother's lineage record,
- * shares her volume and molecules, and puts the first daughter in her slot and the second at
- * the end of the population. Every draw comes from the mother's own stream, then each daughter's.
+ * Divides every cell that is ready, in order of the mothers' ids (so the daughters' ids, and
+ * with them their random streams, do not depend on the population's memory order): writes the
+ * mother's lineage record, shares her volume and molecules, and puts the first daughter in her
+ * slot and the second at the end of the population. Every draw comes from the mother's own
+ * stream, then each daughter's.
  */
 final class CellDivision {
 
@@ -24,10 +28,13 @@ final class CellDivision {
     private final RandomStreams streams;
     private final double[] firstDaughter;
     private final double[] secondDaughter;
+    private final CellRandom random;
+    private long[] order = new long[0];
 
-    CellDivision(TissueSpec spec, RandomStreams streams) {
+    CellDivision(TissueSpec spec, RandomStreams streams, CellRandom random) {
         this.spec = spec;
         this.streams = streams;
+        this.random = random;
         int species = spec.circuit().network().speciesCount();
         this.firstDaughter = new double[species];
         this.secondDaughter = new double[species];
@@ -35,22 +42,20 @@ final class CellDivision {
 
     /**
      * Divides the cells of {@code population} marked in {@code ready} (by population index, as
-     * the cell loop found them at time {@code now}), in index order.
+     * the cell loop found them at time {@code now}), in order of id.
      */
     void divideReady(CellPopulation population, boolean[] ready, Ancestry ancestry, LineageSink lineage,
             double now) {
         GrowthSpec growth = spec.growth();
         CellSize size = growth.size();
-        int n = population.size();
-        for (int i = 0; i < n; i++) {
-            if (!ready[i]) {
-                continue;
-            }
+        int count = readyInIdOrder(population, ready);
+        for (int k = 0; k < count; k++) {
+            int i = (int) order[k];
             Cell mother = population.get(i);
             lineage.accept(new LineageRecord(mother.id(), mother.parentId(), mother.generation(), mother.birthTime(),
                     now, mother.birthX(), mother.birthY(), spec.fates().classify(mother.liveState()), -1, Double.NaN,
                     Double.NaN, mother.birthVolume(), mother.volume()));
-            UniformRandomProvider rng = mother.random();
+            UniformRandomProvider rng = random.of(mother);
             double fraction = size.firstFraction(rng);
             growth.partition().split(mother.liveState(), mother.volume(), fraction, spec.circuit().systemSize(), rng,
                     firstDaughter, secondDaughter);
@@ -84,8 +89,38 @@ final class CellDivision {
                 cx, cy, volume, volume);
         cell.setFate(mother.fate(), mother.fateSince());
         if (!spec.extrinsic().isEmpty()) {
-            cell.setScores(ExtrinsicNoise.daughterScores(spec.extrinsic(), mother.scores(), cell.random()));
+            cell.setScores(ExtrinsicNoise.daughterScores(spec.extrinsic(), mother.scores(), random.of(cell)));
         }
         return cell;
+    }
+
+    /**
+     * Puts the population indices of the ready cells into {@link #order}, sorted by the cells'
+     * ids, and returns how many there are. Ids and indices are packed into one sortable long
+     * (an id in the high bits, the index in the low 32), so the sort allocates nothing; ids fit
+     * in 31 bits, as {@link Ancestry} requires.
+     */
+    private int readyInIdOrder(CellPopulation population, boolean[] ready) {
+        int n = population.size();
+        int count = 0;
+        for (int i = 0; i < n; i++) {
+            if (ready[i]) {
+                count++;
+            }
+        }
+        if (order.length < count) {
+            order = new long[count + count / 4];
+        }
+        int k = 0;
+        for (int i = 0; i < n; i++) {
+            if (ready[i]) {
+                order[k++] = (population.get(i).id() << 32) | i;
+            }
+        }
+        Arrays.sort(order, 0, count);
+        for (int j = 0; j < count; j++) {
+            order[j] &= 0xffffffffL;
+        }
+        return count;
     }
 }

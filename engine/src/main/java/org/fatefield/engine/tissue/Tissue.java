@@ -4,12 +4,17 @@ import java.io.DataInputStream;
 import java.io.DataOutputStream;
 import java.io.IOException;
 import java.util.Arrays;
+import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.fatefield.circuits.random.EmbeddedStream;
 import org.fatefield.circuits.random.RandomStreams;
 import org.fatefield.circuits.sim.CircuitStepper;
 import org.fatefield.engine.cell.Cell;
+import org.fatefield.engine.cell.CellRandom;
 import org.fatefield.engine.cell.CellPopulation;
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.division.SizeControl;
@@ -34,18 +39,22 @@ import sim.engine.SimState;
  * in one plain loop (a schedule entry per cell costs a heap operation per cell per step). One
  * tick: (1) advance the morphogen field; (2) each cell reads its local morphogen, maps it to
  * circuit parameters, advances its circuit and ages; (3) cells past their cycle time divide, in
- * population order, sharing molecules between daughters; (4) overlaps relax; (5) when a record
- * is due, fates are classified and counted. Every cell draws only from its own stream, derived
+ * order of id, sharing molecules between daughters; (4) overlaps relax; (5) when a record is due,
+ * fates are classified and counted, and then every {@link TissueObserver} sees the new state. Every cell draws only from its own stream, derived
  * from the seed and its id. Every few steps the population is reordered block by block in space
  * so that the cell loop reads the morphogen grid (and the cells) with good memory locality.
  */
 public final class Tissue extends SimState {
 
     private static final long PLACEMENT_STREAM = -1L;
+    private static final Comparator<Cell> BY_ID = Comparator.comparingLong(Cell::id);
+
     /** Steps between spatial reorderings of the population (for memory locality). */
-    private static final int REORDER_EVERY = 10;
+    private int reorderEvery = 10;
     /** Steps between relocations of the cells in memory in stepping order (see CellPopulation). */
-    private static final int RELOCATE_EVERY = 100;
+    private int relocateEvery = 100;
+    private final List<TissueObserver> observers = new ArrayList<>();
+    private CellRandom[] randoms;
 
     private final TissueSpec spec;
     private final RandomStreams streams;
@@ -110,17 +119,19 @@ public final class Tissue extends SimState {
         noisyIndices = spec.extrinsic().stream().flatMapToInt(noise -> Arrays.stream(noise.indices()))
                 .distinct().toArray();
         steppers = new CircuitStepper[threads];
+        randoms = new CellRandom[threads];
         params = new double[threads][];
         CircuitStepper prototype = circuit.noise().stepper(circuit.network(), circuit.systemSize());
         for (int w = 0; w < threads; w++) {
             steppers[w] = w == 0 ? prototype : prototype.copy();
+            randoms[w] = new CellRandom();
             params[w] = Arrays.copyOf(spec.mapping().base(), spec.mapping().parameterCount()
                     + CircuitStepper.SCRATCH_PADDING);
         }
         signals = new double[threads][fields.length + CircuitStepper.SCRATCH_PADDING];
         mechanics = new OverlapRepulsion(spec.width(), spec.height(), growth.repulsionRate(), growth.cellRadius(),
                 growth.adhesion(), 0.2, growth.shape());
-        division = new CellDivision(spec, streams);
+        division = new CellDivision(spec, streams, randoms[0]);
         steps = 0;
         ancestry = new Ancestry();
         lineageClosed = false;
@@ -143,7 +154,7 @@ public final class Tissue extends SimState {
             Cell founder = new Cell(id, -1, 0, -age, cycle, circuit.initialState(), birth.streamWords(), x, y, 1.0,
                     growth.size().control().volume(1.0, age, cycle));
             if (!spec.extrinsic().isEmpty()) {
-                founder.setScores(ExtrinsicNoise.founderScores(spec.extrinsic(), founder.random()));
+                founder.setScores(ExtrinsicNoise.founderScores(spec.extrinsic(), randoms[0].of(founder)));
             }
             population.add(founder);
             ancestry.add(id, -1);
@@ -154,7 +165,13 @@ public final class Tissue extends SimState {
         schedule.scheduleRepeating(Schedule.EPOCH, 0, new TissueTick(this), 1.0);
     }
 
-    /** One time step; called by {@link TissueTick}. */
+    /**
+     * One time step; called by {@link TissueTick}. The stages, in order: fields; the cell loop
+     * (in parallel); divisions in order of cell id; deaths; mechanics; memory layout; records
+     * (time series when due, the live cells' lineage records after the last step); observers.
+     * Nothing but memory order depends on the layout stage: divisions and deaths go by id, and
+     * mechanics and field exchange sum in an order fixed by position and id.
+     */
     void tick() {
         double dt = spec.timing().step();
         for (MorphogenField f : fields) {
@@ -170,14 +187,20 @@ public final class Tissue extends SimState {
             removeDead(dt);
         }
         mechanics.relax(population, dt, pool);
-        if (steps % REORDER_EVERY == 0) {
+        if (steps % reorderEvery == 0) {
             population.sortByBlock(blockSide, spec.width(), spec.height(), pool);
         }
-        if (steps % RELOCATE_EVERY == 0) {
+        if (steps % relocateEvery == 0) {
             population.relocateInOrder();
         }
         if (steps % spec.timing().stepsPerRecord() == 0 || steps == spec.timing().totalSteps()) {
             record();
+        }
+        if (finished()) {
+            closeLineage();
+        }
+        for (TissueObserver observer : observers) {
+            observer.afterStep(this);
         }
     }
 
@@ -197,6 +220,7 @@ public final class Tissue extends SimState {
         boolean[] readyNow = ready;
         pool.forEach(cells.size(), (from, to, worker) -> {
             CircuitStepper circuit = steppers[worker];
+            CellRandom random = randoms[worker];
             double[] p = params[worker];
             double[] levels = signals[worker];
             for (int i = from; i < to; i++) {
@@ -211,7 +235,7 @@ public final class Tissue extends SimState {
                 for (int k = 0; k < extrinsic.size(); k++) {
                     extrinsic.get(k).apply(cell.scores()[k], p);
                 }
-                circuit.advance(cell.liveState(), p, dt, cell.random());
+                circuit.advance(cell.liveState(), p, dt, random.of(cell));
                 cell.grow(end, size, dilute);
                 readyNow[i] = cell.readyToDivide(size, end);
             }
@@ -227,21 +251,27 @@ public final class Tissue extends SimState {
 
     /**
      * Each cell dies with probability {@code deathRate * dt} per step, drawn from its own stream;
-     * the dead are removed (extruded) and their lineage records written. The survivors keep their
-     * order.
+     * the dead are removed (extruded) and their lineage records written in order of id. The
+     * survivors keep their order.
      */
     private void removeDead(double dt) {
         double p = spec.growth().deathRate() * dt;
         double now = time();
+        CellRandom random = randoms[0];
+        List<Cell> dead = new ArrayList<>();
         population.removeIf(cell -> {
-            if (cell.random().nextDouble() >= p) {
+            if (random.of(cell).nextDouble() >= p) {
                 return false;
             }
+            dead.add(cell);
+            return true;
+        });
+        dead.sort(BY_ID);
+        for (Cell cell : dead) {
             lineage.accept(new LineageRecord(cell.id(), cell.parentId(), cell.generation(), cell.birthTime(),
                     Double.NaN, cell.birthX(), cell.birthY(), -1, spec.fates().classify(cell.liveState()),
                     cell.fateSince(), now, cell.birthVolume(), cell.volume()));
-            return true;
-        });
+        }
     }
 
     private void record() {
@@ -291,9 +321,43 @@ public final class Tissue extends SimState {
 
     /** Runs every remaining step. */
     public void runToEnd() {
-        while (!finished()) {
+        advance(Long.MAX_VALUE);
+    }
+
+    /**
+     * Runs up to {@code maxSteps} steps, fewer if the run finishes first; every driver (the run
+     * command, the benchmark, the live window) steps the tissue through here, and whatever must
+     * happen between steps is a {@link TissueObserver}.
+     */
+    public void advance(long maxSteps) {
+        for (long k = 0; k < maxSteps && !finished(); k++) {
             schedule.step(this);
         }
+    }
+
+    /**
+     * Adds an observer, called after every step in the order added (after the tissue's own
+     * records). Observers must not change the tissue.
+     */
+    public void addObserver(TissueObserver observer) {
+        observers.add(Objects.requireNonNull(observer, "observer"));
+    }
+
+    /**
+     * Sets how often the population is reordered in space and copied into new objects in that
+     * order (both only for memory locality; results do not depend on them). Call before
+     * {@link #start()}.
+     *
+     * @param reorder  steps between spatial reorderings, at least 1 (default 10)
+     * @param relocate steps between relocations in memory, at least 1 (default 100)
+     */
+    public void setMemoryLayout(int reorder, int relocate) {
+        if (reorder < 1 || relocate < 1) {
+            throw new IllegalArgumentException("reorder and relocate intervals must be at least 1 step, got "
+                    + reorder + " and " + relocate);
+        }
+        this.reorderEvery = reorder;
+        this.relocateEvery = relocate;
     }
 
     /**
@@ -304,13 +368,16 @@ public final class Tissue extends SimState {
         this.lineage = sink;
     }
 
-    /** Emits the records of the cells alive now (call once, at the end of a run). */
-    public void closeLineage() {
+    /**
+     * Emits the records of the cells alive now, in order of id; the tick calls it after the last
+     * step, so a finished run's lineage is complete.
+     */
+    private void closeLineage() {
         if (lineageClosed) {
             return;
         }
         lineageClosed = true;
-        for (Cell cell : population.view()) {
+        for (Cell cell : cellsById()) {
             lineage.accept(new LineageRecord(cell.id(), cell.parentId(), cell.generation(), cell.birthTime(),
                     Double.NaN, cell.birthX(), cell.birthY(), -1, cell.fate(), cell.fateSince(), Double.NaN,
                     cell.birthVolume(), cell.volume()));
@@ -357,9 +424,29 @@ public final class Tissue extends SimState {
         return spec;
     }
 
-    /** Live cells, in population order (read-only). */
+    /** Live cells, in population order (read-only; the order is a memory layout, not a meaning). */
     public List<Cell> cells() {
         return population.view();
+    }
+
+    /** Live cells in order of id (a new list): the order every table is written in. */
+    public List<Cell> cellsById() {
+        List<Cell> sorted = new ArrayList<>(population.view());
+        sorted.sort(BY_ID);
+        return sorted;
+    }
+
+    /**
+     * The live cell with {@code id}, if it is alive: a linear search, for viewers that follow a
+     * cell (cell objects are replaced when the population is relocated; ids never change).
+     */
+    public Optional<Cell> cellById(long id) {
+        for (Cell cell : population.view()) {
+            if (cell.id() == id) {
+                return Optional.of(cell);
+            }
+        }
+        return Optional.empty();
     }
 
     /** Every field, the primary morphogen first. */

@@ -54,7 +54,6 @@ class CheckpointTest {
         straight.setLineageSink(straightRecords::add);
         straight.start();
         straight.runToEnd();
-        straight.closeLineage();
 
         List<LineageRecord> resumedRecords = new ArrayList<>();
         Tissue first = new Tissue(spec(), 77, 1);
@@ -72,7 +71,6 @@ class CheckpointTest {
         resumed.start();
         resumed.readCheckpoint(new DataInputStream(new ByteArrayInputStream(bytes.toByteArray())));
         resumed.runToEnd();
-        resumed.closeLineage();
 
         assertTrue(straight.cells().size() > 200, "cells " + straight.cells().size());
         assertEquals(straight.cells().size(), resumed.cells().size());

@@ -45,7 +45,6 @@ class GrowthOptionsTest {
         tissue.setLineageSink(records::add);
         tissue.start();
         tissue.runToEnd();
-        tissue.closeLineage();
         Map<Long, List<LineageRecord>> sisters = new HashMap<>();
         for (LineageRecord r : records) {
             if (r.parentId() >= 0) {

@@ -50,7 +50,6 @@ class SizeControlTest {
         tissue.setLineageSink(records::add);
         tissue.start();
         tissue.runToEnd();
-        tissue.closeLineage();
         tissue.finish();
         return records;
     }

@@ -74,7 +74,7 @@ public final class RunTables {
         List<String> fateNames = spec.fates().fateNames();
         CSVPrinter printer = new CSVPrinter(out, FORMAT);
         printer.printRecord(header);
-        for (Cell cell : tissue.cells()) {
+        for (Cell cell : tissue.cellsById()) {
             List<String> values = new ArrayList<>();
             values.add(Long.toString(cell.id()));
             values.add(Long.toString(cell.parentId()));

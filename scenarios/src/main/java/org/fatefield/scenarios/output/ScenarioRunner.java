@@ -100,7 +100,6 @@ public final class ScenarioRunner {
                     checkpoints.save(tissue, lineage.flushedLength());
                 }
             }
-            tissue.closeLineage();
         } finally {
             tissue.finish();
             lineage.close();
