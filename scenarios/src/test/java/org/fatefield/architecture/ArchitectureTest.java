@@ -58,6 +58,13 @@ class ArchitectureTest {
     }
 
     @Test
+    void onlyTheTickDrawsFromACellsStream() {
+        noClasses().that().resideOutsideOfPackages("org.fatefield.engine.tissue", "org.fatefield.engine.cell")
+                .should().dependOnClassesThat().haveFullyQualifiedName("org.fatefield.engine.cell.CellRandom")
+                .check(classes);
+    }
+
+    @Test
     void noPackageCycles() {
         slices().matching("org.fatefield.(**)").should().beFreeOfCycles().check(classes);
     }

@@ -80,9 +80,7 @@ public final class TissueBenchmark {
             // A collection before each timing, so that garbage left by one part is not charged to the next.
             System.gc();
             long t0 = System.nanoTime();
-            for (int s = 0; s < steps; s++) {
-                tissue.schedule.step(tissue);
-            }
+            tissue.advance(steps);
             long t1 = System.nanoTime();
             System.gc();
             long t1b = System.nanoTime();
@@ -145,7 +143,7 @@ public final class TissueBenchmark {
         long before = usedHeap();
         Tissue tissue = new Tissue(spec, 1L);
         tissue.start();
-        tissue.schedule.step(tissue);
+        tissue.advance(1);
         long after = usedHeap();
         double perCell = (double) (after - before) / tissue.cells().size();
         tissue.finish();

@@ -5,7 +5,6 @@ import java.io.Writer;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.fatefield.circuits.analysis.QuasiPotential;
 import org.fatefield.circuits.analysis.SteadyState;
@@ -29,7 +28,6 @@ import org.jfree.chart.JFreeChart;
 /** Writes the tables and figures of {@code fatefield analyze} into a folder. */
 public final class AnalysisWriter {
 
-    private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get();
 
     private final RunFolder folder;
     private final ReactionNetwork network;
@@ -252,7 +250,7 @@ public final class AnalysisWriter {
         List<List<String>> body = new ArrayList<>();
         rows.fill(body);
         folder.writeText(name, (Writer w) -> {
-            CSVPrinter printer = new CSVPrinter(w, FORMAT);
+            CSVPrinter printer = RunTables.printer(w);
             printer.printRecord(header);
             for (List<String> row : body) {
                 printer.printRecord(row);

@@ -13,10 +13,11 @@ import org.fatefield.scenarios.analysis.AnalysisWriter;
 import org.fatefield.scenarios.analysis.CircuitAnalysis;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.output.RunFolder;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
+import picocli.CommandLine;
 
 /** {@code fatefield analyze}: the single-cell analyses of a scenario's circuit. */
 @Command(name = "analyze", mixinStandardHelpOptions = true,
@@ -68,14 +69,14 @@ final class AnalyzeCommand implements Callable<Integer> {
             description = "cells per axis of the landscape grid (default: ${DEFAULT-VALUE})")
     private int grid;
 
-    @Option(names = "--seed", paramLabel = "N", description = "random seed (default: the scenario's)")
-    private Long seed;
+    @Mixin
+    private SharedOptions.Seed seed;
 
-    @Option(names = "--out", paramLabel = "DIR", description = "output folder (default: <scenario name>-analysis)")
-    private Path out;
+    @Mixin
+    private SharedOptions.Out out;
 
-    @Option(names = "--force", description = "overwrite the files in an output folder that already holds files")
-    private boolean force;
+    @Mixin
+    private SharedOptions.Force force;
 
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
@@ -95,9 +96,9 @@ final class AnalyzeCommand implements Callable<Integer> {
             return FatefieldCommand.INVALID_INPUT;
         }
         ReactionNetwork network = loaded.tissue().circuit().network();
-        Path folder = out != null ? out : Path.of(loaded.name() + "-analysis");
+        Path folder = out.orElse(Path.of(loaded.name() + "-analysis"));
         try {
-            RunFolder.checkUsable(folder, force);
+            RunFolder.checkUsable(folder, force.given());
             CircuitAnalysis analysis = new CircuitAnalysis(network, loaded.tissue().mapping().base(), plan);
             AnalysisResult result = analysis.run();
             AnalysisWriter writer = new AnalysisWriter(RunFolder.open(folder), network, plan);
@@ -147,7 +148,7 @@ final class AnalyzeCommand implements Callable<Integer> {
         return new AnalysisPlan(name, indices, r[0], r[1], at != null ? at : 0.5 * (r[0] + r[1]), second,
                 secondIndices, r2[0], r2[1], x, y,
                 systemSize != null ? systemSize : loaded.tissue().circuit().systemSize(), trajectories, grid,
-                seed != null ? seed : loaded.seed());
+                seed.orElse(loaded.seed()));
     }
 
     private static int[] indices(ReactionNetwork network, String name, String option) {

@@ -1,6 +1,5 @@
 package org.fatefield.scenarios.cli;
 
-import com.google.gson.GsonBuilder;
 import com.google.gson.JsonObject;
 import java.io.IOException;
 import java.io.PrintWriter;
@@ -9,17 +8,21 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
-import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.fatefield.engine.metrics.FateProfile;
+import org.fatefield.engine.metrics.SampleSummary;
 import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.scenarios.format.Scenario;
-import org.fatefield.scenarios.output.Progress;
+import org.fatefield.scenarios.output.JsonFiles;
 import org.fatefield.scenarios.output.RunFolder;
+import org.fatefield.scenarios.output.RunFolderReader;
+import org.fatefield.scenarios.output.RunLayout;
 import org.fatefield.scenarios.output.RunMetrics;
+import org.fatefield.scenarios.output.RunRequest;
 import org.fatefield.scenarios.output.RunTables;
 import org.fatefield.scenarios.output.ScenarioRunner;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine;
@@ -38,14 +41,14 @@ final class ReplicatesCommand implements Callable<Integer> {
     @Option(names = "--runs", paramLabel = "N", required = true, description = "number of replicate tissues")
     private int runs;
 
-    @Option(names = "--seed", paramLabel = "N", description = "first seed (default: the scenario's)")
-    private Long seed;
+    @Mixin
+    private SharedOptions.Seed seed;
 
-    @Option(names = "--out", paramLabel = "DIR", required = true, description = "folder for the replicate set")
-    private Path out;
+    @Mixin
+    private SharedOptions.RequiredOut out;
 
-    @Option(names = "--threads", paramLabel = "N", description = "threads per run (default: all processors)")
-    private Integer threads;
+    @Mixin
+    private SharedOptions.Threads threads;
 
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
@@ -61,8 +64,9 @@ final class ReplicatesCommand implements Callable<Integer> {
             err.println("--runs must be at least 2 to measure a spread, got " + runs);
             return FatefieldCommand.INVALID_INPUT;
         }
-        long first = seed != null ? seed : loaded.seed();
-        int workers = threads != null ? threads : Runtime.getRuntime().availableProcessors();
+        long first = seed.orElse(loaded.seed());
+        int workers = threads.resolve();
+        Path out = this.out.path();
         List<String> fates = loaded.tissue().fates().fateNames();
         double[][] boundaries = new double[fates.size()][runs];
         double[][] widths = new double[fates.size()][runs];
@@ -70,20 +74,21 @@ final class ReplicatesCommand implements Callable<Integer> {
             Files.createDirectories(out);
             for (int r = 0; r < runs; r++) {
                 long s = first + r;
-                Path folder = out.resolve("seed-" + s);
-                if (!Files.exists(folder.resolve(ScenarioRunner.PROVENANCE))) {
-                    Tissue tissue = ScenarioRunner.run(loaded, s, workers, folder, true, Progress.silent());
+                Path folder = out.resolve(RunLayout.replicateFolder(s));
+                RunFolderReader done = RunFolderReader.of(folder);
+                if (!done.finished()) {
+                    Tissue tissue = ScenarioRunner.run(RunRequest.of(loaded, folder).withSeed(s).withThreads(workers)
+                            .withForce(true));
                     measure(RunMetrics.of(tissue).profile(), r, boundaries, widths);
                 } else {
-                    measure(ProfileFile.read(folder.resolve("profile.csv"), fates.size(), loaded.tissue().width()), r,
-                            boundaries, widths);
+                    measure(done.fateProfile(fates, loaded.tissue().width()), r, boundaries, widths);
                 }
                 err.printf("replicate %d/%d (seed %d) done%n", r + 1, runs, s);
                 err.flush();
             }
             RunFolder set = RunFolder.open(out);
-            set.writeText("replicates.csv", w -> {
-                CSVPrinter printer = new CSVPrinter(w, CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get());
+            set.writeText(RunLayout.REPLICATES_TABLE, w -> {
+                CSVPrinter printer = RunTables.printer(w);
                 List<String> header = new ArrayList<>(List.of("seed"));
                 for (String f : fates) {
                     header.add("boundary_" + f + "_um");
@@ -104,15 +109,14 @@ final class ReplicatesCommand implements Callable<Integer> {
             summary.addProperty("runs", runs);
             summary.addProperty("first_seed", first);
             for (int f = 0; f < fates.size(); f++) {
-                double[] stats = meanAndSd(boundaries[f]);
+                SampleSummary stats = SampleSummary.of(boundaries[f]);
                 JsonObject fate = new JsonObject();
-                fate.addProperty("runs_with_boundary", (int) stats[2]);
-                fate.addProperty("mean_boundary_um", Double.isFinite(stats[0]) ? stats[0] : null);
-                fate.addProperty("positional_error_sd_um", Double.isFinite(stats[1]) ? stats[1] : null);
+                fate.addProperty("runs_with_boundary", stats.count());
+                fate.addProperty("mean_boundary_um", JsonFiles.finite(stats.mean()));
+                fate.addProperty("positional_error_sd_um", JsonFiles.finite(stats.sd()));
                 summary.add(fates.get(f), fate);
             }
-            set.writeText("replicates.json", w -> w.write(
-                    new GsonBuilder().setPrettyPrinting().serializeNulls().create().toJson(summary) + "\n"));
+            set.writeText(RunLayout.REPLICATES_SUMMARY, w -> w.write(JsonFiles.text(summary)));
             PrintWriter o = spec.commandLine().getOut();
             o.printf("%d replicates of %s; results are in %s%n", runs, loaded.name(), out.toAbsolutePath().normalize());
             o.flush();
@@ -130,23 +134,4 @@ final class ReplicatesCommand implements Callable<Integer> {
         }
     }
 
-    /** Mean, sample standard deviation and count of the finite values. */
-    static double[] meanAndSd(double[] values) {
-        double sum = 0;
-        int n = 0;
-        for (double v : values) {
-            if (Double.isFinite(v)) {
-                sum += v;
-                n++;
-            }
-        }
-        double mean = n > 0 ? sum / n : Double.NaN;
-        double ss = 0;
-        for (double v : values) {
-            if (Double.isFinite(v)) {
-                ss += (v - mean) * (v - mean);
-            }
-        }
-        return new double[] {mean, n > 1 ? Math.sqrt(ss / (n - 1)) : Double.NaN, n};
-    }
 }

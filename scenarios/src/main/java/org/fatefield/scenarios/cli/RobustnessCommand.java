@@ -6,7 +6,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
-import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.output.RunFolder;
@@ -16,6 +15,7 @@ import org.fatefield.scenarios.robustness.RobustnessAnalysis;
 import org.fatefield.viz.chart.ChartFiles;
 import org.fatefield.viz.chart.SensitivityChart;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine;
@@ -47,11 +47,11 @@ final class RobustnessCommand implements Callable<Integer> {
             description = "metric of the figure (default: boundary of the default fate)")
     private String metric;
 
-    @Option(names = "--out", paramLabel = "DIR", required = true, description = "output folder")
-    private Path out;
+    @Mixin
+    private SharedOptions.RequiredOut out;
 
-    @Option(names = "--threads", paramLabel = "N", description = "threads per run (default: all processors)")
-    private Integer threads;
+    @Mixin
+    private SharedOptions.Threads threads;
 
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
@@ -74,13 +74,14 @@ final class RobustnessCommand implements Callable<Integer> {
         List<String> fates = loaded.tissue().fates().fateNames();
         String chosen = metric != null ? metric : "boundary_" + fates.get(fates.size() - 1) + "_um";
         try {
+            Path out = this.out.path();
             RunFolder.checkUsable(out, false);
-            int workers = threads != null ? threads : Runtime.getRuntime().availableProcessors();
+            int workers = threads.resolve();
             List<RobustnessAnalysis.Sensitivity> result = RobustnessAnalysis.run(loaded.tissue(), perturbations,
                     fraction, replicates, loaded.seed(), workers);
             RunFolder folder = RunFolder.open(out);
             folder.writeText("robustness.csv", w -> {
-                CSVPrinter printer = new CSVPrinter(w, CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get());
+                CSVPrinter printer = RunTables.printer(w);
                 printer.printRecord("perturbation", "metric", "sensitivity", "ci95_low", "ci95_high", "pairs");
                 for (RobustnessAnalysis.Sensitivity s : result) {
                     printer.printRecord(s.perturbation(), s.metric(), RunTables.number(s.sensitivity()),

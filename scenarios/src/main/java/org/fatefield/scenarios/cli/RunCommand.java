@@ -10,9 +10,11 @@ import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.output.Progress;
+import org.fatefield.scenarios.output.RunRequest;
 import org.fatefield.scenarios.output.ScenarioRunner;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
@@ -26,19 +28,17 @@ final class RunCommand implements Callable<Integer> {
             description = "a scenario file (TOML), or the name of a built-in scenario (demo)")
     private String scenario;
 
-    @Option(names = "--out", paramLabel = "DIR",
-            description = "folder for the results (default: <scenario name>-seed<N> in the current folder)")
-    private Path out;
+    @Mixin
+    private SharedOptions.Out out;
 
-    @Option(names = "--seed", paramLabel = "N", description = "master random seed (default: run.seed of the scenario)")
-    private Long seed;
+    @Mixin
+    private SharedOptions.Seed seed;
 
-    @Option(names = "--force", description = "overwrite the run files in an output folder that already holds files")
-    private boolean force;
+    @Mixin
+    private SharedOptions.Force force;
 
-    @Option(names = "--threads", paramLabel = "N", description = "threads to step cells on (default: all processors);"
-            + " results do not depend on it")
-    private Integer threads;
+    @Mixin
+    private SharedOptions.Threads threads;
 
     @Option(names = "--checkpoint-every", paramLabel = "HOURS", description = "save a checkpoint every HOURS of"
             + " simulated time, so a killed run can be resumed (default: never)")
@@ -69,20 +69,11 @@ final class RunCommand implements Callable<Integer> {
             err.println("Nothing was run. Fix the lines above (see: fatefield keys), then run again.");
             return FatefieldCommand.INVALID_INPUT;
         }
-        if (seed != null && seed < 0) {
-            err.println("--seed must be 0 or greater, got " + seed);
-            return FatefieldCommand.INVALID_INPUT;
-        }
-        long runSeed = seed != null ? seed : loaded.seed();
-        Path folder = out != null ? out : Path.of(loaded.name() + "-seed" + runSeed);
+        long runSeed = seed.orElse(loaded.seed());
+        Path folder = out.orElse(Path.of(loaded.name() + "-seed" + runSeed));
         Progress progress = quiet ? Progress.silent()
                 : Progress.forConsole(loaded.name(), loaded.tissue().timing().totalSteps(), System.err);
         try {
-            int workers = threads != null ? threads : Runtime.getRuntime().availableProcessors();
-            if (workers < 1) {
-                err.println("--threads must be at least 1, got " + workers);
-                return FatefieldCommand.INVALID_INPUT;
-            }
             long every = 0;
             if (checkpointEvery != null) {
                 if (!(checkpointEvery > 0)) {
@@ -99,8 +90,9 @@ final class RunCommand implements Callable<Integer> {
                 }
                 frameSteps = Math.max(1, Math.round(framesEvery / loaded.tissue().timing().step()));
             }
-            Tissue tissue = ScenarioRunner.run(loaded, runSeed, workers, folder, force, progress, every, resume,
-                    frameSteps);
+            Tissue tissue = ScenarioRunner.run(RunRequest.of(loaded, folder).withSeed(runSeed)
+                    .withThreads(threads.resolve()).withForce(force.given()).withProgress(progress)
+                    .withCheckpointSteps(every).withResume(resume).withFrameSteps(frameSteps));
             if (!quiet) {
                 TimeSeries.Row last = tissue.series().last();
                 List<String> fates = tissue.series().fateNames();

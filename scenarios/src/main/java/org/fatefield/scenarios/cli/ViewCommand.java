@@ -12,10 +12,10 @@ import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.format.ScenarioReader;
 import org.fatefield.scenarios.sweep.ScenarioOverrides;
 import org.fatefield.viz.live.TissueWindow;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
-import picocli.CommandLine.Option;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Parameters;
+import picocli.CommandLine;
 
 /** {@code fatefield view}: watch a scenario's tissue live. */
 @Command(name = "view", mixinStandardHelpOptions = true,
@@ -29,8 +29,8 @@ final class ViewCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "SCENARIO", description = "a scenario file, or a built-in name (demo)")
     private String scenario;
 
-    @Option(names = "--seed", paramLabel = "N", description = "random seed (default: the scenario's)")
-    private Long seed;
+    @Mixin
+    private SharedOptions.Seed seed;
 
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
@@ -46,7 +46,7 @@ final class ViewCommand implements Callable<Integer> {
         if (loaded == null) {
             return FatefieldCommand.INVALID_INPUT;
         }
-        TissueWindow window = open(loaded, seed != null ? seed : loaded.seed());
+        TissueWindow window = open(loaded, seed.orElse(loaded.seed()));
         SwingUtilities.invokeLater(() -> window.setVisible(true));
         return 0;
     }

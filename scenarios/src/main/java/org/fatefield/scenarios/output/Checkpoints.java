@@ -20,9 +20,6 @@ import org.fatefield.scenarios.format.Scenario;
  */
 final class Checkpoints {
 
-    /** File name in the run folder. */
-    static final String NAME = "checkpoint.bin";
-
     private final Path folder;
     private final Scenario scenario;
     private final long seed;
@@ -44,22 +41,22 @@ final class Checkpoints {
 
     /** Writes a checkpoint of {@code tissue}. */
     void save(Tissue tissue, long lineageBytes) throws IOException {
-        Path temporary = folder.resolve("." + NAME + ".partial");
+        Path temporary = RunLayout.partial(folder.resolve(RunLayout.CHECKPOINT));
         try (DataOutputStream out = new DataOutputStream(new BufferedOutputStream(Files.newOutputStream(temporary)))) {
             out.writeUTF(scenario.sha256());
             out.writeLong(seed);
             out.writeLong(lineageBytes);
             tissue.writeCheckpoint(out);
         }
-        Files.move(temporary, folder.resolve(NAME), StandardCopyOption.REPLACE_EXISTING,
+        Files.move(temporary, folder.resolve(RunLayout.CHECKPOINT), StandardCopyOption.REPLACE_EXISTING,
                 StandardCopyOption.ATOMIC_MOVE);
     }
 
     /** Reads the folder's checkpoint, checking it belongs to this scenario and seed. */
     Saved load() throws IOException {
-        Path file = folder.resolve(NAME);
+        Path file = folder.resolve(RunLayout.CHECKPOINT);
         if (!Files.exists(file)) {
-            throw new IOException("nothing to resume: " + folder + " holds no " + NAME
+            throw new IOException("nothing to resume: " + folder + " holds no " + RunLayout.CHECKPOINT
                     + " (run without --resume to start, with --checkpoint-every to save progress)");
         }
         try (DataInputStream in = new DataInputStream(new BufferedInputStream(Files.newInputStream(file)))) {
@@ -76,6 +73,6 @@ final class Checkpoints {
 
     /** Removes the checkpoint of a finished run. */
     void delete() throws IOException {
-        Files.deleteIfExists(folder.resolve(NAME));
+        Files.deleteIfExists(folder.resolve(RunLayout.CHECKPOINT));
     }
 }

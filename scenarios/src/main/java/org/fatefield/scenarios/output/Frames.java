@@ -23,7 +23,7 @@ final class Frames {
     private final String title;
 
     Frames(Path runFolder, String title) {
-        this.folder = runFolder.resolve("frames");
+        this.folder = runFolder.resolve(RunLayout.FRAMES);
         this.title = title;
     }
 
@@ -31,7 +31,7 @@ final class Frames {
     void write(Tissue tissue) throws IOException {
         Files.createDirectories(folder);
         Path target = folder.resolve(String.format(Locale.ROOT, "frame-%08d.png", tissue.steps()));
-        Path temporary = folder.resolve("." + target.getFileName() + ".partial");
+        Path temporary = RunLayout.partial(target);
         String caption = String.format(Locale.ROOT, "%s at t = %.1f h (%d cells)", title, tissue.time(),
                 tissue.cells().size());
         ImageIO.write(TissueRenderer.render(tissue, caption, 640), "png", temporary.toFile());
@@ -44,7 +44,7 @@ final class Frames {
         try (Stream<Path> list = Files.list(folder)) {
             files = list.filter(p -> p.getFileName().toString().matches("frame-\\d+\\.png")).sorted().toList();
         }
-        run.write("tissue.gif", out -> AnimatedGif.write(files, 150, out));
-        return List.of("frames/", "tissue.gif");
+        run.write(RunLayout.ANIMATION, out -> AnimatedGif.write(files, 150, out));
+        return List.of(RunLayout.FRAMES + "/", RunLayout.ANIMATION);
     }
 }

@@ -17,7 +17,8 @@ import java.util.Deque;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
-import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
+import org.apache.commons.csv.CSVPrinter;
 import org.apache.commons.csv.CSVRecord;
 import org.fatefield.engine.lineage.LineageRecord;
 import org.fatefield.engine.lineage.LineageSink;
@@ -30,17 +31,10 @@ import org.fatefield.engine.lineage.LineageSink;
  */
 public final class LineageFiles implements LineageSink, AutoCloseable {
 
-    /** Final name of the lineage table. */
-    public static final String TABLE = "lineage.csv";
-    /** Final name of the trees. */
-    public static final String TREES = "lineage.nwk";
-
-    private static final String HEADER = "id,parent_id,generation,birth_time_h,division_time_h,birth_x_um,birth_y_um,"
-            + "fate_at_division,fate_at_end,commitment_time_h,death_time_h,birth_volume,final_volume";
-
     private final Path folder;
     private final Path partial;
     private final BufferedWriter out;
+    private final CSVPrinter printer;
     private final List<String> fates;
 
     /** Starts streaming into {@code folder} for a run with these fate names. */
@@ -54,7 +48,7 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
      */
     public LineageFiles(Path folder, List<String> fates, long resumeAt) throws IOException {
         this.folder = folder;
-        this.partial = folder.resolve("." + TABLE + ".partial");
+        this.partial = RunLayout.partial(folder.resolve(RunLayout.LINEAGE));
         this.fates = List.copyOf(fates);
         if (resumeAt >= 0) {
             try (FileChannel channel = FileChannel.open(partial,
@@ -62,41 +56,34 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
                 channel.truncate(resumeAt);
             }
             this.out = Files.newBufferedWriter(partial, StandardCharsets.UTF_8, StandardOpenOption.APPEND);
+            this.printer = RunTables.printer(out);
         } else {
             this.out = Files.newBufferedWriter(partial, StandardCharsets.UTF_8);
-            out.write(HEADER);
-            out.write('\n');
+            this.printer = RunTables.printer(out);
+            printer.printRecord(RunTables.LINEAGE_HEADER);
         }
     }
 
     /** Flushes what is written and returns the partial table's length in bytes (for checkpoints). */
     public long flushedLength() throws IOException {
-        out.flush();
+        printer.flush();
         return Files.size(partial);
     }
 
     @Override
     public void accept(LineageRecord r) {
         try {
-            out.write(r.id() + "," + r.parentId() + "," + r.generation() + "," + RunTables.number(r.birthTime()) + ","
-                    + RunTables.number(r.divisionTime()) + "," + RunTables.number(r.birthX()) + ","
-                    + RunTables.number(r.birthY()) + "," + name(r.fateAtDivision()) + "," + name(r.fateAtEnd()) + ","
-                    + RunTables.number(r.commitmentTime()) + "," + RunTables.number(r.deathTime()) + ","
-                    + RunTables.number(r.birthVolume()) + "," + RunTables.number(r.finalVolume()) + "\n");
+            printer.printRecord(RunTables.lineageRow(r, fates));
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write " + partial, e);
         }
     }
 
-    private String name(int fate) {
-        return fate < 0 ? "" : fates.get(fate);
-    }
-
     /** Completes the table (renamed into place), then writes the trees from it. */
     @Override
     public void close() throws IOException {
-        out.close();
-        Path table = folder.resolve(TABLE);
+        printer.close();
+        Path table = folder.resolve(RunLayout.LINEAGE);
         Files.move(partial, table, StandardCopyOption.REPLACE_EXISTING);
     }
 
@@ -106,8 +93,8 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
         Map<Long, String> label = new HashMap<>();
         Map<Long, Double> length = new HashMap<>();
         List<Long> roots = new ArrayList<>();
-        try (Reader in = Files.newBufferedReader(table, StandardCharsets.UTF_8)) {
-            for (CSVRecord r : CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get().parse(in)) {
+        try (Reader in = Files.newBufferedReader(table, StandardCharsets.UTF_8); CSVParser parser = RunTables.parser(in)) {
+            for (CSVRecord r : parser) {
                 long id = Long.parseLong(r.get("id"));
                 long parent = Long.parseLong(r.get("parent_id"));
                 String fate = r.get("fate_at_end").isEmpty() ? r.get("fate_at_division") : r.get("fate_at_end");

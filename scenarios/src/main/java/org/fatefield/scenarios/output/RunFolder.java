@@ -72,7 +72,7 @@ public final class RunFolder {
     /** Writes {@code name} atomically: to a temporary file first, then renamed over the target. */
     public Path write(String name, Content content) throws IOException {
         Path target = path.resolve(name);
-        Path temporary = path.resolve("." + name + ".partial");
+        Path temporary = RunLayout.partial(target);
         try {
             try (OutputStream out = Files.newOutputStream(temporary)) {
                 content.writeTo(out);

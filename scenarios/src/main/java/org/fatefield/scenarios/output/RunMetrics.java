@@ -1,13 +1,11 @@
 package org.fatefield.scenarios.output;
 
-import com.google.gson.GsonBuilder;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 import java.io.IOException;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
-import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
 import org.fatefield.engine.metrics.FateProfile;
 import org.fatefield.engine.metrics.LineageStatistics;
@@ -26,7 +24,6 @@ import org.fatefield.engine.tissue.Tissue;
  */
 public record RunMetrics(FateProfile profile, LineageStatistics lineage, PredictedBoundary predicted) {
 
-    private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get();
 
     /** Computes the metrics of {@code tissue} at its end. */
     public static RunMetrics of(Tissue tissue) {
@@ -40,8 +37,8 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
 
     /** Writes the three tables and the JSON summary into {@code folder}; returns their names. */
     public List<String> write(RunFolder folder, List<String> fateNames, long seed, String partition) throws IOException {
-        folder.writeText("profile.csv", w -> {
-            CSVPrinter printer = new CSVPrinter(w, FORMAT);
+        folder.writeText(RunLayout.PROFILE, w -> {
+            CSVPrinter printer = RunTables.printer(w);
             List<String> header = new ArrayList<>(List.of("x_um", "cells"));
             fateNames.forEach(f -> header.add("fraction_" + f));
             printer.printRecord(header);
@@ -55,16 +52,16 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
             }
             printer.flush();
         });
-        folder.writeText("relatedness.csv", w -> {
-            CSVPrinter printer = new CSVPrinter(w, FORMAT);
+        folder.writeText(RunLayout.RELATEDNESS, w -> {
+            CSVPrinter printer = RunTables.printer(w);
             printer.printRecord("lineage_distance_divisions", "pairs", "same_fate_fraction");
             for (Map.Entry<Integer, Long> e : lineage.pairs().entrySet()) {
                 printer.printRecord(e.getKey(), e.getValue(), RunTables.number(lineage.sameFate().get(e.getKey())));
             }
             printer.flush();
         });
-        folder.writeText("clones.csv", w -> {
-            CSVPrinter printer = new CSVPrinter(w, FORMAT);
+        folder.writeText(RunLayout.CLONES, w -> {
+            CSVPrinter printer = RunTables.printer(w);
             List<String> header = new ArrayList<>(List.of("founder_id"));
             fateNames.forEach(f -> header.add("cells_" + f));
             printer.printRecord(header);
@@ -77,8 +74,8 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
             }
             printer.flush();
         });
-        folder.writeText("metrics.json", w -> w.write(json(fateNames, seed, partition)));
-        return List.of("profile.csv", "relatedness.csv", "clones.csv", "metrics.json");
+        folder.writeText(RunLayout.METRICS, w -> w.write(json(fateNames, seed, partition)));
+        return List.of(RunLayout.PROFILE, RunLayout.RELATEDNESS, RunLayout.CLONES, RunLayout.METRICS);
     }
 
     /** The summary as JSON. */
@@ -89,8 +86,8 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
         JsonObject boundaries = new JsonObject();
         for (int f = 0; f < fateNames.size(); f++) {
             JsonObject b = new JsonObject();
-            b.addProperty("position_um", finite(profile.boundary(f)));
-            b.addProperty("width_10_90_um", finite(profile.width(f)));
+            b.addProperty("position_um", JsonFiles.finite(profile.boundary(f)));
+            b.addProperty("width_10_90_um", JsonFiles.finite(profile.width(f)));
             boundaries.add(fateNames.get(f), b);
         }
         root.add("boundaries", boundaries);
@@ -98,18 +95,15 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
         for (int k = 0; k < this.predicted.criticalValues().length; k++) {
             JsonObject p = new JsonObject();
             p.addProperty("critical_control_value", this.predicted.criticalValues()[k]);
-            p.addProperty("position_um", finite(this.predicted.positions()[k]));
+            p.addProperty("position_um", JsonFiles.finite(this.predicted.positions()[k]));
             predicted.add(p);
         }
         root.add("predicted_boundaries", predicted);
-        root.addProperty("sister_fate_agreement", finite(lineage.sisterAgreement()));
+        root.addProperty("sister_fate_agreement", JsonFiles.finite(lineage.sisterAgreement()));
         JsonObject related = new JsonObject();
-        lineage.sameFate().forEach((d, v) -> related.addProperty(Integer.toString(d), finite(v)));
+        lineage.sameFate().forEach((d, v) -> related.addProperty(Integer.toString(d), JsonFiles.finite(v)));
         root.add("same_fate_by_lineage_distance", related);
-        return new GsonBuilder().setPrettyPrinting().serializeNulls().create().toJson(root) + "\n";
+        return JsonFiles.text(root);
     }
 
-    private static Double finite(double v) {
-        return Double.isFinite(v) ? v : null;
-    }
 }

@@ -1,6 +1,5 @@
 package org.fatefield.scenarios.output;
 
-import com.google.gson.GsonBuilder;
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 import java.time.Instant;
@@ -57,6 +56,6 @@ public final class RunProvenance {
         JsonArray written = new JsonArray();
         files.forEach(written::add);
         root.add("files", written);
-        return new GsonBuilder().setPrettyPrinting().disableHtmlEscaping().create().toJson(root) + "\n";
+        return JsonFiles.text(root);
     }
 }

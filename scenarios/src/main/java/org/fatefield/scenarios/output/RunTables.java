@@ -3,28 +3,84 @@ package org.fatefield.scenarios.output;
 import org.fatefield.engine.record.TimeSeries;
 
 import java.io.IOException;
+import java.io.Reader;
+import java.io.UncheckedIOException;
 import java.io.Writer;
 import java.math.BigDecimal;
 import java.math.MathContext;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVPrinter;
+import org.apache.commons.csv.CSVRecord;
 import org.fatefield.engine.cell.Cell;
+import org.fatefield.engine.lineage.LineageRecord;
 import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.engine.tissue.TissueSpec;
 
 /**
  * Writes a run's tidy tables: one row per observation, one column per variable, the unit in
  * the column name. Numbers carry ten significant digits, so equal runs give equal bytes. The
- * writer passed in is flushed, not closed.
+ * writer passed in is flushed, not closed. Every CSV file Fatefield writes or reads goes through
+ * {@link #printer} and {@link #records} (Commons CSV: RFC 4180 quoting, so a fate name with a
+ * comma or a quote survives the round trip).
  */
 public final class RunTables {
 
-    private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get();
+    /** The CSV dialect of every table: RFC 4180 with Unix line ends. */
+    public static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get();
+    private static final CSVFormat READ_FORMAT = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true)
+            .get();
     private static final MathContext DIGITS = new MathContext(10);
 
+    /** Columns of {@code lineage.csv}. */
+    public static final List<String> LINEAGE_HEADER = List.of("id", "parent_id", "generation", "birth_time_h",
+            "division_time_h", "birth_x_um", "birth_y_um", "fate_at_division", "fate_at_end", "commitment_time_h",
+            "death_time_h", "birth_volume", "final_volume");
+
     private RunTables() {
+    }
+
+    /** A printer of Fatefield's CSV dialect on {@code out} (flush it; closing it closes {@code out}). */
+    public static CSVPrinter printer(Writer out) throws IOException {
+        return new CSVPrinter(out, FORMAT);
+    }
+
+    /**
+     * The records of a CSV file with a header row.
+     *
+     * @throws IOException naming the file if it is missing or malformed
+     */
+    public static List<CSVRecord> records(Path file) throws IOException {
+        if (!Files.exists(file)) {
+            throw new IOException(file + " is missing: is this a finished Fatefield run folder?");
+        }
+        try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8); CSVParser parser = parser(in)) {
+            return parser.getRecords();
+        } catch (UncheckedIOException | IllegalArgumentException | IllegalStateException e) {
+            throw new IOException(file + " is not a CSV table as Fatefield writes it (" + e.getMessage() + ")", e);
+        }
+    }
+
+    /** A streaming parser of a Fatefield table whose first row is its header. */
+    public static CSVParser parser(Reader in) throws IOException {
+        return READ_FORMAT.parse(in);
+    }
+
+    /** One row of {@code lineage.csv}; fate indices are named from {@code fates} (empty for none). */
+    public static List<String> lineageRow(LineageRecord r, List<String> fates) {
+        return List.of(Long.toString(r.id()), Long.toString(r.parentId()), Integer.toString(r.generation()),
+                number(r.birthTime()), number(r.divisionTime()), number(r.birthX()), number(r.birthY()),
+                fateName(r.fateAtDivision(), fates), fateName(r.fateAtEnd(), fates), number(r.commitmentTime()),
+                number(r.deathTime()), number(r.birthVolume()), number(r.finalVolume()));
+    }
+
+    private static String fateName(int fate, List<String> fates) {
+        return fate < 0 ? "" : fates.get(fate);
     }
 
     /**
@@ -39,7 +95,7 @@ public final class RunTables {
         }
         header.add("population");
         header.add("mean_morphogen");
-        CSVPrinter printer = new CSVPrinter(out, FORMAT);
+        CSVPrinter printer = printer(out);
         printer.printRecord(header);
         for (TimeSeries.Row row : series.rows()) {
             List<String> values = new ArrayList<>();
@@ -72,7 +128,7 @@ public final class RunTables {
         header.add("control_" + controlName(spec));
         header.add("fate");
         List<String> fateNames = spec.fates().fateNames();
-        CSVPrinter printer = new CSVPrinter(out, FORMAT);
+        CSVPrinter printer = printer(out);
         printer.printRecord(header);
         for (Cell cell : tissue.cellsById()) {
             List<String> values = new ArrayList<>();

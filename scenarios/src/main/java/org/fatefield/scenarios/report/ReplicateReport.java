@@ -4,14 +4,17 @@ import com.google.gson.JsonElement;
 import com.google.gson.JsonObject;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import org.apache.commons.csv.CSVRecord;
+import org.fatefield.scenarios.output.JsonFiles;
 import org.fatefield.scenarios.output.RunFolder;
+import org.fatefield.scenarios.output.RunFolderReader;
+import org.fatefield.scenarios.output.RunLayout;
+import org.fatefield.scenarios.output.RunTables;
 import org.fatefield.viz.chart.ChartFiles;
 import org.fatefield.viz.chart.ReplicateProfileChart;
 
@@ -28,30 +31,32 @@ public final class ReplicateReport {
 
     /** True if {@code folder} holds a replicate set. */
     public static boolean isReplicateSet(Path folder) {
-        return Files.exists(folder.resolve("replicates.json")) && Files.exists(folder.resolve("replicates.csv"));
+        return Files.exists(folder.resolve(RunLayout.REPLICATES_SUMMARY))
+                && Files.exists(folder.resolve(RunLayout.REPLICATES_TABLE));
     }
 
     /** The report of the replicate set {@code set}; also writes each replicate's own report. */
     public static String html(Path set) throws IOException {
-        JsonObject summary = RunFiles.json(set.resolve("replicates.json"));
-        List<CSVRecord> rows = RunFiles.csv(set.resolve("replicates.csv"));
+        JsonObject summary = JsonFiles.read(set.resolve(RunLayout.REPLICATES_SUMMARY));
+        List<CSVRecord> rows = RunTables.records(set.resolve(RunLayout.REPLICATES_TABLE));
         if (rows.isEmpty()) {
-            throw new IOException(set.resolve("replicates.csv") + " lists no runs: has the replicate set started?");
+            throw new IOException(set.resolve(RunLayout.REPLICATES_TABLE) + " lists no runs: has the replicate set"
+                    + " started?");
         }
-        List<Path> runs = new ArrayList<>();
+        List<RunFolderReader> runs = new ArrayList<>();
         List<RunReport.Figure> circuit = null;
         for (CSVRecord row : rows) {
-            Path run = set.resolve("seed-" + row.get("seed"));
+            Path run = set.resolve(RunLayout.replicateFolder(Long.parseLong(row.get("seed"))));
+            RunFolderReader reader = RunFolderReader.of(run);
             if (circuit == null) {
-                circuit = RunReport.circuitFigures(Files.readString(run.resolve("scenario.toml"),
-                        StandardCharsets.UTF_8), run);
+                circuit = RunReport.circuitFigures(reader.scenarioText(), run);
             }
             String html = RunReport.html(run, circuit);
-            RunFolder.open(run).writeText("report.html", w -> w.write(html));
-            runs.add(run);
+            RunFolder.open(run).writeText(RunLayout.REPORT, w -> w.write(html));
+            runs.add(reader);
         }
-        JsonObject first = RunFiles.json(runs.get(0).resolve("run.json"));
-        JsonObject metrics = RunFiles.json(runs.get(0).resolve("metrics.json"));
+        JsonObject first = runs.get(0).provenance();
+        JsonObject metrics = runs.get(0).metrics();
         List<String> fates = new ArrayList<>(metrics.getAsJsonObject("boundaries").keySet());
         HtmlPage page = new HtmlPage("Fatefield replicate report: "
                 + first.getAsJsonObject("scenario").get("name").getAsString() + " (" + rows.size() + " tissues)");
@@ -59,11 +64,11 @@ public final class ReplicateReport {
         page.paragraph("Each tissue ran the same scenario on its own seed; the spread of a boundary across tissues"
                 + " is its positional error.");
         page.heading("Figures");
-        double[] predictions = RunFiles.predictedBoundaries(metrics);
+        double[] predictions = RunFolderReader.predictedBoundaries(metrics);
         double predicted = predictions.length > 0 ? predictions[0] : Double.NaN;
-        List<RunFiles.Profile> profiles = new ArrayList<>();
-        for (Path run : runs) {
-            profiles.add(RunFiles.profile(run, fates));
+        List<RunFolderReader.Profile> profiles = new ArrayList<>();
+        for (RunFolderReader run : runs) {
+            profiles.add(run.profile(fates));
         }
         for (int f = 0; f < fates.size(); f++) {
             String fate = fates.get(f);
@@ -99,11 +104,12 @@ public final class ReplicateReport {
             table.add(cells);
         }
         page.table(header, table);
-        for (Path run : runs) {
-            page.link("report of " + run.getFileName(), run.getFileName() + "/report.html");
+        for (RunFolderReader run : runs) {
+            String name = run.path().getFileName().toString();
+            page.link("report of " + name, name + "/" + RunLayout.REPORT);
         }
         page.heading("Scenario");
-        page.preformatted(Files.readString(runs.get(0).resolve("scenario.toml"), StandardCharsets.UTF_8));
+        page.preformatted(runs.get(0).scenarioText());
         page.heading("Provenance");
         JsonObject scenario = first.getAsJsonObject("scenario");
         page.table(List.of("", ""), List.of(List.of("tissues", String.valueOf(rows.size())),

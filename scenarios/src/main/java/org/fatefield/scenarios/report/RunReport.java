@@ -5,18 +5,19 @@ import com.google.gson.JsonObject;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.function.DoubleFunction;
 import java.util.Map;
+import java.util.function.DoubleFunction;
 import org.fatefield.circuits.analysis.QuasiPotential;
 import org.fatefield.scenarios.analysis.ControlCircuit;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.format.ScenarioReader;
+import org.fatefield.scenarios.output.RunFolderReader;
+import org.fatefield.scenarios.output.RunLayout;
 import org.fatefield.viz.analysis.BifurcationDiagramChart;
 import org.fatefield.viz.analysis.GridMapChart;
 import org.fatefield.viz.chart.ChartFiles;
@@ -43,7 +44,7 @@ public final class RunReport {
 
     /** The report of the run folder {@code run}. */
     public static String html(Path run) throws IOException {
-        return html(run, circuitFigures(Files.readString(run.resolve("scenario.toml"), StandardCharsets.UTF_8), run));
+        return html(run, circuitFigures(RunFolderReader.of(run).scenarioText(), run));
     }
 
     /**
@@ -51,19 +52,20 @@ public final class RunReport {
      * scenario, so a replicate set draws them once for all its runs).
      */
     static String html(Path run, List<Figure> circuit) throws IOException {
-        JsonObject provenance = RunFiles.json(run.resolve("run.json"));
-        JsonObject metrics = RunFiles.json(run.resolve("metrics.json"));
-        String scenarioText = Files.readString(run.resolve("scenario.toml"), StandardCharsets.UTF_8);
+        RunFolderReader folder = RunFolderReader.of(run);
+        JsonObject provenance = folder.provenance();
+        JsonObject metrics = folder.metrics();
+        String scenarioText = folder.scenarioText();
         HtmlPage page = new HtmlPage("Fatefield report: " + provenance.getAsJsonObject("scenario").get("name").getAsString());
         page.paragraph("Research software output: for exploring models, not for clinical or diagnostic decisions.");
         page.heading("Figures");
-        page.image("Fate proportions over time", Files.readAllBytes(run.resolve("fate-proportions.png")), "png");
-        page.image("The tissue at the end", Files.readAllBytes(run.resolve("tissue.png")), "png");
-        if (Files.exists(run.resolve("tissue.gif"))) {
-            page.image("The tissue over time", Files.readAllBytes(run.resolve("tissue.gif")), "gif");
+        page.image("Fate proportions over time", folder.bytes(RunLayout.FATE_CHART), "png");
+        page.image("The tissue at the end", folder.bytes(RunLayout.TISSUE_IMAGE), "png");
+        if (folder.has(RunLayout.ANIMATION)) {
+            page.image("The tissue over time", folder.bytes(RunLayout.ANIMATION), "gif");
         }
         List<String> fates = new ArrayList<>(metrics.getAsJsonObject("boundaries").keySet());
-        page.image("Fate profile along the gradient", profile(run, fates, metrics), "png");
+        page.image("Fate profile along the gradient", profile(folder, fates, metrics), "png");
         for (Figure f : circuit) {
             page.image(f.caption(), f.png(), "png");
         }
@@ -103,13 +105,13 @@ public final class RunReport {
         return page.finish();
     }
 
-    private static byte[] profile(Path run, List<String> fates, JsonObject metrics) throws IOException {
-        RunFiles.Profile profile = RunFiles.profile(run, fates);
+    private static byte[] profile(RunFolderReader folder, List<String> fates, JsonObject metrics) throws IOException {
+        RunFolderReader.Profile profile = folder.profile(fates);
         JsonElement sim = metrics.getAsJsonObject("boundaries").getAsJsonObject(fates.get(fates.size() - 1))
                 .get("position_um");
         double simulated = sim == null || sim.isJsonNull() ? Double.NaN : sim.getAsDouble();
         return png(ProfileChart.create(fates, profile.x(), profile.fractions(), simulated,
-                RunFiles.predictedBoundaries(metrics)));
+                RunFolderReader.predictedBoundaries(metrics)));
     }
 
     /**
@@ -119,7 +121,7 @@ public final class RunReport {
     static List<Figure> circuitFigures(String scenarioText, Path run) throws IOException {
         Scenario scenario;
         try {
-            scenario = ScenarioReader.parse("scenario.toml", "run", scenarioText.getBytes(StandardCharsets.UTF_8),
+            scenario = ScenarioReader.parse(RunLayout.SCENARIO_COPY, "run", scenarioText.getBytes(StandardCharsets.UTF_8),
                     run.toAbsolutePath());
         } catch (ScenarioException e) {
             return List.of();

@@ -3,10 +3,10 @@ package org.fatefield.scenarios.robustness;
 import java.util.ArrayList;
 import java.util.List;
 import org.fatefield.engine.metrics.FateProfile;
+import org.fatefield.engine.metrics.SampleSummary;
 import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.engine.tissue.TissueSpec;
 import org.fatefield.scenarios.output.RunMetrics;
-import org.hipparchus.distribution.continuous.TDistribution;
 
 /**
  * How the pattern shifts when one quantity changes by a stated fraction f. Each perturbation is
@@ -80,19 +80,7 @@ public final class RobustnessAnalysis {
     }
 
     private static Sensitivity summarise(String perturbation, String metric, List<Double> values) {
-        int n = values.size();
-        if (n == 0) {
-            return new Sensitivity(perturbation, metric, Double.NaN, Double.NaN, Double.NaN, 0);
-        }
-        double mean = values.stream().mapToDouble(Double::doubleValue).average().orElseThrow();
-        if (n == 1) {
-            return new Sensitivity(perturbation, metric, mean, Double.NaN, Double.NaN, 1);
-        }
-        double ss = 0;
-        for (double v : values) {
-            ss += (v - mean) * (v - mean);
-        }
-        double half = new TDistribution(n - 1).inverseCumulativeProbability(0.975) * Math.sqrt(ss / (n - 1) / n);
-        return new Sensitivity(perturbation, metric, mean, mean - half, mean + half, n);
+        SampleSummary s = SampleSummary.of(values);
+        return new Sensitivity(perturbation, metric, s.mean(), s.low(), s.high(), s.count());
     }
 }

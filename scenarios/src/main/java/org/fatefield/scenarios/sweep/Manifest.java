@@ -9,11 +9,11 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVPrinter;
 import org.apache.commons.csv.CSVRecord;
 import org.fatefield.circuits.random.RandomStreams;
+import org.fatefield.scenarios.output.RunTables;
 
 /**
  * The runs of a planned sweep, in {@code manifest.csv}: a stable id, the point and replicate, the
@@ -69,7 +69,7 @@ public record Manifest(List<String> keys, List<Run> runs) {
 
     /** Writes {@code manifest.csv}. */
     public void write(Writer out) throws IOException {
-        CSVPrinter printer = new CSVPrinter(out, CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get());
+        CSVPrinter printer = RunTables.printer(out);
         List<String> header = new ArrayList<>(List.of("run_id", "point", "replicate", "seed"));
         header.addAll(keys);
         printer.printRecord(header);
@@ -92,8 +92,7 @@ public record Manifest(List<String> keys, List<Run> runs) {
                     + folder);
         }
         try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8);
-                CSVParser parser = CSVFormat.DEFAULT.builder().setHeader()
-                        .setSkipHeaderRecord(true).get().parse(in)) {
+                CSVParser parser = RunTables.parser(in)) {
             List<String> header = parser.getHeaderNames();
             List<CSVRecord> records = parser.getRecords();
             List<String> keys = header.subList(4, header.size());

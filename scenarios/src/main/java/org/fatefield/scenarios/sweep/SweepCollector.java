@@ -1,9 +1,7 @@
 package org.fatefield.scenarios.sweep;
 
 import com.google.gson.JsonObject;
-import com.google.gson.JsonParser;
 import java.io.IOException;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -12,13 +10,13 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeSet;
-import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
+import org.fatefield.engine.metrics.SampleSummary;
+import org.fatefield.scenarios.output.JsonFiles;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.output.RunTables;
 import org.fatefield.viz.chart.ChartFiles;
 import org.fatefield.viz.chart.SweepCharts;
-import org.hipparchus.distribution.continuous.TDistribution;
 
 /**
  * Gathers a sweep's results into {@code runs.csv} (a row per run: id, point, replicate, seed,
@@ -46,8 +44,7 @@ public final class SweepCollector {
         List<String> missing = new ArrayList<>();
         for (Manifest.Run run : manifest.runs()) {
             if (runner.valid(run)) {
-                JsonObject json = JsonParser.parseString(Files.readString(runner.resultFile(run),
-                        StandardCharsets.UTF_8)).getAsJsonObject().getAsJsonObject("metrics");
+                JsonObject json = JsonFiles.read(runner.resultFile(run)).getAsJsonObject("metrics");
                 Map<String, Double> values = new LinkedHashMap<>();
                 json.keySet().forEach(k -> values.put(k, json.get(k).getAsDouble()));
                 names.addAll(values.keySet());
@@ -64,7 +61,7 @@ public final class SweepCollector {
         List<String> metricNames = new ArrayList<>(names);
         RunFolder out = RunFolder.open(folder);
         out.writeText("runs.csv", w -> {
-            CSVPrinter printer = new CSVPrinter(w, CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get());
+            CSVPrinter printer = RunTables.printer(w);
             List<String> header = new ArrayList<>(List.of("run_id", "point", "replicate", "seed"));
             header.addAll(manifest.keys());
             header.add("status");
@@ -100,7 +97,7 @@ public final class SweepCollector {
             }
         }
         out.writeText("summary.csv", w -> {
-            CSVPrinter printer = new CSVPrinter(w, CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get());
+            CSVPrinter printer = RunTables.printer(w);
             List<String> header = new ArrayList<>(List.of("point"));
             header.addAll(manifest.keys());
             header.addAll(List.of("metric", "runs", "mean", "sd", "ci95_low", "ci95_high"));
@@ -157,20 +154,7 @@ public final class SweepCollector {
 
     /** Count, mean, standard deviation and the Student-t 95% interval of the mean. */
     static double[] summary(double[] v) {
-        int n = v.length;
-        if (n == 0) {
-            return new double[] {0, Double.NaN, Double.NaN, Double.NaN, Double.NaN};
-        }
-        double mean = Arrays.stream(v).average().orElse(Double.NaN);
-        if (n == 1) {
-            return new double[] {1, mean, Double.NaN, Double.NaN, Double.NaN};
-        }
-        double ss = 0;
-        for (double x : v) {
-            ss += (x - mean) * (x - mean);
-        }
-        double sd = Math.sqrt(ss / (n - 1));
-        double half = new TDistribution(n - 1).inverseCumulativeProbability(0.975) * sd / Math.sqrt(n);
-        return new double[] {n, mean, sd, mean - half, mean + half};
+        SampleSummary s = SampleSummary.of(v);
+        return new double[] {s.count(), s.mean(), s.sd(), s.low(), s.high()};
     }
 }

@@ -1,8 +1,6 @@
 package org.fatefield.scenarios.sweep;
 
-import com.google.gson.Gson;
 import com.google.gson.JsonObject;
-import com.google.gson.JsonParser;
 import java.io.IOException;
 import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
@@ -20,6 +18,7 @@ import java.util.concurrent.atomic.AtomicInteger;
 import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioReader;
+import org.fatefield.scenarios.output.JsonFiles;
 import org.fatefield.scenarios.output.Progress;
 import org.fatefield.scenarios.output.RunMetrics;
 
@@ -123,7 +122,7 @@ public final class SweepRunner {
             return false;
         }
         try {
-            JsonObject json = JsonParser.parseString(Files.readString(file, StandardCharsets.UTF_8)).getAsJsonObject();
+            JsonObject json = JsonFiles.read(file);
             return json.has("complete") && json.get("complete").getAsBoolean()
                     && run.id().equals(json.get("run_id").getAsString()) && json.has("metrics")
                     && json.get("seed").getAsLong() == run.seed();
@@ -171,7 +170,7 @@ public final class SweepRunner {
 
     private static void write(Path target, JsonObject json) throws IOException {
         Path temporary = target.resolveSibling("." + target.getFileName() + ".partial");
-        Files.writeString(temporary, new Gson().toJson(json) + "\n", StandardCharsets.UTF_8);
+        Files.writeString(temporary, JsonFiles.text(json), StandardCharsets.UTF_8);
         Files.move(temporary, target, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
     }
 }

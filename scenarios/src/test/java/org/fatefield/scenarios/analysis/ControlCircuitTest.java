@@ -3,7 +3,6 @@ package org.fatefield.scenarios.analysis;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 
-import java.nio.charset.StandardCharsets;
 import org.fatefield.circuits.analysis.QuasiPotential;
 import org.fatefield.circuits.analysis.continuation.Branch;
 import org.fatefield.circuits.analysis.continuation.SpecialPoint;

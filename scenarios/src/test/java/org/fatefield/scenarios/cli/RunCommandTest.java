@@ -160,4 +160,21 @@ class RunCommandTest {
         assertEquals(FatefieldCommand.INVALID_INPUT, missing.code());
         assertTrue(missing.err().contains("built-in: demo"), missing.err());
     }
+
+    @Test
+    void sharedOptionsRefuseOutOfRangeValuesBeforeAnythingRuns() {
+        String[][] cases = {
+            {"run", "demo", "--threads", "0", "--out", tmp.resolve("t0").toString()},
+            {"run", "demo", "--seed", "-3", "--out", tmp.resolve("s3").toString()},
+            {"replicates", "demo", "--runs", "2", "--threads", "-1", "--out", tmp.resolve("r").toString()},
+            {"analyze", "demo", "--seed", "-1", "--out", tmp.resolve("a").toString()},
+        };
+        for (String[] args : cases) {
+            Outcome bad = fatefield(args);
+            String option = args[args.length - 4].startsWith("--") ? args[args.length - 4] : args[2];
+            assertEquals(2, bad.code(), String.join(" ", args));
+            assertTrue(bad.err().contains(option + " must be"), bad.err());
+            assertTrue(!Files.exists(Path.of(args[args.length - 1])), "nothing created for " + String.join(" ", args));
+        }
+    }
 }

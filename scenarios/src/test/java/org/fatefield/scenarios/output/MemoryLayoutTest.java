@@ -60,7 +60,7 @@ class MemoryLayoutTest {
                     .append(Arrays.toString(cell.state())).append('\n');
         }
         return new String[] {cells.toString(), series.toString(),
-            Files.readString(dir.resolve(LineageFiles.TABLE), StandardCharsets.UTF_8), exact.toString()};
+            Files.readString(dir.resolve(RunLayout.LINEAGE), StandardCharsets.UTF_8), exact.toString()};
     }
 
     @Test

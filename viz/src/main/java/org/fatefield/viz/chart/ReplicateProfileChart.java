@@ -3,6 +3,7 @@ package org.fatefield.viz.chart;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.util.Locale;
+import org.fatefield.engine.metrics.SampleSummary;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.plot.IntervalMarker;
@@ -65,19 +66,11 @@ public final class ReplicateProfileChart {
         NumberAxis yAxis = new NumberAxis("fraction " + fate);
         yAxis.setRange(0, 1);
         XYPlot plot = new XYPlot(data, new NumberAxis("x (µm), along the gradient"), yAxis, lines);
-        double sum = 0;
-        double sumSq = 0;
-        int n = 0;
-        for (double b : boundaries) {
-            if (Double.isFinite(b)) {
-                sum += b;
-                sumSq += b * b;
-                n++;
-            }
-        }
+        SampleSummary spread = SampleSummary.of(boundaries);
+        int n = spread.count();
         if (n >= 2) {
-            double m = sum / n;
-            double sd = Math.sqrt(Math.max(0, (sumSq - n * m * m) / (n - 1)));
+            double m = spread.mean();
+            double sd = spread.sd();
             IntervalMarker band = new IntervalMarker(m - sd, m + sd, BAND);
             band.setLabel(String.format(Locale.ROOT, " boundary %.0f ± %.1f µm (n = %d)", m, sd, n));
             band.setLabelFont(ChartStyle.SMALL);

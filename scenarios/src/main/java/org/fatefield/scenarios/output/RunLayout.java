@@ -1,0 +1,67 @@
+package org.fatefield.scenarios.output;
+
+import java.nio.file.Path;
+
+/**
+ * Every file name of a run folder and of a replicate set, in one place: the runner writes
+ * them, {@link RunFolderReader} reads them, and the README's table lists them. To add an
+ * output, add its name here, write it from {@link ScenarioRunner} (or the command that owns
+ * it) and read it through {@link RunFolderReader}.
+ */
+public final class RunLayout {
+
+    /** Fate counts over time. */
+    public static final String TIMESERIES = "timeseries.csv";
+    /** The live cells at the end. */
+    public static final String CELLS = "cells.csv";
+    /** Every cell ever born, streamed during the run. */
+    public static final String LINEAGE = "lineage.csv";
+    /** The family trees, Newick. */
+    public static final String TREES = "lineage.nwk";
+    /** Fate fractions along the gradient. */
+    public static final String PROFILE = "profile.csv";
+    /** Same-fate fraction against lineage distance. */
+    public static final String RELATEDNESS = "relatedness.csv";
+    /** Fate composition of each founder's clone. */
+    public static final String CLONES = "clones.csv";
+    /** Boundaries, widths, predictions, sister agreement. */
+    public static final String METRICS = "metrics.json";
+    /** Fate proportions over time, PNG. */
+    public static final String FATE_CHART = "fate-proportions.png";
+    /** Fate proportions over time, SVG. */
+    public static final String FATE_CHART_SVG = "fate-proportions.svg";
+    /** The final tissue. */
+    public static final String TISSUE_IMAGE = "tissue.png";
+    /** Animation of the frames. */
+    public static final String ANIMATION = "tissue.gif";
+    /** Folder of PNG frames. */
+    public static final String FRAMES = "frames";
+    /** Copy of the scenario that was run. */
+    public static final String SCENARIO_COPY = "scenario.toml";
+    /** Provenance, written last: its presence marks a finished run. */
+    public static final String PROVENANCE = "run.json";
+    /** The run's state for --resume, deleted when the run finishes. */
+    public static final String CHECKPOINT = "checkpoint.bin";
+    /** The offline HTML report. */
+    public static final String REPORT = "report.html";
+    /** A replicate set's table of runs. */
+    public static final String REPLICATES_TABLE = "replicates.csv";
+    /** A replicate set's summary. */
+    public static final String REPLICATES_SUMMARY = "replicates.json";
+
+    private RunLayout() {
+    }
+
+    /**
+     * The temporary name a file is written under before it is renamed into place: hidden, and
+     * never taken for a finished file.
+     */
+    public static Path partial(Path target) {
+        return target.resolveSibling("." + target.getFileName() + ".partial");
+    }
+
+    /** The folder of the replicate run with {@code seed} in a replicate set. */
+    public static String replicateFolder(long seed) {
+        return "seed-" + seed;
+    }
+}
