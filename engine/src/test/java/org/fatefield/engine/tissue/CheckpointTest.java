@@ -59,9 +59,7 @@ class CheckpointTest {
         Tissue first = new Tissue(spec(), 77, 1);
         first.setLineageSink(resumedRecords::add);
         first.start();
-        while (first.steps() < 333) {
-            first.schedule.step(first);
-        }
+        first.advance(333);
         ByteArrayOutputStream bytes = new ByteArrayOutputStream();
         first.writeCheckpoint(new DataOutputStream(bytes));
         first.finish();

@@ -30,7 +30,7 @@ final class CellPortrayal extends SimplePortrayal2D {
         g.setColor(gui.colourOf(cell));
         g.fill(disc);
         if (w > 4) {
-            g.setColor(cell == gui.selected() ? SELECTED : OUTLINE);
+            g.setColor(cell.id() == gui.selectedId() ? SELECTED : OUTLINE);
             g.draw(disc);
         }
     }

@@ -49,17 +49,22 @@ public final class TissueGui extends GUIState {
     private final FastValueGridPortrayal2D fieldPortrayal = new FastValueGridPortrayal2D("morphogen", false);
     private DoubleGrid2D grid;
     private ColourMode mode = ColourMode.FATE;
-    private Cell selected;
+    /** Id of the selected cell, or -1: cells are followed by id, as relocation replaces their objects. */
+    private long selectedId = -1;
     private double speciesMax = 1;
     private double fieldMax = 1e-12;
     private CellTraces traces;
 
-    /** A view of {@code tissue} (not yet started). */
+    /**
+     * A view of {@code tissue} (not yet started). The clicked cell's trace is taken by an
+     * observer of the tissue's tick, so it sees every step however the tissue is advanced.
+     */
     public TissueGui(Tissue tissue) {
         super(tissue);
         this.tissue = tissue;
         this.space = new Continuous2D(4 * tissue.spec().growth().cellRadius(), tissue.spec().width(),
                 tissue.spec().height());
+        tissue.addObserver(t -> traces.record(t.time(), t.cells()));
     }
 
     /** The tissue. */
@@ -80,7 +85,7 @@ public final class TissueGui extends GUIState {
     @Override
     public void start() {
         super.start();
-        selected = null;
+        selectedId = -1;
         traces = new CellTraces(TRACE_SAMPLES, tissue.spec().circuit().network().speciesNames().size());
         MorphogenField f = tissue.field();
         grid = new DoubleGrid2D(f.columns(), f.rows());
@@ -113,11 +118,11 @@ public final class TissueGui extends GUIState {
         });
         cellPortrayal.setField(space);
         cellPortrayal.setPortrayalForAll(new CellPortrayal(this));
+        traces.record(tissue.time(), tissue.cells());
         sync();
-        scheduleRepeatingImmediatelyAfter(state -> sync());
     }
 
-    /** Copies positions and field values into the display's fields. */
+    /** Copies positions and field values into the display's fields; call after advancing the tissue. */
     public void sync() {
         space.clear();
         double height = tissue.spec().height();
@@ -127,7 +132,6 @@ public final class TissueGui extends GUIState {
             max = Math.max(max, cell.concentration(0));
         }
         speciesMax = max;
-        traces.record(tissue.time(), tissue.cells());
         MorphogenField f = tissue.field();
         fieldMax = Math.max(f.max(), 1e-12);
         for (int i = 0; i < f.columns(); i++) {
@@ -160,19 +164,24 @@ public final class TissueGui extends GUIState {
         this.mode = value;
     }
 
-    /** The selected cell, or null. */
+    /** The selected cell if it is still alive, else null. */
     public Cell selected() {
-        return selected;
+        return selectedId < 0 ? null : tissue.cellById(selectedId).orElse(null);
     }
 
-    /** Selects a cell (or none). */
+    /** Id of the selected cell (alive or not), -1 if none was selected. */
+    public long selectedId() {
+        return selectedId;
+    }
+
+    /** Selects a cell (or none, with null). */
     public void select(Cell cell) {
-        this.selected = cell;
+        this.selectedId = cell == null ? -1 : cell.id();
     }
 
     /** Recent history of the selected cell (back through its ancestors), or null. */
     CellTraces.Trace selectedTrace() {
-        return selected == null ? null : traces.of(selected.id());
+        return selectedId < 0 ? null : traces.of(selectedId);
     }
 
     /** The live cells. */

@@ -248,10 +248,8 @@ public final class TissueWindow extends JFrame {
 
     /** Advances the tissue by {@code steps} steps and refreshes the view. */
     public void advance(int steps) {
-        Tissue t = gui.tissue();
-        for (int i = 0; i < steps && !t.finished(); i++) {
-            gui.step();
-        }
+        gui.tissue().advance(steps);
+        gui.sync();
         refresh();
     }
 
@@ -317,13 +315,14 @@ public final class TissueWindow extends JFrame {
     private void describeSelection() {
         Cell c = gui.selected();
         charts.showTrace(gui.selectedTrace());
-        if (c == null) {
+        if (gui.selectedId() < 0) {
             info.setText("click a cell");
             return;
         }
         Tissue t = gui.tissue();
-        if (gui.selectedTrace() == null) {
-            info.setText(String.format(Locale.ROOT, "cell %d has divided or died; click one of its daughters", c.id()));
+        if (c == null) {
+            info.setText(String.format(Locale.ROOT, "cell %d has divided or died; click one of its daughters",
+                    gui.selectedId()));
             return;
         }
         List<String> species = t.spec().circuit().network().speciesNames();
