@@ -12,6 +12,7 @@ import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.division.CycleTimeDistribution;
 import org.fatefield.engine.division.Partitioning;
+import org.fatefield.engine.domain.Domain;
 import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.fate.FateRule;
 import org.fatefield.engine.field.MorphogenSpec;
@@ -39,10 +40,10 @@ class RenderingTest {
         // Two fixed cells: "high" (X = 1) at (25, 25) and "low" (X = 0) at (75, 25) in a 100 x 50 domain.
         CustomNetwork inert = CustomNetwork.of(List.of("X"), List.of("k"), new double[] {0},
                 List.of(new CustomNetwork.ReactionDefinition("none", new int[] {1}, "k * X")));
-        TissueSpec spec = new TissueSpec(new CircuitSetup(inert, NoiseMode.NONE, 100, new double[] {1.0}),
+        TissueSpec spec = TissueSpec.of(new CircuitSetup(inert, NoiseMode.NONE, 100, new double[] {1.0}),
                 new ParameterMapping(inert.defaultParameters(), List.of()), new MorphogenSpec(0, 0, 10, 0, List.of()),
-                100, 50, new GrowthSpec(1, 5, 0, new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e6, 0),
-                        Partitioning.equal()),
+                new Domain.Rectangle(100, 50), GrowthSpec.of(1, 5, 0,
+                new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e6, 0), Partitioning.equal()),
                 new FateClassifier(List.of(new FateRule("high", new double[] {0.5}, new double[] {Double.NaN})), "low"),
                 new Timing(0.02, 0.01, 0.01));
         Tissue tissue = new Tissue(spec, 1);

@@ -3,11 +3,12 @@ package org.fatefield.engine.bench;
 import java.util.Arrays;
 import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.engine.division.CycleTimeDistribution;
+import org.fatefield.engine.domain.Domain;
 import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.tissue.GrowthSpec;
+import org.fatefield.engine.tissue.Timing;
 import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.engine.tissue.TissueSpec;
-import org.fatefield.engine.tissue.Timing;
 
 /**
  * Measures the tissue's speed in cell-steps per second against a bare array loop doing the same
@@ -118,10 +119,10 @@ public final class TissueBenchmark {
         double scale = Math.sqrt(cells * areaPerCell / (template.width() * template.height()));
         double width = template.width() * scale;
         double height = template.height() * scale;
-        GrowthSpec growth = new GrowthSpec(cells, template.growth().cellRadius(), template.growth().repulsionRate(),
+        GrowthSpec growth = GrowthSpec.of(cells, template.growth().cellRadius(), template.growth().repulsionRate(),
                 new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e9, 0), template.growth().partition());
-        return new TissueSpec(template.circuit(), template.mapping(), scaledField(template, width, height), width,
-                height, growth, template.fates(), timing);
+        return TissueSpec.of(template.circuit(), template.mapping(), scaledField(template, width, height),
+                template.domain().resized(width, height), growth, template.fates(), timing);
     }
 
     /** The template's field with its grid coarsened, if needed, to at most 2048 squares a side. */

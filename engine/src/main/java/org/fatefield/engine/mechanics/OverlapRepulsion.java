@@ -3,11 +3,12 @@ package org.fatefield.engine.mechanics;
 import java.util.Arrays;
 import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.cell.CellPopulation;
+import org.fatefield.engine.domain.Domain;
 import org.fatefield.engine.parallel.BlockParallel;
 
 /**
- * Overdamped relaxation of overlapping discs inside a rectangle with walls, the disc inscribed
- * in it, or a strip periodic along y (walls at x = 0 and x = width only).
+ * Overdamped relaxation of overlapping discs inside a {@link Domain} (its walls keep every disc
+ * inside; across a periodic seam, distances go by the nearest image).
  *
  * <p>Each overlapping pair pushes apart along the line of centres with speed
  * {@code rate * overlap} shared equally; with adhesion, neighbours a little beyond contact pull
@@ -19,13 +20,13 @@ import org.fatefield.engine.parallel.BlockParallel;
  */
 public final class OverlapRepulsion {
 
+    private final Domain domain;
     private final double width;
     private final double height;
     private final double rate;
     private final double newbornRadius;
     private final double adhesion;
     private final double adhesionRange;
-    private final DomainShape shape;
     /** Positions and radii in bucket order (slot order), so that a bucket row is read contiguously. */
     private double[] sx = new double[0];
     private double[] sy = new double[0];
@@ -37,25 +38,17 @@ public final class OverlapRepulsion {
     private int[] bucketStart = new int[0];
     private int[] bucketFill = new int[0];
     private double[] largestVolumeOfWorker = new double[0];
+    private double[][] placeOfWorker = new double[0][];
 
     /**
-     * @param width         domain width (µm)
-     * @param height        domain height (µm)
+     * @param domain        where the cells live (its walls, or its periodic seam)
      * @param rate          relaxation rate (1 / h): speed per µm of overlap, at least 0
      * @param newbornRadius radius of a cell of volume 1 in µm (a cell of volume V has radius sqrt(V) times it)
-     */
-    public OverlapRepulsion(double width, double height, double rate, double newbornRadius) {
-        this(width, height, rate, newbornRadius, 0, 0.2, DomainShape.RECTANGLE);
-    }
-
-    /**
      * @param adhesion      attraction rate (1 / h): speed per µm of gap between neighbours closer than
      *                      contact distance times {@code 1 + adhesionRange}, at least 0
      * @param adhesionRange reach of adhesion beyond contact, as a fraction of the contact distance
-     * @param shape         rectangle, the disc inscribed in it, or a strip periodic along y
      */
-    public OverlapRepulsion(double width, double height, double rate, double newbornRadius, double adhesion,
-            double adhesionRange, DomainShape shape) {
+    public OverlapRepulsion(Domain domain, double rate, double newbornRadius, double adhesion, double adhesionRange) {
         if (!(rate >= 0) || Double.isInfinite(rate)) {
             throw new IllegalArgumentException("repulsion rate must be finite and at least 0, got " + rate);
         }
@@ -63,13 +56,18 @@ public final class OverlapRepulsion {
             throw new IllegalArgumentException("adhesion must be at least 0 and its range in [0, 1], got " + adhesion
                     + ", " + adhesionRange);
         }
-        this.width = width;
-        this.height = height;
+        this.domain = domain;
+        this.width = domain.width();
+        this.height = domain.height();
         this.rate = rate;
         this.newbornRadius = newbornRadius;
         this.adhesion = adhesion;
         this.adhesionRange = adhesionRange;
-        this.shape = shape;
+    }
+
+    /** Repulsion only, no adhesion. */
+    public static OverlapRepulsion withoutAdhesion(Domain domain, double rate, double newbornRadius) {
+        return new OverlapRepulsion(domain, rate, newbornRadius, 0, 0.2);
     }
 
     /** Moves every cell by one overdamped step of {@code dt} hours, on the caller's thread. */
@@ -105,9 +103,9 @@ public final class OverlapRepulsion {
         double side = 2.0 * largest * (1 + (adhesion > 0 ? adhesionRange : 0));
         int gx = Math.max(1, (int) Math.ceil(width / side));
         // Periodic rows must all be at least one range tall, the row across the seam included.
-        int gy = shape == DomainShape.STRIP ? Math.max(1, (int) Math.floor(height / side))
-                : Math.max(1, (int) Math.ceil(height / side));
-        double sideY = shape == DomainShape.STRIP ? height / gy : side;
+        boolean periodic = domain.periodicY();
+        int gy = periodic ? Math.max(1, (int) Math.floor(height / side)) : Math.max(1, (int) Math.ceil(height / side));
+        double sideY = periodic ? height / gy : side;
         pool.forEach(n, (from, to, worker) -> {
             for (int i = from; i < to; i++) {
                 Cell c = population.get(i);
@@ -126,8 +124,9 @@ public final class OverlapRepulsion {
         });
         double step = 0.5 * dt;
         pool.forEach(n, (from, to, worker) -> {
+            double[] place = placeOfWorker[worker];
             for (int i = from; i < to; i++) {
-                move(population.get(i), slotOfCell[i], gx, gy, side, sideY, step);
+                move(population.get(i), slotOfCell[i], gx, gy, side, sideY, step, place);
             }
         });
     }
@@ -135,9 +134,11 @@ public final class OverlapRepulsion {
     /**
      * Moves the cell in slot {@code self} by one step of the net force of its neighbours in the
      * snapshot, clamped to the walls. Reads only the snapshot arrays and writes only this cell, so
-     * blocks of cells can move in parallel, in any order, with the same result.
+     * blocks of cells can move in parallel, in any order, with the same result. {@code place} is
+     * the worker's scratch for the confined position.
      */
-    private void move(Cell cell, int self, int gx, int gy, double side, double sideY, double step) {
+    private void move(Cell cell, int self, int gx, int gy, double side, double sideY, double step,
+            double[] place) {
         double x = sx[self];
         double y = sy[self];
         double radius = sr[self];
@@ -145,7 +146,7 @@ public final class OverlapRepulsion {
         double fy = 0;
         int bx = bucketOf(x, side, gx);
         int by = bucketOf(y, sideY, gy);
-        boolean periodic = shape == DomainShape.STRIP;
+        boolean periodic = domain.periodicY();
         // Rows by - 1 .. by + 1, wrapped on a strip (where fewer than three rows means all of them).
         int rowFrom = Math.max(0, by - 1);
         int rowTo = Math.min(gy - 1, by + 1);
@@ -166,8 +167,7 @@ public final class OverlapRepulsion {
                 double ex = x - sx[k];
                 double ey = y - sy[k];
                 if (periodic) {
-                    // Nearest image across the periodic edge.
-                    ey = ey > 0.5 * height ? ey - height : (ey < -0.5 * height ? ey + height : ey);
+                    ey = domain.nearestImageDy(ey);
                 }
                 double reach = radius + sr[k];
                 double d2 = ex * ex + ey * ey;
@@ -193,22 +193,8 @@ public final class OverlapRepulsion {
                 }
             }
         }
-        double r = Math.min(radius, 0.5 * Math.min(width, height));
-        double nxp = Math.min(Math.max(x + step * fx, r), width - r);
-        double nyp = periodic ? wrap(y + step * fy, height) : Math.min(Math.max(y + step * fy, r), height - r);
-        if (shape == DomainShape.DISC) {
-            double cx = 0.5 * width;
-            double cy = 0.5 * height;
-            double limit = 0.5 * Math.min(width, height) - r;
-            double ex = nxp - cx;
-            double ey = nyp - cy;
-            double d = Math.hypot(ex, ey);
-            if (d > limit && d > 0) {
-                nxp = cx + ex * limit / d;
-                nyp = cy + ey * limit / d;
-            }
-        }
-        cell.moveTo(nxp, nyp);
+        domain.confine(x + step * fx, y + step * fy, radius, place);
+        cell.moveTo(place[0], place[1]);
     }
 
     /**
@@ -262,12 +248,6 @@ public final class OverlapRepulsion {
         }
     }
 
-    /** {@code y} brought into [0, period) by whole periods. */
-    public static double wrap(double y, double period) {
-        double w = y - period * Math.floor(y / period);
-        return w >= period ? 0.0 : w;
-    }
-
     private static int bucketOf(double coordinate, double side, int count) {
         int b = (int) (coordinate / side);
         return b < 0 ? 0 : (b >= count ? count - 1 : b);
@@ -286,6 +266,8 @@ public final class OverlapRepulsion {
         }
         if (largestVolumeOfWorker.length != workers) {
             largestVolumeOfWorker = new double[workers];
+            // Padded past a cache line so that two workers' scratch never shares one.
+            placeOfWorker = new double[workers][2 + 16];
         }
     }
 }

@@ -11,8 +11,6 @@ import org.fatefield.engine.division.CellSize;
 import org.fatefield.engine.lineage.Ancestry;
 import org.fatefield.engine.lineage.LineageRecord;
 import org.fatefield.engine.lineage.LineageSink;
-import org.fatefield.engine.mechanics.DomainShape;
-import org.fatefield.engine.mechanics.OverlapRepulsion;
 import org.fatefield.engine.variability.ExtrinsicNoise;
 
 /**
@@ -30,6 +28,7 @@ final class CellDivision {
     private final double[] secondDaughter;
     private final CellRandom random;
     private long[] order = new long[0];
+    private final double[] place = new double[2];
 
     CellDivision(TissueSpec spec, RandomStreams streams, CellRandom random) {
         this.spec = spec;
@@ -81,12 +80,9 @@ final class CellDivision {
         ancestry.add(id, mother.id());
         EmbeddedStream.Detached birth = new EmbeddedStream.Detached(streams.seedWords(id));
         double cycle = spec.growth().cycle().sample(birth);
-        double r = spec.growth().cellRadius();
-        double cx = Math.min(Math.max(x, r), spec.width() - r);
-        double cy = spec.growth().shape() == DomainShape.STRIP ? OverlapRepulsion.wrap(y, spec.height())
-                : Math.min(Math.max(y, r), spec.height() - r);
+        spec.domain().confine(x, y, spec.growth().cellRadius(), place);
         Cell cell = new Cell(id, mother.id(), mother.generation() + 1, now, cycle, state.clone(), birth.streamWords(),
-                cx, cy, volume, volume);
+                place[0], place[1], volume, volume);
         cell.setFate(mother.fate(), mother.fateSince());
         if (!spec.extrinsic().isEmpty()) {
             cell.setScores(ExtrinsicNoise.daughterScores(spec.extrinsic(), mother.scores(), random.of(cell)));

@@ -23,7 +23,6 @@ import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.lineage.Ancestry;
 import org.fatefield.engine.lineage.LineageRecord;
 import org.fatefield.engine.lineage.LineageSink;
-import org.fatefield.engine.mechanics.DomainShape;
 import org.fatefield.engine.mechanics.OverlapRepulsion;
 import org.fatefield.engine.parallel.BlockParallel;
 import org.fatefield.engine.record.TimeSeries;
@@ -106,8 +105,7 @@ public final class Tissue extends SimState {
         List<MorphogenSpec> specs = spec.fields();
         fields = new MorphogenField[specs.size()];
         for (int f = 0; f < fields.length; f++) {
-            fields[f] = new MorphogenField(specs.get(f), spec.width(), spec.height(),
-                    growth.shape() == DomainShape.STRIP);
+            fields[f] = new MorphogenField(specs.get(f), spec.width(), spec.height(), spec.domain().periodicY());
         }
         field = fields[0];
         series = new TimeSeries(spec.fates().fateNames());
@@ -129,8 +127,8 @@ public final class Tissue extends SimState {
                     + CircuitStepper.SCRATCH_PADDING);
         }
         signals = new double[threads][fields.length + CircuitStepper.SCRATCH_PADDING];
-        mechanics = new OverlapRepulsion(spec.width(), spec.height(), growth.repulsionRate(), growth.cellRadius(),
-                growth.adhesion(), 0.2, growth.shape());
+        mechanics = new OverlapRepulsion(spec.domain(), growth.repulsionRate(), growth.cellRadius(),
+                growth.adhesion(), 0.2);
         division = new CellDivision(spec, streams, randoms[0]);
         steps = 0;
         ancestry = new Ancestry();
@@ -138,21 +136,15 @@ public final class Tissue extends SimState {
         blockSide = 4 * spec.morphogen().gridSpacing();
         UniformRandomProvider placement = streams.stream(PLACEMENT_STREAM);
         double r = growth.cellRadius();
+        double[] point = new double[2];
         for (int i = 0; i < growth.initialCells(); i++) {
-            double x;
-            double y;
-            boolean strip = growth.shape() == DomainShape.STRIP;
-            do {
-                x = r + (spec.width() - 2 * r) * placement.nextDouble();
-                y = strip ? spec.height() * placement.nextDouble() : r + (spec.height() - 2 * r) * placement.nextDouble();
-            } while (growth.shape() == DomainShape.DISC && Math.hypot(x - 0.5 * spec.width(), y - 0.5 * spec.height())
-                    > 0.5 * Math.min(spec.width(), spec.height()) - r);
+            spec.domain().samplePoint(placement, r, point);
             long id = population.newId();
             EmbeddedStream.Detached birth = new EmbeddedStream.Detached(streams.seedWords(id));
             double cycle = growth.cycle().sample(birth);
             double age = cycle * birth.nextDouble();
-            Cell founder = new Cell(id, -1, 0, -age, cycle, circuit.initialState(), birth.streamWords(), x, y, 1.0,
-                    growth.size().control().volume(1.0, age, cycle));
+            Cell founder = new Cell(id, -1, 0, -age, cycle, circuit.initialState(), birth.streamWords(), point[0],
+                    point[1], 1.0, growth.size().control().volume(1.0, age, cycle));
             if (!spec.extrinsic().isEmpty()) {
                 founder.setScores(ExtrinsicNoise.founderScores(spec.extrinsic(), randoms[0].of(founder)));
             }

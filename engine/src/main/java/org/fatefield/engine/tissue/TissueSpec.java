@@ -2,35 +2,71 @@ package org.fatefield.engine.tissue;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Objects;
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.field.MorphogenSpec;
-import org.fatefield.engine.mechanics.DomainShape;
+import org.fatefield.engine.domain.Domain;
 import org.fatefield.engine.variability.ExtrinsicNoise;
 
 /**
- * Everything a tissue run needs, validated: the model objects a scenario file becomes.
+ * Everything a tissue run needs, validated: the model objects a scenario file becomes. Built
+ * with {@link #of} and, for variability and further fields, the {@code with} copies.
  *
  * @param circuit   the circuit in every cell and its simulation method
  * @param mapping   how the local morphogen sets the circuit's parameters
  * @param morphogen morphogen physics
- * @param width     domain width (µm), greater than 0
- * @param height    domain height (µm), greater than 0
+ * @param domain    where cells live (the fields fill its width x height rectangle)
  * @param growth    founders, size, mechanics and division
  * @param fates     the fate rules
  * @param timing    duration, step and recording interval
  * @param extrinsic cell-to-cell parameter variability, inherited at division
  * @param others    further fields besides the primary morphogen (indices 1, 2, ... for couplings)
  */
-public record TissueSpec(CircuitSetup circuit, ParameterMapping mapping, MorphogenSpec morphogen, double width,
-        double height, GrowthSpec growth, FateClassifier fates, Timing timing, List<ExtrinsicNoise> extrinsic,
+public record TissueSpec(CircuitSetup circuit, ParameterMapping mapping, MorphogenSpec morphogen, Domain domain,
+        GrowthSpec growth, FateClassifier fates, Timing timing, List<ExtrinsicNoise> extrinsic,
         List<MorphogenSpec> others) {
 
-    /** A tissue with one field. */
-    public TissueSpec(CircuitSetup circuit, ParameterMapping mapping, MorphogenSpec morphogen, double width,
-            double height, GrowthSpec growth, FateClassifier fates, Timing timing, List<ExtrinsicNoise> extrinsic) {
-        this(circuit, mapping, morphogen, width, height, growth, fates, timing, extrinsic, List.of());
+    /** A tissue with one field and no extrinsic variability. */
+    public static TissueSpec of(CircuitSetup circuit, ParameterMapping mapping, MorphogenSpec morphogen,
+            Domain domain, GrowthSpec growth, FateClassifier fates, Timing timing) {
+        return new TissueSpec(circuit, mapping, morphogen, domain, growth, fates, timing, List.of(), List.of());
+    }
+
+    /** With cell-to-cell parameter variability {@code value}. */
+    public TissueSpec withExtrinsic(List<ExtrinsicNoise> value) {
+        return new TissueSpec(circuit, mapping, morphogen, domain, growth, fates, timing, value, others);
+    }
+
+    /** With the further fields {@code value} besides the primary morphogen. */
+    public TissueSpec withOtherFields(List<MorphogenSpec> value) {
+        return new TissueSpec(circuit, mapping, morphogen, domain, growth, fates, timing, extrinsic, value);
+    }
+
+    /** With another domain (shape and size). */
+    public TissueSpec withDomain(Domain value) {
+        return new TissueSpec(circuit, mapping, morphogen, value, growth, fates, timing, extrinsic, others);
+    }
+
+    /** With other growth and division rules. */
+    public TissueSpec withGrowth(GrowthSpec value) {
+        return new TissueSpec(circuit, mapping, morphogen, domain, value, fates, timing, extrinsic, others);
+    }
+
+    /** With other timing. */
+    public TissueSpec withTiming(Timing value) {
+        return new TissueSpec(circuit, mapping, morphogen, domain, growth, fates, value, extrinsic, others);
+    }
+
+    /** Domain width (µm). */
+    public double width() {
+        return domain.width();
+    }
+
+    /** Domain height (µm). */
+    public double height() {
+        return domain.height();
     }
 
     /** All fields, the primary first. */
@@ -39,12 +75,6 @@ public record TissueSpec(CircuitSetup circuit, ParameterMapping mapping, Morphog
         all.add(morphogen);
         all.addAll(others);
         return all;
-    }
-
-    /** A tissue without extrinsic variability. */
-    public TissueSpec(CircuitSetup circuit, ParameterMapping mapping, MorphogenSpec morphogen, double width,
-            double height, GrowthSpec growth, FateClassifier fates, Timing timing) {
-        this(circuit, mapping, morphogen, width, height, growth, fates, timing, List.of());
     }
 
     /** Checks that the parts fit together. */
@@ -57,10 +87,9 @@ public record TissueSpec(CircuitSetup circuit, ParameterMapping mapping, Morphog
                         + " but the tissue has " + (others.size() + 1) + " fields");
             }
         }
-        if (!(width > 0) || !(height > 0) || Double.isInfinite(width) || Double.isInfinite(height)) {
-            throw new IllegalArgumentException("domain must be finite with positive width and height, got "
-                    + width + " x " + height);
-        }
+        Objects.requireNonNull(domain, "domain");
+        double width = domain.width();
+        double height = domain.height();
         if (mapping.parameterCount() != circuit.network().parameterNames().size()) {
             throw new IllegalArgumentException("parameter mapping has " + mapping.parameterCount()
                     + " parameters but the circuit has " + circuit.network().parameterNames().size());
@@ -70,18 +99,9 @@ public record TissueSpec(CircuitSetup circuit, ParameterMapping mapping, Morphog
                     + ", volume split cv " + growth.size().splitCv() + ") need Langevin or deterministic circuits: the"
                     + " molecule-count methods assume every newborn has the same volume");
         }
-        if (growth.shape() == DomainShape.STRIP) {
-            List<MorphogenSpec> all = new ArrayList<>(others);
-            all.add(morphogen);
-            for (MorphogenSpec field : all) {
-                double squares = height / field.gridSpacing();
-                if (Math.abs(squares - Math.round(squares)) > 1e-6 * squares || Math.round(squares) < 3) {
-                    throw new IllegalArgumentException("a strip's height must be a whole number of morphogen grid"
-                            + " squares, at least three, so the fields wrap around exactly: height " + height
-                            + " µm / grid spacing " + field.gridSpacing() + " µm = " + squares
-                            + "; change tissue.height or the grid spacing");
-                }
-            }
+        domain.checkGrid(morphogen.gridSpacing());
+        for (MorphogenSpec field : others) {
+            domain.checkGrid(field.gridSpacing());
         }
         if (2 * growth.cellRadius() > Math.min(width, height)) {
             throw new IllegalArgumentException("a cell of radius " + growth.cellRadius()

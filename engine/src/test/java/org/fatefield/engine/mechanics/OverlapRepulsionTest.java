@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.fatefield.circuits.random.RandomStreams;
 import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.cell.CellPopulation;
+import org.fatefield.engine.domain.Domain;
 import org.junit.jupiter.api.Test;
 
 class OverlapRepulsionTest {
@@ -21,7 +22,7 @@ class OverlapRepulsionTest {
         CellPopulation population = new CellPopulation();
         population.add(cellAt(0, 50, 50));
         population.add(cellAt(1, 53, 50));
-        OverlapRepulsion repulsion = new OverlapRepulsion(100, 100, 10.0, 2.5);
+        OverlapRepulsion repulsion = OverlapRepulsion.withoutAdhesion(new Domain.Rectangle(100, 100), 10.0, 2.5);
         double dt = 0.01;
         int steps = 200;
         for (int i = 0; i < steps; i++) {
@@ -40,7 +41,7 @@ class OverlapRepulsionTest {
         CellPopulation population = new CellPopulation();
         population.add(cellAt(0, 50, 50));
         population.add(cellAt(1, 55.6, 50));
-        OverlapRepulsion mechanics = new OverlapRepulsion(100, 100, 10.0, 2.5, 4.0, 0.2, DomainShape.RECTANGLE);
+        OverlapRepulsion mechanics = new OverlapRepulsion(new Domain.Rectangle(100, 100), 10.0, 2.5, 4.0, 0.2);
         for (int i = 0; i < 100; i++) {
             mechanics.relax(population, 0.01);
         }
@@ -60,7 +61,7 @@ class OverlapRepulsionTest {
         strip.add(cellAt(1, 50, 99));
         strip.add(cellAt(2, 20, 0.1));
         strip.add(cellAt(3, 20, 2.1));
-        new OverlapRepulsion(100, 100, 10.0, 2.5, 0, 0.2, DomainShape.STRIP).relax(strip, 0.01);
+        new OverlapRepulsion(new Domain.Strip(100, 100), 10.0, 2.5, 0, 0.2).relax(strip, 0.01);
         assertEquals(1.15, strip.get(0).y(), 1e-12);
         assertEquals(98.85, strip.get(1).y(), 1e-12);
         assertEquals(99.95, strip.get(2).y(), 1e-12);
@@ -68,7 +69,7 @@ class OverlapRepulsionTest {
         CellPopulation box = new CellPopulation();
         box.add(cellAt(0, 50, 3));
         box.add(cellAt(1, 50, 97));
-        new OverlapRepulsion(100, 100, 10.0, 2.5, 0, 0.2, DomainShape.RECTANGLE).relax(box, 0.01);
+        new OverlapRepulsion(new Domain.Rectangle(100, 100), 10.0, 2.5, 0, 0.2).relax(box, 0.01);
         assertEquals(3.0, box.get(0).y(), 0.0);
         assertEquals(97.0, box.get(1).y(), 0.0);
     }
@@ -79,7 +80,7 @@ class OverlapRepulsionTest {
         for (int i = 0; i < 200; i++) {
             population.add(cellAt(i, 5 + 0.4 * i, 5 + 0.3 * (i % 17)));
         }
-        OverlapRepulsion mechanics = new OverlapRepulsion(100, 60, 20.0, 1.0, 0, 0.2, DomainShape.DISC);
+        OverlapRepulsion mechanics = new OverlapRepulsion(new Domain.Disc(100, 60), 20.0, 1.0, 0, 0.2);
         mechanics.relax(population, 0.01);
         for (Cell c : population.view()) {
             assertTrue(Math.hypot(c.x() - 50, c.y() - 30) <= 30 - 1.0 + 1e-9, c.x() + "," + c.y());
@@ -92,7 +93,7 @@ class OverlapRepulsionTest {
         for (int i = 0; i < 50; i++) {
             population.add(cellAt(i, 1 + 0.01 * i, 1));
         }
-        OverlapRepulsion repulsion = new OverlapRepulsion(20, 20, 50.0, 1.0);
+        OverlapRepulsion repulsion = OverlapRepulsion.withoutAdhesion(new Domain.Rectangle(20, 20), 50.0, 1.0);
         for (int s = 0; s < 500; s++) {
             repulsion.relax(population, 0.01);
         }

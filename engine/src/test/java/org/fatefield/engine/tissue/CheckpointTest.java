@@ -19,6 +19,7 @@ import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.engine.division.CycleTimeDistribution;
 import org.fatefield.engine.division.Partitioning;
+import org.fatefield.engine.domain.Domain;
 import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.fate.FateRule;
 import org.fatefield.engine.field.MorphogenSpec;
@@ -33,18 +34,18 @@ class CheckpointTest {
     private static TissueSpec spec() {
         SelfActivatingSwitch sw = SelfActivatingSwitch.symmetric("A", "B",
                 new GeneKinetics(0.05, 0.2, 0.5, 4, 1.0, 0.5, 4, 1.0));
-        return new TissueSpec(new CircuitSetup(sw, NoiseMode.LANGEVIN, 50, new double[] {0.3, 0.3}),
+        return TissueSpec.of(new CircuitSetup(sw, NoiseMode.LANGEVIN, 50, new double[] {0.3, 0.3}),
                 new ParameterMapping(sw.defaultParameters(), List.of(new SignalCoupling("repression",
-                        sw.parameterGroup("repression"), CouplingForm.HILL, 0.2, 1.8, 1, 2))),
-                new MorphogenSpec(2000, 0.3, 10, 0, List.of(new SourceRegion(0, 0, 20, 100, 3))),
-                200, 100,
-                new GrowthSpec(60, 3, 20, new CycleTimeDistribution(CycleTimeDistribution.Kind.GAMMA, 3, 0.2),
-                        Partitioning.binomial(), GrowthSpec.DivisionAxis.RANDOM, 0.02, true),
-                new FateClassifier(List.of(
+                        sw.parameterGroup("repression"), CouplingForm.HILL, 0.2, 1.8, 1, 2))), new MorphogenSpec(2000,
+                                0.3, 10, 0, List.of(new SourceRegion(0, 0, 20, 100, 3))), new Domain.Rectangle(200,
+                                100), GrowthSpec.of(60, 3, 20,
+                                new CycleTimeDistribution(CycleTimeDistribution.Kind.GAMMA, 3, 0.2),
+                                Partitioning.binomial()).withAxis(GrowthSpec.DivisionAxis.RANDOM).withDeathRate(0.02)
+                                .withDilution(true), new FateClassifier(List.of(
                         new FateRule("a", new double[] {0.6, Double.NaN}, new double[] {Double.NaN, 0.35}),
                         new FateRule("b", new double[] {Double.NaN, 0.6}, new double[] {0.35, Double.NaN})), "p"),
-                new Timing(8, 0.01, 0.5),
-                List.of(new ExtrinsicNoise("degradation", sw.parameterGroup("degradation"), 0.1, 0.8)));
+                                new Timing(8, 0.01, 0.5)).withExtrinsic(List.of(new ExtrinsicNoise("degradation",
+                                sw.parameterGroup("degradation"), 0.1, 0.8)));
     }
 
     @Test
@@ -82,7 +83,8 @@ class CheckpointTest {
         }
         assertEquals(straight.series().rows().size(), resumed.series().rows().size());
         for (int r = 0; r < straight.series().rows().size(); r++) {
-            assertArrayEquals(straight.series().rows().get(r).fateCounts(), resumed.series().rows().get(r).fateCounts());
+            assertArrayEquals(straight.series().rows().get(r).fateCounts(), resumed.series().rows().get(r)
+                    .fateCounts());
         }
         assertEquals(straightRecords, resumedRecords);
     }

@@ -9,6 +9,7 @@ import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.division.CycleTimeDistribution;
 import org.fatefield.engine.division.Partitioning;
+import org.fatefield.engine.domain.Domain;
 import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.fate.FateRule;
 import org.fatefield.engine.field.MorphogenSpec;
@@ -28,18 +29,17 @@ class GrowthOptionsTest {
             List.of(new CustomNetwork.ReactionDefinition("none", new int[] {1}, "k * X")));
 
     private static TissueSpec spec(int founders, GrowthSpec growth, double duration) {
-        return new TissueSpec(new CircuitSetup(INERT, NoiseMode.NONE, 100, new double[] {1.0}),
-                new ParameterMapping(INERT.defaultParameters(), List.of()),
-                new MorphogenSpec(0, 0, 50, 0, List.of()), 1000, 1000, growth,
-                new FateClassifier(List.of(new FateRule("any", new double[] {Double.NaN}, new double[] {Double.NaN})),
-                        "none"),
-                new Timing(duration, 0.01, 1.0));
+        return TissueSpec.of(new CircuitSetup(INERT, NoiseMode.NONE, 100, new double[] {1.0}),
+                new ParameterMapping(INERT.defaultParameters(), List.of()), new MorphogenSpec(0, 0, 50, 0, List.of()),
+                new Domain.Rectangle(1000, 1000), growth, new FateClassifier(List.of(new FateRule("any",
+                new double[] {Double.NaN}, new double[] {Double.NaN})),
+                        "none"), new Timing(duration, 0.01, 1.0));
     }
 
     @Test
     void daughtersAreBornAlongTheChosenAxis() {
-        GrowthSpec growth = new GrowthSpec(200, 2, 0, new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 2, 0),
-                Partitioning.equal(), GrowthSpec.DivisionAxis.X, 0, false);
+        GrowthSpec growth = GrowthSpec.of(200, 2, 0, new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 2, 0),
+                Partitioning.equal()).withAxis(GrowthSpec.DivisionAxis.X).withDeathRate(0).withDilution(false);
         Tissue tissue = new Tissue(spec(200, growth, 1.9), 4);
         List<LineageRecord> records = new ArrayList<>();
         tissue.setLineageSink(records::add);
@@ -65,9 +65,9 @@ class GrowthOptionsTest {
         // the survivors are Binomial(N, that), checked against its 99% interval.
         int founders = 4000;
         double rate = 0.1;
-        GrowthSpec growth = new GrowthSpec(founders, 2, 0,
-                new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e6, 0), Partitioning.equal(),
-                GrowthSpec.DivisionAxis.RANDOM, rate, false);
+        GrowthSpec growth = GrowthSpec.of(founders, 2, 0, new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED,
+                1e6, 0), Partitioning.equal()).withAxis(GrowthSpec.DivisionAxis.RANDOM).withDeathRate(rate)
+                .withDilution(false);
         Tissue tissue = new Tissue(spec(founders, growth, 5.0), 8);
         tissue.start();
         tissue.runToEnd();
@@ -83,9 +83,8 @@ class GrowthOptionsTest {
         // Volume grows linearly from 1 to 2 over the cycle T, so a cell of initial age a0 holds
         // (T + a0) / (T + a0 + t) of its starting concentration after t (derived by hand).
         double cycle = 10;
-        GrowthSpec growth = new GrowthSpec(100, 2, 0,
-                new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, cycle, 0), Partitioning.equal(),
-                GrowthSpec.DivisionAxis.RANDOM, 0, true);
+        GrowthSpec growth = GrowthSpec.of(100, 2, 0, new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, cycle,
+                0), Partitioning.equal()).withAxis(GrowthSpec.DivisionAxis.RANDOM).withDeathRate(0).withDilution(true);
         double duration = 3.0;
         Tissue tissue = new Tissue(spec(100, growth, duration), 12);
         tissue.start();
@@ -113,11 +112,12 @@ class GrowthOptionsTest {
         double rho = 0.8;
         ExtrinsicNoise noise =
                 new ExtrinsicNoise("k", new int[] {0}, cv, rho);
-        GrowthSpec growth = new GrowthSpec(3000, 2, 0, new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 2, 0),
-                Partitioning.equal(), GrowthSpec.DivisionAxis.RANDOM, 0, false);
+        GrowthSpec growth = GrowthSpec.of(3000, 2, 0, new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 2, 0),
+                Partitioning.equal()).withAxis(GrowthSpec.DivisionAxis.RANDOM).withDeathRate(0).withDilution(false);
         TissueSpec base = spec(3000, growth, 1.99);
-        TissueSpec spec = new TissueSpec(base.circuit(), base.mapping(), base.morphogen(), base.width(), base.height(),
-                base.growth(), base.fates(), base.timing(), List.of(noise));
+        TissueSpec spec = TissueSpec.of(base.circuit(), base.mapping(), base.morphogen(),
+                new Domain.Rectangle(base.width(), base.height()), base.growth(), base.fates(), base.timing())
+                .withExtrinsic(List.of(noise));
         Tissue tissue = new Tissue(spec, 21);
         tissue.start();
         tissue.runToEnd();

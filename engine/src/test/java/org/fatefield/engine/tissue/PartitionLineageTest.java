@@ -9,6 +9,7 @@ import org.fatefield.circuits.model.SelfActivatingSwitch;
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.division.CycleTimeDistribution;
 import org.fatefield.engine.division.Partitioning;
+import org.fatefield.engine.domain.Domain;
 import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.fate.FateRule;
 import org.fatefield.engine.field.MorphogenSpec;
@@ -29,15 +30,14 @@ class PartitionLineageTest {
         SelfActivatingSwitch sw = SelfActivatingSwitch.symmetric("A", "B",
                 new GeneKinetics(0.1, 0.35, 0.5, 4, 1.0, 0.5, 4, 1.0));
         double s = 0.6325258702713282;
-        TissueSpec spec = new TissueSpec(new CircuitSetup(sw, NoiseMode.NONE, 200, new double[] {s, s}),
+        TissueSpec spec = TissueSpec.of(new CircuitSetup(sw, NoiseMode.NONE, 200, new double[] {s, s}),
                 new ParameterMapping(sw.defaultParameters(), List.of()), new MorphogenSpec(0, 0, 50, 0, List.of()),
-                1000, 1000,
-                new GrowthSpec(1000, 2, 0, new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 100.0, 0),
-                        partitioning),
+                new Domain.Rectangle(1000, 1000), GrowthSpec.of(1000, 2, 0,
+                new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 100.0, 0), partitioning),
                 new FateClassifier(List.of(
                         new FateRule("a", new double[] {1.0, Double.NaN}, new double[] {Double.NaN, 0.6}),
                         new FateRule("b", new double[] {Double.NaN, 1.0}, new double[] {0.6, Double.NaN})), "u"),
-                new Timing(15.5, 0.01, 0.5));
+                                new Timing(15.5, 0.01, 0.5));
         // Founders sit exactly on the saddle with ages in [0, 100) h: those that divide in the run
         // do so once, and their daughters then decide.
         Tissue tissue = new Tissue(spec, 5, 2);

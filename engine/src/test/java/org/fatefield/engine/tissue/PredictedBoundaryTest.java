@@ -10,6 +10,7 @@ import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.engine.division.CycleTimeDistribution;
 import org.fatefield.engine.division.Partitioning;
+import org.fatefield.engine.domain.Domain;
 import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.fate.FateRule;
 import org.fatefield.engine.field.MorphogenSpec;
@@ -35,16 +36,14 @@ class PredictedBoundaryTest {
                 new double[] {0.05, 1.0, 0.2, 1.0}, List.of(
                         new CustomNetwork.ReactionDefinition("make", new int[] {1}, "b + s * hill_act(X, K, 4)"),
                         new CustomNetwork.ReactionDefinition("lose", new int[] {-1}, "k * X")));
-        return new TissueSpec(new CircuitSetup(gene, NoiseMode.LANGEVIN, systemSize, new double[] {0.05}),
+        return TissueSpec.of(new CircuitSetup(gene, NoiseMode.LANGEVIN, systemSize, new double[] {0.05}),
                 new ParameterMapping(gene.defaultParameters(),
                         List.of(new SignalCoupling("s", new int[] {1}, CouplingForm.LINEAR, 0.0, 2.0, 1, 1))),
-                new MorphogenSpec(400, 1.0, 2.0, 0.0, List.of(new SourceRegion(0, 0, 10, 40, 20.0)),
-                        MorphogenSpec.Solver.ADI),
-                300, 40,
-                new GrowthSpec(1200, CELL_DIAMETER / 2, 0.0,
-                        new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e6, 0), Partitioning.binomial()),
-                new FateClassifier(List.of(new FateRule("high", new double[] {0.5}, new double[] {Double.NaN})), "low"),
-                new Timing(30, 0.01, 1));
+                                new MorphogenSpec(400, 1.0, 2.0, 0.0, List.of(new SourceRegion(0, 0, 10, 40, 20.0)),
+                        MorphogenSpec.Solver.ADI), new Domain.Rectangle(300, 40), GrowthSpec.of(1200, CELL_DIAMETER / 2,
+                                0.0, new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e6, 0),
+                                Partitioning.binomial()), new FateClassifier(List.of(new FateRule("high",
+                                new double[] {0.5}, new double[] {Double.NaN})), "low"), new Timing(30, 0.01, 1));
     }
 
     private static double[] boundaries(double systemSize, int replicates, double[] predictedOut) {

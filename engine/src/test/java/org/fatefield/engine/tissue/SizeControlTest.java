@@ -10,11 +10,11 @@ import org.fatefield.engine.division.CellSize;
 import org.fatefield.engine.division.CycleTimeDistribution;
 import org.fatefield.engine.division.Partitioning;
 import org.fatefield.engine.division.SizeControl;
+import org.fatefield.engine.domain.Domain;
 import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.fate.FateRule;
 import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.lineage.LineageRecord;
-import org.fatefield.engine.mechanics.DomainShape;
 import org.junit.jupiter.api.Test;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -35,16 +35,14 @@ class SizeControlTest {
     private static final double SPLIT_CV = 0.2;
 
     private static List<LineageRecord> grow(SizeControl control) {
-        GrowthSpec growth = new GrowthSpec(150, 2, 0,
-                new CycleTimeDistribution(CycleTimeDistribution.Kind.GAMMA, 10, 0.1), Partitioning.equal(),
-                GrowthSpec.DivisionAxis.RANDOM, 0, true, 0, DomainShape.RECTANGLE,
-                new CellSize(control, SPLIT_CV));
-        TissueSpec spec = new TissueSpec(new CircuitSetup(INERT, NoiseMode.NONE, 100, new double[] {1.0}),
+        GrowthSpec growth = GrowthSpec.of(150, 2, 0, new CycleTimeDistribution(CycleTimeDistribution.Kind.GAMMA, 10,
+                0.1), Partitioning.equal()).withAxis(GrowthSpec.DivisionAxis.RANDOM).withDeathRate(0).withDilution(true)
+                .withAdhesion(0).withSize(new CellSize(control, SPLIT_CV));
+        TissueSpec spec = TissueSpec.of(new CircuitSetup(INERT, NoiseMode.NONE, 100, new double[] {1.0}),
                 new ParameterMapping(INERT.defaultParameters(), List.of()), new MorphogenSpec(0, 0, 100, 0, List.of()),
-                2000, 2000, growth,
-                new FateClassifier(List.of(new FateRule("any", new double[] {Double.NaN}, new double[] {Double.NaN})),
-                        "none"),
-                new Timing(52, 0.05, 4.0));
+                new Domain.Rectangle(2000, 2000), growth, new FateClassifier(List.of(new FateRule("any",
+                new double[] {Double.NaN}, new double[] {Double.NaN})),
+                        "none"), new Timing(52, 0.05, 4.0));
         Tissue tissue = new Tissue(spec, 21);
         List<LineageRecord> records = new ArrayList<>();
         tissue.setLineageSink(records::add);

@@ -10,6 +10,7 @@ import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.division.CycleTimeDistribution;
 import org.fatefield.engine.division.Partitioning;
+import org.fatefield.engine.domain.Domain;
 import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.fate.FateRule;
 import org.fatefield.engine.field.MorphogenSpec;
@@ -31,13 +32,9 @@ class TissueTest {
                 new FateRule("a-high", new double[] {1.0, Double.NaN}, new double[] {Double.NaN, 0.6}),
                 new FateRule("b-high", new double[] {Double.NaN, 1.0}, new double[] {0.6, Double.NaN})),
                 "undecided");
-        return new TissueSpec(
-                new CircuitSetup(SWITCH, NoiseMode.LANGEVIN, omega, initial),
-                new ParameterMapping(SWITCH.defaultParameters(), List.of()),
-                new MorphogenSpec(0, 0, 50, 0, List.of()),
-                1000, 1000,
-                new GrowthSpec(cells, 2.0, 0.0, cycle, Partitioning.binomial()),
-                fates,
+        return TissueSpec.of(new CircuitSetup(SWITCH, NoiseMode.LANGEVIN, omega, initial),
+                new ParameterMapping(SWITCH.defaultParameters(), List.of()), new MorphogenSpec(0, 0, 50, 0, List.of()),
+                new Domain.Rectangle(1000, 1000), GrowthSpec.of(cells, 2.0, 0.0, cycle, Partitioning.binomial()), fates,
                 new Timing(duration, 0.01, 1.0));
     }
 
@@ -53,7 +50,8 @@ class TissueTest {
         // By symmetry each cell takes either branch with probability 1/2 (common practice).
         // N = 2000 independent cells; accept |p - 1/2| <= z_0.995 sqrt(1/4N) = 0.0288 (99% level).
         int n = 2000;
-        Tissue tissue = new Tissue(spec(n, saddle(), new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e6, 0),
+        Tissue tissue = new Tissue(spec(n, saddle(), new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e6,
+                0),
                 30.0, 200.0), 12345);
         tissue.start();
         tissue.runToEnd();
@@ -106,7 +104,8 @@ class TissueTest {
                 assertArrayEquals(a.state(), b.state(), 0.0);
             }
             for (int r = 0; r < serial.series().rows().size(); r++) {
-                assertArrayEquals(serial.series().rows().get(r).fateCounts(), other.series().rows().get(r).fateCounts());
+                assertArrayEquals(serial.series().rows().get(r).fateCounts(), other.series().rows().get(r)
+                        .fateCounts());
             }
         }
     }

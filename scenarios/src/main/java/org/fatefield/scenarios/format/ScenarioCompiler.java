@@ -22,7 +22,7 @@ import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.fate.FateRule;
 import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.field.PiecewiseLinear;
-import org.fatefield.engine.mechanics.DomainShape;
+import org.fatefield.engine.domain.Domain;
 import org.fatefield.engine.tissue.CircuitSetup;
 import org.fatefield.engine.tissue.GrowthSpec;
 import org.fatefield.engine.tissue.NoiseMode;
@@ -104,7 +104,8 @@ final class ScenarioCompiler {
             return null;
         }
         try {
-            TissueSpec spec = new TissueSpec(circuit, mapping, morphogen, width, height, growth, fates,
+            TissueSpec spec = new TissueSpec(circuit, mapping, morphogen,
+                    Domain.of(values.text(tissue, "tissue", "shape"), width, height), growth, fates,
                     new Timing(duration, step, recordEvery), extrinsic(circuit), others);
             String name = scenario.contains("name") ? scenario.getString("name") : fallbackName;
             String description = scenario.contains("description") ? scenario.getString("description") : "";
@@ -283,7 +284,7 @@ final class ScenarioCompiler {
                 new CycleTimeDistribution(kind, values.number(division, "division", "cycle_mean"), cv), partition,
                 GrowthSpec.DivisionAxis.valueOf(values.text(division, "division", "axis").toUpperCase(Locale.ROOT)),
                 values.number(division, "division", "death_rate"), dilution, values.number(tissue, "tissue", "adhesion"),
-                DomainShape.valueOf(values.text(tissue, "tissue", "shape").toUpperCase(Locale.ROOT)), size);
+                size);
     }
 
 }

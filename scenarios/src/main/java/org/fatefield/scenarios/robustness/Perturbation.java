@@ -67,7 +67,7 @@ public record Perturbation(String name, int parameter) {
 
     private static TissueSpec with(TissueSpec spec, CircuitSetup circuit, ParameterMapping mapping,
             MorphogenSpec morphogen, double width, double height) {
-        return new TissueSpec(circuit, mapping, morphogen, width, height, spec.growth(), spec.fates(), spec.timing(),
-                spec.extrinsic(), spec.others());
+        return new TissueSpec(circuit, mapping, morphogen, spec.domain().resized(width, height), spec.growth(),
+                spec.fates(), spec.timing(), spec.extrinsic(), spec.others());
     }
 }

@@ -9,14 +9,15 @@ import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.engine.division.CycleTimeDistribution;
 import org.fatefield.engine.division.Partitioning;
+import org.fatefield.engine.domain.Domain;
 import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.fate.FateRule;
 import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.tissue.CircuitSetup;
 import org.fatefield.engine.tissue.GrowthSpec;
 import org.fatefield.engine.tissue.NoiseMode;
-import org.fatefield.engine.tissue.TissueSpec;
 import org.fatefield.engine.tissue.Timing;
+import org.fatefield.engine.tissue.TissueSpec;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -36,17 +37,19 @@ class RobustnessAnalysisTest {
                 new double[] {0.05, 1.0, 0.2, 1.0}, List.of(
                         new CustomNetwork.ReactionDefinition("make", new int[] {1}, "b + s * hill_act(X, K, 4)"),
                         new CustomNetwork.ReactionDefinition("lose", new int[] {-1}, "k * X")));
-        MorphogenSpec field = new MorphogenSpec("m", lambda * lambda, 1.0, 1.0, 0.0, List.of(), MorphogenSpec.Solver.ADI,
-                new MorphogenSpec.WallCondition(MorphogenSpec.WallKind.FIXED_VALUE, 8.0), MorphogenSpec.CellExchange.OFF,
+        MorphogenSpec field = new MorphogenSpec("m", lambda * lambda, 1.0, 1.0, 0.0, List.of(),
+                MorphogenSpec.Solver.ADI,
+                new MorphogenSpec.WallCondition(MorphogenSpec.WallKind.FIXED_VALUE, 8.0),
+                        MorphogenSpec.CellExchange.OFF,
                 null);
-        TissueSpec spec = new TissueSpec(new CircuitSetup(gene, NoiseMode.NONE, 1e4, new double[] {0.05}),
+        TissueSpec spec = TissueSpec.of(new CircuitSetup(gene, NoiseMode.NONE, 1e4, new double[] {0.05}),
                 new ParameterMapping(gene.defaultParameters(),
-                        List.of(new SignalCoupling("s", new int[] {1}, CouplingForm.LINEAR, 0.0, 2.0, 1, 1))),
-                field, 200, 20,
-                new GrowthSpec(2000, 0.5, 0.0, new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e6, 0),
-                        Partitioning.binomial()),
-                new FateClassifier(List.of(new FateRule("high", new double[] {0.5}, new double[] {Double.NaN})), "low"),
-                new Timing(25, 0.01, 1), List.of(), List.of());
+                        List.of(new SignalCoupling("s", new int[] {1}, CouplingForm.LINEAR, 0.0, 2.0, 1, 1))), field,
+                                new Domain.Rectangle(200, 20), GrowthSpec.of(2000, 0.5, 0.0,
+                                new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e6, 0),
+                                Partitioning.binomial()), new FateClassifier(List.of(new FateRule("high",
+                                new double[] {0.5}, new double[] {Double.NaN})), "low"), new Timing(25, 0.01, 1))
+                                .withExtrinsic(List.of()).withOtherFields(List.of());
         List<RobustnessAnalysis.Sensitivity> result = RobustnessAnalysis.run(spec,
                 List.of(new Perturbation(Perturbation.AMPLITUDE, -1)), f, 2, 1, 2);
         RobustnessAnalysis.Sensitivity boundary = result.stream()

@@ -12,6 +12,7 @@ import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.division.CycleTimeDistribution;
 import org.fatefield.engine.division.Partitioning;
+import org.fatefield.engine.domain.Domain;
 import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.fate.FateRule;
 import org.fatefield.engine.field.MorphogenSpec;
@@ -30,10 +31,10 @@ class TissueGuiTest {
     void selectionSurvivesRelocationAndEndsAtDivision() {
         CustomNetwork decay = CustomNetwork.of(List.of("X"), List.of("k"), new double[] {1},
                 List.of(new CustomNetwork.ReactionDefinition("decay", new int[] {-1}, "k * X")));
-        TissueSpec spec = new TissueSpec(new CircuitSetup(decay, NoiseMode.NONE, 100, new double[] {1.0}),
+        TissueSpec spec = TissueSpec.of(new CircuitSetup(decay, NoiseMode.NONE, 100, new double[] {1.0}),
                 new ParameterMapping(decay.defaultParameters(), List.of()), new MorphogenSpec(0, 0, 10, 0, List.of()),
-                200, 100, new GrowthSpec(30, 4, 10, new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 4, 0),
-                        Partitioning.equal()),
+                new Domain.Rectangle(200, 100), GrowthSpec.of(30, 4, 10,
+                new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 4, 0), Partitioning.equal()),
                 new FateClassifier(List.of(new FateRule("high", new double[] {0.5}, new double[] {Double.NaN})), "low"),
                 new Timing(10, 0.01, 0.5));
         Tissue tissue = new Tissue(spec, 3);

@@ -1,0 +1,222 @@
+package org.fatefield.engine.domain;
+
+import java.util.Locale;
+import org.apache.commons.rng.UniformRandomProvider;
+
+/**
+ * Where cells live: a {@link Rectangle} with walls, the {@link Disc} inscribed in it, or a
+ * {@link Strip} periodic along y. The morphogen fields always fill the width x height
+ * rectangle; the domain decides where founders are placed, how a position is kept inside the
+ * walls (or wrapped across the periodic seam) and how distances cross that seam. Every stage
+ * that places or moves cells asks the domain, so a new shape is one new record here.
+ */
+public sealed interface Domain permits Domain.Rectangle, Domain.Disc, Domain.Strip {
+
+    /** Width along x, the gradient axis (µm). */
+    double width();
+
+    /** Height along y (µm). */
+    double height();
+
+    /** The shape's scenario word: "rectangle", "disc" or "strip". */
+    String shape();
+
+    /** True if cells and fields wrap around along y. */
+    default boolean periodicY() {
+        return false;
+    }
+
+    /**
+     * Draws a uniformly random position for a cell of radius {@code r} inside the domain into
+     * {@code out} ({@code out[0]} = x, {@code out[1]} = y).
+     */
+    void samplePoint(UniformRandomProvider rng, double r, double[] out);
+
+    /**
+     * Puts into {@code out} the position nearest to (x, y) at which a cell of radius {@code r}
+     * lies inside the walls, or (x, y) brought across the periodic seam. A radius larger than
+     * half the domain's smaller side is treated as that half.
+     */
+    void confine(double x, double y, double r, double[] out);
+
+    /** The y offset {@code dy} between two cells, by the nearest image across a periodic seam. */
+    default double nearestImageDy(double dy) {
+        return dy;
+    }
+
+    /**
+     * Checks that a field grid of squares {@code gridSpacing} µm wide fits this domain.
+     *
+     * @throws IllegalArgumentException saying what to change if it does not
+     */
+    default void checkGrid(double gridSpacing) {
+    }
+
+    /** The same shape with another size. */
+    Domain resized(double newWidth, double newHeight);
+
+    /**
+     * The domain of scenario word {@code shape} ("rectangle", "disc" or "strip") with this size.
+     *
+     * @throws IllegalArgumentException naming the allowed words for any other
+     */
+    static Domain of(String shape, double width, double height) {
+        return switch (shape.toLowerCase(Locale.ROOT)) {
+            case "rectangle" -> new Rectangle(width, height);
+            case "disc" -> new Disc(width, height);
+            case "strip" -> new Strip(width, height);
+            default -> throw new IllegalArgumentException("domain shape must be \"rectangle\", \"disc\" or \"strip\","
+                    + " got \"" + shape + "\"");
+        };
+    }
+
+    /** {@code y} brought into [0, period) by whole periods. */
+    static double wrap(double y, double period) {
+        double w = y - period * Math.floor(y / period);
+        return w >= period ? 0.0 : w;
+    }
+
+    /** Checks a size: finite and greater than 0 on both sides. */
+    private static void checkSize(double width, double height) {
+        if (!(width > 0) || !(height > 0) || Double.isInfinite(width) || Double.isInfinite(height)) {
+            throw new IllegalArgumentException("domain must be finite with positive width and height, got "
+                    + width + " x " + height);
+        }
+    }
+
+    /** Clamps x (and, for walls along y, y) into the box for radius {@code r}. */
+    private static void clampToBox(double x, double y, double r, double width, double height, boolean wrapY,
+            double[] out) {
+        double rr = Math.min(r, 0.5 * Math.min(width, height));
+        out[0] = Math.min(Math.max(x, rr), width - rr);
+        out[1] = wrapY ? wrap(y, height) : Math.min(Math.max(y, rr), height - rr);
+    }
+
+    /** The width x height rectangle, with walls on all four sides. */
+    record Rectangle(double width, double height) implements Domain {
+
+        /** Validates. */
+        public Rectangle {
+            checkSize(width, height);
+        }
+
+        @Override
+        public String shape() {
+            return "rectangle";
+        }
+
+        @Override
+        public void samplePoint(UniformRandomProvider rng, double r, double[] out) {
+            out[0] = r + (width - 2 * r) * rng.nextDouble();
+            out[1] = r + (height - 2 * r) * rng.nextDouble();
+        }
+
+        @Override
+        public void confine(double x, double y, double r, double[] out) {
+            clampToBox(x, y, r, width, height, false, out);
+        }
+
+        @Override
+        public Domain resized(double newWidth, double newHeight) {
+            return new Rectangle(newWidth, newHeight);
+        }
+    }
+
+    /** The disc inscribed in the width x height rectangle, with a circular wall. */
+    record Disc(double width, double height) implements Domain {
+
+        /** Validates. */
+        public Disc {
+            checkSize(width, height);
+        }
+
+        @Override
+        public String shape() {
+            return "disc";
+        }
+
+        @Override
+        public void samplePoint(UniformRandomProvider rng, double r, double[] out) {
+            // Rejection from the bounding box: uniform in the disc.
+            do {
+                out[0] = r + (width - 2 * r) * rng.nextDouble();
+                out[1] = r + (height - 2 * r) * rng.nextDouble();
+            } while (Math.hypot(out[0] - 0.5 * width, out[1] - 0.5 * height) > 0.5 * Math.min(width, height) - r);
+        }
+
+        @Override
+        public void confine(double x, double y, double r, double[] out) {
+            clampToBox(x, y, r, width, height, false, out);
+            double rr = Math.min(r, 0.5 * Math.min(width, height));
+            double cx = 0.5 * width;
+            double cy = 0.5 * height;
+            double limit = 0.5 * Math.min(width, height) - rr;
+            double ex = out[0] - cx;
+            double ey = out[1] - cy;
+            double d = Math.hypot(ex, ey);
+            if (d > limit && d > 0) {
+                out[0] = cx + ex * limit / d;
+                out[1] = cy + ey * limit / d;
+            }
+        }
+
+        @Override
+        public Domain resized(double newWidth, double newHeight) {
+            return new Disc(newWidth, newHeight);
+        }
+    }
+
+    /**
+     * A band of the rectangle's size, periodic along y: cells and fields leaving at the top come
+     * back at the bottom, so the tissue has no lateral edges; walls at x = 0 and x = width.
+     */
+    record Strip(double width, double height) implements Domain {
+
+        /** Validates. */
+        public Strip {
+            checkSize(width, height);
+        }
+
+        @Override
+        public String shape() {
+            return "strip";
+        }
+
+        @Override
+        public boolean periodicY() {
+            return true;
+        }
+
+        @Override
+        public void samplePoint(UniformRandomProvider rng, double r, double[] out) {
+            out[0] = r + (width - 2 * r) * rng.nextDouble();
+            out[1] = height * rng.nextDouble();
+        }
+
+        @Override
+        public void confine(double x, double y, double r, double[] out) {
+            clampToBox(x, y, r, width, height, true, out);
+        }
+
+        @Override
+        public double nearestImageDy(double dy) {
+            return dy > 0.5 * height ? dy - height : (dy < -0.5 * height ? dy + height : dy);
+        }
+
+        @Override
+        public void checkGrid(double gridSpacing) {
+            double squares = height / gridSpacing;
+            if (Math.abs(squares - Math.round(squares)) > 1e-6 * squares || Math.round(squares) < 3) {
+                throw new IllegalArgumentException("a strip's height must be a whole number of morphogen grid"
+                        + " squares, at least three, so the fields wrap around exactly: height " + height
+                        + " µm / grid spacing " + gridSpacing + " µm = " + squares
+                        + "; change tissue.height or the grid spacing");
+            }
+        }
+
+        @Override
+        public Domain resized(double newWidth, double newHeight) {
+            return new Strip(newWidth, newHeight);
+        }
+    }
+}
