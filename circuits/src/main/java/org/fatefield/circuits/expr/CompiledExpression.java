@@ -1,6 +1,6 @@
 package org.fatefield.circuits.expr;
 
-import org.fatefield.circuits.kinetics.Hill;
+import org.fatefield.circuits.kinetics.HillFunctions;
 
 /**
  * A rate law compiled for fast repeated evaluation: the tree becomes a tree of small final
@@ -215,9 +215,9 @@ public abstract class CompiledExpression {
                 case STEP -> u > 0 ? 1.0 : 0.0;
                 case MIN -> Math.min(u, a[1].evaluate(x, p));
                 case MAX -> Math.max(u, a[1].evaluate(x, p));
-                case HILL_ACT -> Hill.activation(u, a[1].evaluate(x, p), a[2].evaluate(x, p));
-                case HILL_REP -> Hill.repression(u, a[1].evaluate(x, p), a[2].evaluate(x, p));
-                case HILL_SLOPE -> Hill.activationSlope(u, a[1].evaluate(x, p), a[2].evaluate(x, p));
+                case HILL_ACT -> HillFunctions.activation(u, a[1].evaluate(x, p), a[2].evaluate(x, p));
+                case HILL_REP -> HillFunctions.repression(u, a[1].evaluate(x, p), a[2].evaluate(x, p));
+                case HILL_SLOPE -> HillFunctions.activationSlope(u, a[1].evaluate(x, p), a[2].evaluate(x, p));
             };
         }
     }

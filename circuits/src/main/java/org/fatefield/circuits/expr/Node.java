@@ -56,7 +56,7 @@ public sealed interface Node {
         HILL_ACT("hill_act", 3),
         /** {@code hill_rep(x, K, n) = K^n / (K^n + x^n)}, with x below zero read as zero. */
         HILL_REP("hill_rep", 3),
-        /** Internal (not writable in a rate law): d hill_act / dx, as {@code Hill.activationSlope}. */
+        /** Internal (not writable in a rate law): d hill_act / dx, as {@code HillFunctions.activationSlope}. */
         HILL_SLOPE("#hill_slope", 3),
         /** Internal (not writable in a rate law): 1 where the argument is positive, else 0. */
         STEP("#step", 1);

@@ -1,6 +1,5 @@
 package org.fatefield.circuits.model;
 
-import org.fatefield.circuits.kinetics.Hill;
 
 /**
  * Kinetic parameters of one gene of the self-activating mutual-repression switch.

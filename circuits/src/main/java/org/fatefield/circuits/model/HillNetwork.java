@@ -3,7 +3,7 @@ package org.fatefield.circuits.model;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import org.fatefield.circuits.kinetics.Hill;
+import org.fatefield.circuits.kinetics.HillFunctions;
 
 /**
  * A general gene-regulatory network of n genes with Hill-type interactions.
@@ -156,7 +156,7 @@ public final class HillNetwork implements ReactionNetwork {
         int j = inputs[i][k];
         double theta = p[thresholdIndex[i][k]];
         double n = p[hillIndex[i][k]];
-        return sign[i][j] > 0 ? Hill.activation(x[j], theta, n) : Hill.repression(x[j], theta, n);
+        return sign[i][j] > 0 ? HillFunctions.activation(x[j], theta, n) : HillFunctions.repression(x[j], theta, n);
     }
 
     private double regulation(int i, double[] x, double[] p) {
@@ -189,7 +189,8 @@ public final class HillNetwork implements ReactionNetwork {
             int count = inputs[i].length;
             for (int k = 0; k < count; k++) {
                 int j = inputs[i][k];
-                double slope = sign[i][j] * Hill.activationSlope(x[j], p[thresholdIndex[i][k]], p[hillIndex[i][k]]);
+                double slope = sign[i][j] * HillFunctions.activationSlope(x[j], p[thresholdIndex[i][k]],
+                        p[hillIndex[i][k]]);
                 double factor;
                 if (combination == Combination.ADDITIVE) {
                     factor = 1.0 / count;

@@ -2,7 +2,7 @@ package org.fatefield.circuits.model;
 
 import java.util.ArrayList;
 import java.util.List;
-import org.fatefield.circuits.kinetics.Hill;
+import org.fatefield.circuits.kinetics.HillFunctions;
 
 /**
  * The two-gene switch in which each gene activates itself and represses the other.
@@ -113,8 +113,8 @@ public final class SelfActivatingSwitch implements ReactionNetwork {
     }
 
     private static double production(double[] p, int o, double own, double other) {
-        return p[o] + p[o + 1] * Hill.activation(own, p[o + 2], p[o + 3])
-                + p[o + 4] * Hill.repression(other, p[o + 5], p[o + 6]);
+        return p[o] + p[o + 1] * HillFunctions.activation(own, p[o + 2], p[o + 3])
+                + p[o + 4] * HillFunctions.repression(other, p[o + 5], p[o + 6]);
     }
 
     @Override
@@ -130,9 +130,9 @@ public final class SelfActivatingSwitch implements ReactionNetwork {
         double a = x[0];
         double b = x[1];
         int o = PER_GENE;
-        out[0][0] = p[1] * Hill.activationSlope(a, p[2], p[3]) - p[7];
-        out[0][1] = p[4] * Hill.repressionSlope(b, p[5], p[6]);
-        out[1][0] = p[o + 4] * Hill.repressionSlope(a, p[o + 5], p[o + 6]);
-        out[1][1] = p[o + 1] * Hill.activationSlope(b, p[o + 2], p[o + 3]) - p[o + 7];
+        out[0][0] = p[1] * HillFunctions.activationSlope(a, p[2], p[3]) - p[7];
+        out[0][1] = p[4] * HillFunctions.repressionSlope(b, p[5], p[6]);
+        out[1][0] = p[o + 4] * HillFunctions.repressionSlope(a, p[o + 5], p[o + 6]);
+        out[1][1] = p[o + 1] * HillFunctions.activationSlope(b, p[o + 2], p[o + 3]) - p[o + 7];
     }
 }

@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.fatefield.circuits.model.GeneKinetics;
-import org.fatefield.circuits.kinetics.Hill;
+import org.fatefield.circuits.kinetics.HillFunctions;
 import org.fatefield.circuits.model.SelfActivatingSwitch;
 import org.hipparchus.analysis.UnivariateFunction;
 import org.hipparchus.analysis.solvers.BrentSolver;
@@ -39,13 +39,15 @@ class SwitchBifurcationTest {
      */
     private static double analyticCriticalSelfActivation() {
         UnivariateFunction residual = s -> {
-            double a = (DEGRADATION + REPRESSION * Hill.repressionSlope(s, THETA, HILL))
-                    / Hill.activationSlope(s, THETA, HILL);
-            return BASAL + a * Hill.activation(s, THETA, HILL) + REPRESSION * Hill.repression(s, THETA, HILL)
+            double a = (DEGRADATION + REPRESSION * HillFunctions.repressionSlope(s, THETA, HILL))
+                    / HillFunctions.activationSlope(s, THETA, HILL);
+            return BASAL + a * HillFunctions.activation(s, THETA, HILL) + REPRESSION * HillFunctions.repression(s,
+                    THETA, HILL)
                     - DEGRADATION * s;
         };
         double s = new BrentSolver(1e-15, 1e-15, 1e-15).solve(1000, residual, 0.72, 0.86);
-        return (DEGRADATION + REPRESSION * Hill.repressionSlope(s, THETA, HILL)) / Hill.activationSlope(s, THETA, HILL);
+        return (DEGRADATION + REPRESSION * HillFunctions.repressionSlope(s, THETA,
+                HILL)) / HillFunctions.activationSlope(s, THETA, HILL);
     }
 
     private static SteadyState symmetricState(double selfActivation) {

@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import org.fatefield.circuits.kinetics.Hill;
 import org.junit.jupiter.api.Test;
 
 class SelfActivatingSwitchTest {

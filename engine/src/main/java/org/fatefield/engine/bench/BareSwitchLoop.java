@@ -2,7 +2,7 @@ package org.fatefield.engine.bench;
 
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
-import org.fatefield.circuits.kinetics.Hill;
+import org.fatefield.circuits.kinetics.HillFunctions;
 import org.fatefield.circuits.random.RandomStreams;
 import org.fatefield.circuits.random.SwitchableSource;
 
@@ -59,12 +59,14 @@ public final class BareSwitchLoop {
         double noise = dt / omega;
         for (int i = 0; i < a.length; i++) {
             source.use(rng[i]);
-            double r = couplingBase + couplingGain * Hill.activation(signal[i], couplingHalfMax, couplingHill);
+            double r = couplingBase + couplingGain * HillFunctions.activation(signal[i], couplingHalfMax, couplingHill);
             double x = a[i];
             double y = b[i];
-            double prodA = p[0] + p[1] * Hill.activation(x, p[2], p[3]) + r * Hill.repression(y, p[5], p[6]);
+            double prodA = p[0] + p[1] * HillFunctions.activation(x, p[2], p[3]) + r * HillFunctions.repression(y, p[5],
+                    p[6]);
             double lossA = p[7] * x;
-            double prodB = p[8] + p[9] * Hill.activation(y, p[10], p[11]) + r * Hill.repression(x, p[13], p[14]);
+            double prodB = p[8] + p[9] * HillFunctions.activation(y, p[10], p[11]) + r * HillFunctions.repression(x,
+                    p[13], p[14]);
             double lossB = p[15] * y;
             x += prodA * dt + Math.sqrt(prodA * noise) * g.sample() - lossA * dt - Math.sqrt(lossA * noise) * g.sample();
             y += prodB * dt + Math.sqrt(prodB * noise) * g.sample() - lossB * dt - Math.sqrt(lossB * noise) * g.sample();

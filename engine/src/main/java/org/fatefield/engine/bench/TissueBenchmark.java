@@ -1,9 +1,8 @@
 package org.fatefield.engine.bench;
 
 import java.util.Arrays;
-import org.fatefield.engine.coupling.SignalCoupling;
+import org.fatefield.engine.coupling.CouplingLaw;
 import org.fatefield.engine.division.CycleTimeDistribution;
-import org.fatefield.engine.domain.Domain;
 import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.tissue.GrowthSpec;
 import org.fatefield.engine.tissue.Timing;
@@ -70,9 +69,12 @@ public final class TissueBenchmark {
         TissueSpec spec = scaled(template, cells, areaPerCell, timing);
         Tissue tissue = new Tissue(spec, seed, threads);
         tissue.start();
-        SignalCoupling coupling = template.mapping().couplings().get(0);
+        if (!(template.mapping().couplings().get(0).law() instanceof CouplingLaw.Hill hill)) {
+            throw new IllegalArgumentException("the benchmark's bare loop is written for a Hill coupling of the"
+                    + " switch; the first [[coupling]] of this scenario is not form = \"hill\"");
+        }
         BareSwitchLoop bare = new BareSwitchLoop(cells, template.mapping().base(), template.circuit().systemSize(),
-                new double[] {coupling.base(), coupling.gain(), coupling.halfMax(), coupling.hill()}, seed);
+                new double[] {hill.base(), hill.gain(), hill.halfMax(), hill.coefficient()}, seed);
         double[] tick = new double[repeats];
         double[] cellsOnly = new double[repeats];
         double[] bareLoop = new double[repeats];

@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
-import org.fatefield.engine.coupling.CouplingForm;
+import org.fatefield.engine.coupling.CouplingLaw;
 import org.fatefield.engine.coupling.SignalCoupling;
 import org.junit.jupiter.api.Test;
 
@@ -18,7 +18,8 @@ class TimeAndTableTest {
         assertEquals(2.0, f.at(1), 1e-15);
         assertEquals(1.0, f.at(3), 1e-15);
         assertEquals(-1.0, f.at(10), 0.0);
-        assertThrows(IllegalArgumentException.class, () -> PiecewiseLinear.of(new double[] {0, 0}, new double[] {1, 2}));
+        assertThrows(IllegalArgumentException.class, () -> PiecewiseLinear.of(new double[] {0, 0}, new double[] {1,
+                2}));
     }
 
     @Test
@@ -47,8 +48,8 @@ class TimeAndTableTest {
 
     @Test
     void tableCouplingReadsTheTable() {
-        SignalCoupling c = new SignalCoupling("r", new int[] {0}, CouplingForm.TABLE, 0, 0, 1, 1,
-                PiecewiseLinear.of(new double[] {0, 1}, new double[] {0.2, 2.0}));
+        SignalCoupling c = SignalCoupling.of("r", new int[] {0},
+                new CouplingLaw.Table(PiecewiseLinear.of(new double[] {0, 1}, new double[] {0.2, 2.0})));
         assertEquals(1.1, c.valueAt(0.5), 1e-15);
         assertEquals(2.0, c.valueAt(7), 0.0);
     }

@@ -14,7 +14,7 @@ import java.util.List;
 import org.fatefield.circuits.model.GeneKinetics;
 import org.fatefield.circuits.model.SelfActivatingSwitch;
 import org.fatefield.engine.cell.Cell;
-import org.fatefield.engine.coupling.CouplingForm;
+import org.fatefield.engine.coupling.CouplingLaw;
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.engine.division.CycleTimeDistribution;
@@ -35,8 +35,9 @@ class CheckpointTest {
         SelfActivatingSwitch sw = SelfActivatingSwitch.symmetric("A", "B",
                 new GeneKinetics(0.05, 0.2, 0.5, 4, 1.0, 0.5, 4, 1.0));
         return TissueSpec.of(new CircuitSetup(sw, NoiseMode.LANGEVIN, 50, new double[] {0.3, 0.3}),
-                new ParameterMapping(sw.defaultParameters(), List.of(new SignalCoupling("repression",
-                        sw.parameterGroup("repression"), CouplingForm.HILL, 0.2, 1.8, 1, 2))), new MorphogenSpec(2000,
+                new ParameterMapping(sw.defaultParameters(), List.of(SignalCoupling.of("repression",
+                        sw.parameterGroup("repression"), new CouplingLaw.Hill(0.2, 1.8, 1, 2)))),
+                        new MorphogenSpec(2000,
                                 0.3, 10, 0, List.of(new SourceRegion(0, 0, 20, 100, 3))), new Domain.Rectangle(200,
                                 100), GrowthSpec.of(60, 3, 20,
                                 new CycleTimeDistribution(CycleTimeDistribution.Kind.GAMMA, 3, 0.2),

@@ -5,7 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import org.fatefield.circuits.model.CustomNetwork;
-import org.fatefield.engine.coupling.CouplingForm;
+import org.fatefield.engine.coupling.CouplingLaw;
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.engine.division.CycleTimeDistribution;
@@ -38,7 +38,7 @@ class PredictedBoundaryTest {
                         new CustomNetwork.ReactionDefinition("lose", new int[] {-1}, "k * X")));
         return TissueSpec.of(new CircuitSetup(gene, NoiseMode.LANGEVIN, systemSize, new double[] {0.05}),
                 new ParameterMapping(gene.defaultParameters(),
-                        List.of(new SignalCoupling("s", new int[] {1}, CouplingForm.LINEAR, 0.0, 2.0, 1, 1))),
+                        List.of(SignalCoupling.of("s", new int[] {1}, new CouplingLaw.Linear(0.0, 2.0)))),
                                 new MorphogenSpec(400, 1.0, 2.0, 0.0, List.of(new SourceRegion(0, 0, 10, 40, 20.0)),
                         MorphogenSpec.Solver.ADI), new Domain.Rectangle(300, 40), GrowthSpec.of(1200, CELL_DIAMETER / 2,
                                 0.0, new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e6, 0),

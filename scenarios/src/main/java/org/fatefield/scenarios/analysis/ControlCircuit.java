@@ -47,8 +47,8 @@ public final class ControlCircuit {
             return null;
         }
         SignalCoupling c = scenario.tissue().mapping().couplings().get(0);
-        double lo = c.table() != null ? c.table().minimum() : Math.min(c.base(), c.base() + c.gain());
-        double hi = c.table() != null ? c.table().maximum() : Math.max(c.base(), c.base() + c.gain());
+        double lo = c.law().range()[0];
+        double hi = c.law().range()[1];
         if (!(hi > lo)) {
             return null;
         }

@@ -131,9 +131,7 @@ final class AnalyzeCommand implements Callable<Integer> {
         if (range != null) {
             r = parseRange(range, "--range");
         } else if (parameter == null && !couplings.isEmpty()) {
-            SignalCoupling c = couplings.get(0);
-            r = c.table() != null ? new double[] {c.table().minimum(), c.table().maximum()}
-                    : new double[] {Math.min(c.base(), c.base() + c.gain()), Math.max(c.base(), c.base() + c.gain())};
+            r = couplings.get(0).law().range();
         } else {
             r = around(base[indices[0]]);
         }

@@ -6,11 +6,12 @@ import java.util.concurrent.Callable;
 import org.fatefield.circuits.model.SelfActivatingSwitch;
 import org.fatefield.engine.bench.CircuitBenchmark;
 import org.fatefield.engine.bench.TissueBenchmark;
+import org.fatefield.engine.coupling.CouplingLaw;
 import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.scenarios.format.Scenario;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
+import picocli.CommandLine;
 
 /** {@code fatefield bench}: cell-steps per second against a bare loop, in one run. */
 @Command(name = "bench", mixinStandardHelpOptions = true,
@@ -27,7 +28,8 @@ final class BenchCommand implements Callable<Integer> {
             description = "tissue sizes (default: ${DEFAULT-VALUE})")
     private List<Integer> sizes;
 
-    @Option(names = "--steps", paramLabel = "N", defaultValue = "50", description = "steps per timing (default: ${DEFAULT-VALUE})")
+    @Option(names = "--steps", paramLabel = "N", defaultValue = "50",
+            description = "steps per timing (default: ${DEFAULT-VALUE})")
     private int steps;
 
     @Option(names = "--repeats", paramLabel = "N", defaultValue = "5",
@@ -62,8 +64,10 @@ final class BenchCommand implements Callable<Integer> {
         if (loaded == null) {
             return FatefieldCommand.INVALID_INPUT;
         }
-        if (loaded.tissue().mapping().couplings().isEmpty()) {
-            spec.commandLine().getErr().println("bench needs a scenario with at least one [[coupling]]");
+        if (loaded.tissue().mapping().couplings().isEmpty()
+                || !(loaded.tissue().mapping().couplings().get(0).law() instanceof CouplingLaw.Hill)) {
+            spec.commandLine().getErr().println("bench needs a scenario whose first [[coupling]] has form = \"hill\""
+                    + " (the bare baseline loop is written for it), as the demo has");
             return FatefieldCommand.INVALID_INPUT;
         }
         double area = density == Density.confluent ? TissueBenchmark.confluentArea(loaded.tissue())
@@ -95,8 +99,7 @@ final class BenchCommand implements Callable<Integer> {
         if (loaded.tissue().circuit().network() instanceof SelfActivatingSwitch sw) {
             SignalCoupling c = loaded.tissue().mapping().couplings().get(0);
             CircuitBenchmark.Result r = CircuitBenchmark.measure(sw, loaded.tissue().circuit().systemSize(),
-                    c.parameterIndices(), Math.min(c.base(), c.base() + c.gain()), Math.max(c.base(), c.base() + c.gain()),
-                    10_000, steps);
+                    c.parameterIndices(), c.law().range()[0], c.law().range()[1], 10_000, steps);
             out.println();
             out.printf("Single cell: Langevin step, built-in switch %.4g /s, equivalent custom circuit %.4g /s,"
                     + " custom/built-in %.2f%n", r.builtInRate(), r.customRate(), r.customRatio());

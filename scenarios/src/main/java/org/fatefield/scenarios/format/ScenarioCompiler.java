@@ -10,7 +10,7 @@ import java.util.Map;
 import java.util.Set;
 import org.fatefield.circuits.model.ReactionNetwork;
 import org.fatefield.circuits.model.SelfActivatingSwitch;
-import org.fatefield.engine.coupling.CouplingForm;
+import org.fatefield.engine.coupling.CouplingLaw;
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.engine.division.CellSize;
@@ -132,22 +132,24 @@ final class ScenarioCompiler {
             if (indices.length == 0) {
                 List<String> options = new ArrayList<>(ScenarioSchema.KINETICS.stream().map(Key::name).toList());
                 options.addAll(parameterNames);
-                problems.add(locator.at(table, "parameter", "coupling[" + (i + 1) + "].parameter", "\"" + parameter + "\"",
+                problems.add(locator.at(table, "parameter", "coupling[" + (i + 1) + "].parameter",
+                        "\"" + parameter + "\"",
                         "is not a parameter of this circuit" + ScenarioChecker.suggestion(parameter, options)
                                 + "; use one of " + String.join(", ", parameterNames)
                                 + (network instanceof SelfActivatingSwitch ? ", or a kinetic key without the gene"
                                         + " prefix for both genes" : "")));
                 continue;
             }
-            CouplingForm form = CouplingForm.valueOf(values.text(table, "coupling", "form").toUpperCase(Locale.ROOT));
+            String form = values.text(table, "coupling", "form");
             PiecewiseLinear lookup = null;
-            if (form == CouplingForm.TABLE) {
+            if (form.equals("table")) {
                 if (!table.contains("table")) {
                     values.problem(table, "form", "coupling[" + (i + 1) + "].table", null,
                             "form = \"table\" needs table = [[c, value], ...]");
                     continue;
                 }
-                lookup = values.pairs(table, "table", "coupling[" + (i + 1) + "].table", "[[c, value], ...] with c increasing");
+                lookup = values.pairs(table, "table", "coupling[" + (i + 1) + "].table",
+                        "[[c, value], ...] with c increasing");
                 if (lookup == null) {
                     continue;
                 }
@@ -162,9 +164,17 @@ final class ScenarioCompiler {
                     continue;
                 }
             }
-            couplings.add(new SignalCoupling(parameter, indices, form, values.number(table, "coupling", "base"),
-                    values.number(table, "coupling", "gain"), values.number(table, "coupling", "half_max"),
-                    values.number(table, "coupling", "hill"), lookup, field));
+            double base = values.number(table, "coupling", "base");
+            double gain = values.number(table, "coupling", "gain");
+            CouplingLaw law = switch (form) {
+                case "table" -> new CouplingLaw.Table(lookup);
+                case "hill" -> new CouplingLaw.Hill(base, gain, values.number(table, "coupling", "half_max"),
+                        values.number(table, "coupling", "hill"));
+                case "linear" -> new CouplingLaw.Linear(base, gain);
+                default -> throw new IllegalStateException("coupling.form \"" + form + "\" passed the checker, which"
+                        + " allows only hill, linear and table");
+            };
+            couplings.add(new SignalCoupling(parameter, indices, law, field));
         }
         return new ParameterMapping(network.defaultParameters(), couplings);
     }
@@ -236,11 +246,13 @@ final class ScenarioCompiler {
             int g = genes.indexOf(entry.getKey());
             double level = ScenarioChecker.asNumber(entry.getValue());
             if (g < 0) {
-                problems.add(locator.at(rule, key, path + "." + key + "." + entry.getKey(), ScenarioChecker.render(level),
+                problems.add(locator.at(rule, key, path + "." + key + "." + entry.getKey(),
+                        ScenarioChecker.render(level),
                         "is not a gene of this circuit; genes are " + String.join(", ", genes)));
                 ok = false;
             } else if (level < 0) {
-                problems.add(locator.at(rule, key, path + "." + key + "." + entry.getKey(), ScenarioChecker.render(level),
+                problems.add(locator.at(rule, key, path + "." + key + "." + entry.getKey(),
+                        ScenarioChecker.render(level),
                         "must be a concentration of at least 0"));
                 ok = false;
             } else {
@@ -256,11 +268,13 @@ final class ScenarioCompiler {
                 values.text(division, "division", "cycle").toUpperCase(Locale.ROOT));
         double cv = values.number(division, "division", "cycle_cv");
         if (kind != CycleTimeDistribution.Kind.FIXED && !(cv > 0)) {
-            values.fail(division, "division", "cycle_cv", "must be greater than 0 for a " + kind.name().toLowerCase(Locale.ROOT)
+            values.fail(division, "division", "cycle_cv", "must be greater than 0 for a " + kind.name()
+                    .toLowerCase(Locale.ROOT)
                     + " cycle (or set cycle = \"fixed\")");
             return null;
         }
-        PartitionMode mode = PartitionMode.valueOf(values.text(division, "division", "partition").toUpperCase(Locale.ROOT));
+        PartitionMode mode = PartitionMode.valueOf(values.text(division, "division", "partition")
+                .toUpperCase(Locale.ROOT));
         Partitioning partition = new Partitioning(mode, values.number(division, "division", "asymmetry_mean"),
                 values.number(division, "division", "asymmetry_concentration"));
         boolean dilution = Boolean.TRUE.equals(division.getBoolean("dilution"));
@@ -279,11 +293,13 @@ final class ScenarioCompiler {
                             + " volume_split_cv = 0 with them)");
             return null;
         }
-        return new GrowthSpec((int) tissue.getLong("founders", () -> 200L), values.number(tissue, "tissue", "cell_radius"),
+        return new GrowthSpec((int) tissue.getLong("founders", () -> 200L), values.number(tissue, "tissue",
+                "cell_radius"),
                 values.number(tissue, "tissue", "repulsion"),
                 new CycleTimeDistribution(kind, values.number(division, "division", "cycle_mean"), cv), partition,
                 GrowthSpec.DivisionAxis.valueOf(values.text(division, "division", "axis").toUpperCase(Locale.ROOT)),
-                values.number(division, "division", "death_rate"), dilution, values.number(tissue, "tissue", "adhesion"),
+                values.number(division, "division", "death_rate"), dilution, values.number(tissue, "tissue",
+                        "adhesion"),
                 size);
     }
 

@@ -11,7 +11,7 @@ import java.util.function.DoubleUnaryOperator;
 import javax.xml.parsers.DocumentBuilderFactory;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
-import org.fatefield.circuits.kinetics.Hill;
+import org.fatefield.circuits.kinetics.HillFunctions;
 import org.hipparchus.analysis.solvers.BrentSolver;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -43,10 +43,11 @@ class AnalyzeCommandTest {
         double s = 0.2;
         double theta = 0.5;
         double n = 4;
-        DoubleUnaryOperator r = x -> (1 - s * Hill.activationSlope(x, theta, n))
-                / Hill.activationSlope(x, theta, n);
+        DoubleUnaryOperator r = x -> (1 - s * HillFunctions.activationSlope(x, theta, n))
+                / HillFunctions.activationSlope(x, theta, n);
         double state = new BrentSolver(1e-15, 1e-15, 1e-15).solve(1000,
-                x -> b + s * Hill.activation(x, theta, n) + r.applyAsDouble(x) * Hill.repression(x, theta, n) - x,
+                x -> b + s * HillFunctions.activation(x, theta, n) + r.applyAsDouble(x) * HillFunctions.repression(x,
+                        theta, n) - x,
                 0.3, 0.45);
         return r.applyAsDouble(state);
     }
@@ -55,7 +56,8 @@ class AnalyzeCommandTest {
     void demoAnalysisFindsThePitchforkAndWritesEveryFile() throws Exception {
         Path out = tmp.resolve("analysis");
         StringWriter err = new StringWriter();
-        int code = FatefieldCommand.execute(new PrintWriter(new StringWriter()), new PrintWriter(err), "analyze", "demo",
+        int code = FatefieldCommand.execute(new PrintWriter(new StringWriter()), new PrintWriter(err), "analyze",
+                "demo",
                 "--out", out.toString(), "--trajectories", "4", "--grid", "40", "--second", "Lum.basal",
                 "--second-range", "0:0.2");
         assertEquals(0, code, err.toString());
@@ -84,7 +86,8 @@ class AnalyzeCommandTest {
     @Test
     void unknownParameterIsExplained() {
         StringWriter err = new StringWriter();
-        int code = FatefieldCommand.execute(new PrintWriter(new StringWriter()), new PrintWriter(err), "analyze", "demo",
+        int code = FatefieldCommand.execute(new PrintWriter(new StringWriter()), new PrintWriter(err), "analyze",
+                "demo",
                 "--parameter", "speed", "--out", tmp.resolve("x").toString());
         assertNotEquals(0, code);
         assertTrue(err.toString().contains("Lum.repression"), err.toString());

@@ -4,7 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import java.util.List;
 import org.fatefield.circuits.model.CustomNetwork;
-import org.fatefield.engine.coupling.CouplingForm;
+import org.fatefield.engine.coupling.CouplingLaw;
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.engine.division.CycleTimeDistribution;
@@ -44,7 +44,7 @@ class RobustnessAnalysisTest {
                 null);
         TissueSpec spec = TissueSpec.of(new CircuitSetup(gene, NoiseMode.NONE, 1e4, new double[] {0.05}),
                 new ParameterMapping(gene.defaultParameters(),
-                        List.of(new SignalCoupling("s", new int[] {1}, CouplingForm.LINEAR, 0.0, 2.0, 1, 1))), field,
+                        List.of(SignalCoupling.of("s", new int[] {1}, new CouplingLaw.Linear(0.0, 2.0)))), field,
                                 new Domain.Rectangle(200, 20), GrowthSpec.of(2000, 0.5, 0.0,
                                 new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e6, 0),
                                 Partitioning.binomial()), new FateClassifier(List.of(new FateRule("high",

@@ -7,9 +7,9 @@ package org.fatefield.circuits.kinetics;
  * {@code 1 / (1 + r)}. Integer exponents up to 8 are computed by repeated multiplication, which
  * is several times faster than {@link Math#pow} and exact to rounding.
  */
-public final class Hill {
+public final class HillFunctions {
 
-    private Hill() {
+    private HillFunctions() {
     }
 
     /** {@code (x / theta)^n} for {@code x >= 0}; negative {@code x} is treated as zero. */
