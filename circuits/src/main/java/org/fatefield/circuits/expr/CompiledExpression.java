@@ -5,7 +5,7 @@ import org.fatefield.circuits.kinetics.HillFunctions;
 /**
  * A rate law compiled for fast repeated evaluation: the tree becomes a tree of small final
  * evaluator objects, with constants folded, integer powers turned into multiplications and Hill
- * functions with constant integer coefficients on the fast path of {@link Hill}. It evaluates only
+ * functions with constant integer coefficients on the fast path of {@link HillFunctions}. It evaluates only
  * the operations of {@link Node}; nothing else can be reached from a rate law.
  */
 public abstract class CompiledExpression {

@@ -12,7 +12,7 @@ import org.fatefield.circuits.kinetics.HillFunctions;
  *   dB/dt = bB + sB act(B) + rB rep(A) - kB B
  * </pre>
  *
- * with Hill activation and repression ({@link Hill}). With self-activation off it is the
+ * with Hill activation and repression ({@link HillFunctions}). With self-activation off it is the
  * mutual-repression toggle of Gardner, Cantor &amp; Collins (2000, Nature 403:339); with both
  * terms it is the fate-decision motif whose symmetric state loses stability in a pitchfork as
  * self-activation grows or degradation falls (Huang, Guo, May &amp; Enver 2007, Dev Biol 305:695).

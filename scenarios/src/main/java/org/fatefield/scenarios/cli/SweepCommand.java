@@ -13,7 +13,7 @@ import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.format.ScenarioReader;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.sweep.Manifest;
-import org.fatefield.scenarios.sweep.ScenarioOverrides;
+import org.fatefield.scenarios.format.Overrides;
 import org.fatefield.scenarios.sweep.SlurmScript;
 import org.fatefield.scenarios.sweep.SweepCollector;
 import org.fatefield.scenarios.sweep.SweepDefinition;
@@ -64,12 +64,13 @@ final class SweepCommand implements Runnable {
                 Manifest manifest = Manifest.plan(sweep);
                 // Every variant must be a valid scenario before anything is written.
                 for (double[] values : sweep.pointValues()) {
-                    ScenarioOverrides variant = ScenarioOverrides.of(sweep.scenarioText());
+                    Overrides variant = Overrides.none();
                     for (int k = 0; k < values.length; k++) {
                         variant = variant.with(sweep.parameters().get(k).key(), values[k]);
                     }
                     ScenarioReader.parse("variant of " + sweep.scenarioLabel(), "variant",
-                            variant.toToml().getBytes(StandardCharsets.UTF_8), file.toAbsolutePath().getParent());
+                            sweep.scenarioText().getBytes(StandardCharsets.UTF_8), file.toAbsolutePath().getParent(),
+                            variant);
                 }
                 RunFolder.checkUsable(out, false);
                 RunFolder folder = RunFolder.open(out);

@@ -2,15 +2,16 @@ package org.fatefield.scenarios.cli;
 
 import java.awt.GraphicsEnvironment;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 import javax.swing.SwingUtilities;
 import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.scenarios.analysis.ControlCircuit;
+import org.fatefield.scenarios.format.Overrides;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.format.ScenarioReader;
-import org.fatefield.scenarios.sweep.ScenarioOverrides;
 import org.fatefield.viz.live.TissueWindow;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -64,25 +65,27 @@ final class ViewCommand implements Callable<Integer> {
         if (settings == null || settings.isBlank()) {
             return base;
         }
-        ScenarioOverrides variant = ScenarioOverrides.of(base.text());
+        Overrides variant = Overrides.none();
         for (String item : settings.split(";")) {
             if (item.isBlank()) {
                 continue;
             }
-            String[] kv = item.split("=");
-            if (kv.length != 2) {
+            int equals = item.indexOf('=');
+            if (equals < 0) {
                 throw new IllegalArgumentException("write settings as key = value; key = value, got '" + item.trim() + "'");
             }
-            try {
-                variant = variant.with(kv[0].trim(), Double.parseDouble(kv[1].trim()));
-            } catch (NumberFormatException e) {
-                throw new IllegalArgumentException("'" + kv[1].trim() + "' is not a number", e);
-            }
+            variant = variant.with(item.substring(0, equals).trim(), Overrides.parseValue(item.substring(equals + 1)));
         }
         try {
-            return ScenarioReader.parse("settings", base.name(), variant.toToml().getBytes(StandardCharsets.UTF_8));
+            return ScenarioReader.parse(base.source(), base.name(), base.text().getBytes(StandardCharsets.UTF_8),
+                    sourceFolder(base), variant);
         } catch (ScenarioException e) {
             throw new IllegalArgumentException(e.problems().get(0).keyPath() + ": " + e.problems().get(0).message(), e);
         }
+    }
+
+    /** The folder a scenario file's includes are found in; null for a built-in scenario. */
+    private static Path sourceFolder(Scenario scenario) {
+        return scenario.source().startsWith("builtin:") ? null : Path.of(scenario.source()).toAbsolutePath().getParent();
     }
 }

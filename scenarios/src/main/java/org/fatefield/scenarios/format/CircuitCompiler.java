@@ -17,7 +17,6 @@ import org.fatefield.circuits.model.SelfActivatingSwitch;
 import org.fatefield.engine.tissue.CircuitSetup;
 import org.fatefield.engine.tissue.NoiseMode;
 import org.tomlj.TomlArray;
-import org.tomlj.TomlParseResult;
 import org.tomlj.TomlTable;
 
 /**
@@ -28,10 +27,10 @@ import org.tomlj.TomlTable;
  */
 final class CircuitCompiler {
 
-    private final TomlParseResult toml;
+    private final TomlTable toml;
     private final TomlValues values;
 
-    CircuitCompiler(TomlParseResult toml, TomlValues values) {
+    CircuitCompiler(TomlTable toml, TomlValues values) {
         this.toml = toml;
         this.values = values;
     }

@@ -4,8 +4,10 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import org.tomlj.TomlParseResult;
+import org.tomlj.TomlTable;
 
 /**
  * Where a scenario's circuit is written: in the scenario itself, or in a circuit file it names
@@ -18,13 +20,14 @@ import org.tomlj.TomlParseResult;
  * @param locator its checker, which locates keys in it
  * @param bytes   its bytes, for provenance
  */
-record CircuitDocument(String label, TomlParseResult toml, ScenarioChecker locator, byte[] bytes) {
+record CircuitDocument(String label, TomlTable toml, ScenarioChecker locator, byte[] bytes) {
 
     /**
      * Reads and checks the circuit file named by the scenario, or returns null after adding
      * problems.
      */
-    static CircuitDocument include(String scenarioLabel, TomlParseResult scenario, Path folder, List<Problem> problems) {
+    static CircuitDocument include(String scenarioLabel, TomlTable scenario, Path folder, List<Problem> problems,
+            Overrides overrides) {
         String name = scenario.getString("circuit.file");
         if (folder == null) {
             problems.add(new Problem(scenarioLabel, scenario.inputPositionOf("circuit.file").line(), 0, "circuit.file",
@@ -47,8 +50,21 @@ record CircuitDocument(String label, TomlParseResult toml, ScenarioChecker locat
         }
         String label = target.toString();
         ScenarioChecker checker = new ScenarioChecker(label, ScenarioChecker.Scope.CIRCUIT_FILE);
-        TomlParseResult toml = checker.check(new String(bytes, StandardCharsets.UTF_8));
+        TomlParseResult parsed = checker.parse(new String(bytes, StandardCharsets.UTF_8));
+        if (parsed == null) {
+            problems.addAll(checker.problems());
+            return null;
+        }
+        List<String> missing = new ArrayList<>();
+        TomlTable toml = checker.check(overrides.applyTo(parsed, missing));
         problems.addAll(checker.problems());
-        return toml == null || !checker.problems().isEmpty() ? null : new CircuitDocument(label, toml, checker, bytes);
+        missing.forEach(m -> problems.add(new Problem(label, 0, 0, "", null, m)));
+        return !missing.isEmpty() || !checker.problems().isEmpty() ? null
+                : new CircuitDocument(label, toml, checker, bytes);
+    }
+
+    /** True if an override of {@code path} belongs in an included circuit file (every circuit key but the include). */
+    static boolean belongsToCircuitFile(String path) {
+        return path.startsWith("circuit.") && !path.equals("circuit.file");
     }
 }

@@ -14,7 +14,6 @@ import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.field.PiecewiseLinear;
 import org.fatefield.engine.field.SourceRegion;
 import org.tomlj.TomlArray;
-import org.tomlj.TomlParseResult;
 import org.tomlj.TomlTable;
 
 /**
@@ -26,14 +25,14 @@ final class FieldCompiler {
 
     private static final int MAX_GRID = 4096;
 
-    private final TomlParseResult toml;
+    private final TomlTable toml;
     private final TomlValues values;
     private final Path folder;
     private final double width;
     private final double height;
     private final FateClassifier fates;
 
-    FieldCompiler(TomlParseResult toml, TomlValues values, Path folder, double width, double height,
+    FieldCompiler(TomlTable toml, TomlValues values, Path folder, double width, double height,
             FateClassifier fates) {
         this.toml = toml;
         this.values = values;

@@ -1,5 +1,6 @@
 package org.fatefield.scenarios.format;
 
+import java.util.List;
 import org.fatefield.engine.tissue.TissueSpec;
 
 /**
@@ -12,7 +13,14 @@ import org.fatefield.engine.tissue.TissueSpec;
  * @param seed        master seed from the file (the command line may override it)
  * @param tissue      the model objects
  * @param text        the scenario file's text (a run folder keeps a copy)
+ * @param overrides   values laid over the file's ({@code key = value}, in order; empty for none),
+ *                    recorded in the provenance beside the file's copy
  */
 public record Scenario(String name, String description, String source, String sha256, long seed, TissueSpec tissue,
-        String text) {
+        String text, List<String> overrides) {
+
+    /** Copies. */
+    public Scenario {
+        overrides = List.copyOf(overrides);
+    }
 }

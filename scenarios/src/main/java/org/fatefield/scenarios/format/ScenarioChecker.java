@@ -34,7 +34,7 @@ final class ScenarioChecker {
     private final String file;
     private final Scope scope;
     private final List<Problem> problems = new ArrayList<>();
-    private TomlParseResult toml;
+    private TomlTable toml;
     private boolean circuitIncluded;
 
     ScenarioChecker(String file) {
@@ -47,10 +47,16 @@ final class ScenarioChecker {
     }
 
     /** Parses and checks {@code text}; returns the parse result (null after a syntax error). */
-    TomlParseResult check(String text) {
-        toml = Toml.parse(text);
-        if (toml.hasErrors()) {
-            for (TomlParseError error : toml.errors()) {
+    TomlTable check(String text) {
+        TomlParseResult parsed = parse(text);
+        return parsed == null ? null : check(parsed);
+    }
+
+    /** Parses {@code text} as TOML; null (with the syntax errors as problems) if it is not TOML. */
+    TomlParseResult parse(String text) {
+        TomlParseResult parsed = Toml.parse(text);
+        if (parsed.hasErrors()) {
+            for (TomlParseError error : parsed.errors()) {
                 TomlPosition at = error.position();
                 int line = at == null ? 0 : at.line();
                 problems.add(new Problem(file, line, at == null ? 0 : at.column(), keyOnLine(text, line), null,
@@ -58,6 +64,12 @@ final class ScenarioChecker {
             }
             return null;
         }
+        return parsed;
+    }
+
+    /** Checks a parsed tree (a file's, or one with overrides laid over it) against the schema; returns it. */
+    TomlTable check(TomlTable tree) {
+        toml = tree;
         Set<String> roots = ScenarioSchema.sections().stream().filter(this::inScope)
                 .map(s -> s.path().split("\\.")[0]).collect(Collectors.toCollection(LinkedHashSet::new));
         circuitIncluded = scope == Scope.SCENARIO && toml.contains("circuit.file");

@@ -30,7 +30,6 @@ import org.fatefield.engine.tissue.Timing;
 import org.fatefield.engine.tissue.TissueSpec;
 import org.fatefield.engine.variability.ExtrinsicNoise;
 import org.tomlj.TomlArray;
-import org.tomlj.TomlParseResult;
 import org.tomlj.TomlTable;
 
 /**
@@ -42,7 +41,7 @@ final class ScenarioCompiler {
 
 
     private final String file;
-    private final TomlParseResult toml;
+    private final TomlTable toml;
     private final ScenarioChecker locator;
     private final List<Problem> problems = new ArrayList<>();
     private final TomlValues values;
@@ -50,7 +49,7 @@ final class ScenarioCompiler {
     private final CircuitDocument circuitDocument;
     private final Path folder;
 
-    ScenarioCompiler(String file, TomlParseResult toml, ScenarioChecker locator, CircuitDocument circuitDocument,
+    ScenarioCompiler(String file, TomlTable toml, ScenarioChecker locator, CircuitDocument circuitDocument,
             Path folder) {
         this.folder = folder;
         this.file = file;
@@ -64,7 +63,7 @@ final class ScenarioCompiler {
         return problems;
     }
 
-    Scenario compile(String fallbackName, String sha256, String text) {
+    Scenario compile(String fallbackName, String sha256, String text, List<String> overrides) {
         TomlTable scenario = toml.getTableOrEmpty("scenario");
         TomlTable run = toml.getTableOrEmpty("run");
         TomlTable tissue = toml.getTableOrEmpty("tissue");
@@ -110,7 +109,7 @@ final class ScenarioCompiler {
             String name = scenario.contains("name") ? scenario.getString("name") : fallbackName;
             String description = scenario.contains("description") ? scenario.getString("description") : "";
             long seed = run.contains("seed") ? run.getLong("seed") : 1L;
-            return new Scenario(name, description, file, sha256, seed, spec, text);
+            return new Scenario(name, description, file, sha256, seed, spec, text, overrides);
         } catch (IllegalArgumentException e) {
             problems.add(new Problem(file, 0, 0, "", null, e.getMessage()));
             return null;

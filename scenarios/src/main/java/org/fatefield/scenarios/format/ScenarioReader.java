@@ -13,6 +13,7 @@ import java.util.HexFormat;
 import java.util.List;
 import java.util.Set;
 import org.tomlj.TomlParseResult;
+import org.tomlj.TomlTable;
 
 /**
  * Reads a scenario file into a {@link Scenario}, reporting every problem at once.
@@ -53,25 +54,47 @@ public final class ScenarioReader {
      * @param folder       folder a {@code circuit.file} is looked up in, or null if none may be included
      */
     public static Scenario parse(String label, String fallbackName, byte[] bytes, Path folder) throws ScenarioException {
+        return parse(label, fallbackName, bytes, folder, Overrides.none());
+    }
+
+    /**
+     * Validates scenario text with {@code overrides} laid over its parsed tree: the overridden
+     * values are checked and compiled exactly as the file's own (a sweep point, a robustness
+     * perturbation, live settings). Overrides of {@code circuit.*} keys go to the included
+     * circuit file when the scenario names one.
+     */
+    public static Scenario parse(String label, String fallbackName, byte[] bytes, Path folder, Overrides overrides)
+            throws ScenarioException {
         String text = new String(bytes, StandardCharsets.UTF_8);
         ScenarioChecker checker = new ScenarioChecker(label);
-        TomlParseResult toml = checker.check(text);
+        TomlParseResult parsed = checker.parse(text);
         List<Problem> problems = new ArrayList<>(checker.problems());
-        if (toml == null) {
+        if (parsed == null) {
             throw new ScenarioException(sorted(problems));
         }
+        boolean included = parsed.contains("circuit.file");
+        Overrides own = included ? overrides.matching(path -> !CircuitDocument.belongsToCircuitFile(path)) : overrides;
+        List<String> missing = new ArrayList<>();
+        TomlTable toml = checker.check(own.applyTo(parsed, missing));
+        problems.addAll(checker.problems());
+        missing.forEach(m -> problems.add(new Problem(label, 0, 0, "", null, m)));
         CircuitDocument circuit = new CircuitDocument(label, toml, checker, bytes);
         if (checker.circuitIncluded() && problems.isEmpty()) {
-            circuit = CircuitDocument.include(label, toml, folder, problems);
+            circuit = CircuitDocument.include(label, toml, folder, problems,
+                    overrides.matching(CircuitDocument::belongsToCircuitFile));
             if (circuit == null) {
                 throw new ScenarioException(sorted(problems));
             }
         }
         byte[] provenance = circuit.bytes() == bytes ? bytes : concat(bytes, circuit.bytes());
+        if (!overrides.isEmpty()) {
+            provenance = concat(provenance, ("\n# overrides\n" + String.join("\n", overrides.describe()))
+                    .getBytes(StandardCharsets.UTF_8));
+        }
         ScenarioCompiler compiler = new ScenarioCompiler(label, toml, checker, circuit, folder);
         Scenario scenario = null;
         try {
-            scenario = compiler.compile(fallbackName, sha256(provenance), text);
+            scenario = compiler.compile(fallbackName, sha256(provenance), text, overrides.describe());
         } catch (RuntimeException e) {
             if (problems.isEmpty()) {
                 throw e;

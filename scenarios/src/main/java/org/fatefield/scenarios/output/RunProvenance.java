@@ -39,6 +39,9 @@ public final class RunProvenance {
         source.addProperty("name", scenario.name());
         source.addProperty("source", scenario.source());
         source.addProperty("sha256", scenario.sha256());
+        JsonArray overrides = new JsonArray();
+        scenario.overrides().forEach(overrides::add);
+        source.add("overrides", overrides);
         root.add("scenario", source);
         root.addProperty("seed", seed);
         root.addProperty("started", started.toString());

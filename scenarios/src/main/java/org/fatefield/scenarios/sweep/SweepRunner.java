@@ -16,6 +16,7 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.fatefield.engine.tissue.Tissue;
+import org.fatefield.scenarios.format.Overrides;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioReader;
 import org.fatefield.scenarios.output.JsonFiles;
@@ -141,12 +142,12 @@ public final class SweepRunner {
         result.addProperty("run_id", run.id());
         result.addProperty("seed", run.seed());
         try {
-            ScenarioOverrides variant = ScenarioOverrides.of(baseText);
+            Overrides variant = Overrides.none();
             for (int k = 0; k < manifest.keys().size(); k++) {
                 variant = variant.with(manifest.keys().get(k), run.values()[k]);
             }
-            Scenario scenario = ScenarioReader.parse(run.id(), run.id(),
-                    variant.toToml().getBytes(StandardCharsets.UTF_8), folder.toAbsolutePath());
+            Scenario scenario = ScenarioReader.parse(run.id(), run.id(), baseText.getBytes(StandardCharsets.UTF_8),
+                    folder.toAbsolutePath(), variant);
             Tissue tissue = new Tissue(scenario.tissue(), run.seed(), 1);
             tissue.start();
             tissue.runToEnd();

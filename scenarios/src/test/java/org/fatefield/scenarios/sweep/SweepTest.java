@@ -11,12 +11,15 @@ import java.util.Set;
 import org.fatefield.circuits.random.RandomStreams;
 import org.fatefield.scenarios.builtin.BuiltinScenarios;
 import org.fatefield.scenarios.cli.FatefieldCommandAccess;
+import org.fatefield.scenarios.format.Overrides;
+import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.format.ScenarioReader;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 
@@ -94,15 +97,36 @@ class SweepTest {
 
     @Test
     void overridesProduceValidScenariosWithTheNewValues() throws Exception {
-        String demo = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8);
-        String text = ScenarioOverrides.of(demo).with("morphogen.source[1].rate", 4.5).with("tissue.founders", 77)
-                .with("circuit.kinetics.Ark.degradation", 1.25).toToml();
-        var scenario = ScenarioReader.parse("v", "v", text.getBytes(StandardCharsets.UTF_8));
+        // A multi-line description once made a variant written back out as TOML text invalid.
+        String demo = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8)
+                .replaceFirst("description = \"[^\"]*\"", "description = \"\"\"two\nlines \"quoted\"\"\"\"");
+        Overrides overrides = Overrides.none().with("morphogen.source[1].rate", 4.5).with("tissue.founders", 77.0)
+                .with("circuit.kinetics.Ark.degradation", 1.25);
+        var scenario = ScenarioReader.parse("v", "v", demo.getBytes(StandardCharsets.UTF_8), null, overrides);
+        assertEquals("two\nlines \"quoted\"", scenario.description());
+        assertEquals(List.of("morphogen.source[1].rate = 4.5", "tissue.founders = 77.0",
+                "circuit.kinetics.Ark.degradation = 1.25"), scenario.overrides());
         assertEquals(4.5, scenario.tissue().morphogen().sources().get(0).rate(), 0.0);
         assertEquals(77, scenario.tissue().growth().initialCells());
         var names = scenario.tissue().circuit().network().parameterNames();
         assertEquals(1.25, scenario.tissue().mapping().base()[names.indexOf("Ark.degradation")], 0.0);
         assertEquals(1.0, scenario.tissue().mapping().base()[names.indexOf("Lum.degradation")], 0.0);
+    }
+
+    @Test
+    void badOverridesAreReportedLikeBadLinesOfTheFile() {
+        byte[] demo = BuiltinScenarios.bytes("demo").orElseThrow();
+        ScenarioException negative = assertThrows(ScenarioException.class, () -> ScenarioReader.parse("demo", "demo",
+                demo, null, Overrides.none().with("tissue.repulsion", -2.0)));
+        assertEquals("tissue.repulsion", negative.problems().get(0).keyPath(), negative.getMessage());
+        assertTrue(negative.problems().get(0).line() > 0, "points at the line the override replaces");
+        ScenarioException missing = assertThrows(ScenarioException.class, () -> ScenarioReader.parse("demo", "demo",
+                demo, null, Overrides.none().with("morphogen.source[3].rate", 1.0)));
+        assertTrue(missing.getMessage().contains("has no source[3]"), missing.getMessage());
+        ScenarioException unknown = assertThrows(ScenarioException.class, () -> ScenarioReader.parse("demo", "demo",
+                demo, null, Overrides.none().with("tissue.colour", "blue")));
+        assertTrue(unknown.getMessage().contains("tissue.colour"), unknown.getMessage());
+        assertThrows(IllegalArgumentException.class, () -> Overrides.none().with("tissue..width", 1.0));
     }
 
     @Test
