@@ -41,7 +41,7 @@ class RenderingTest {
         CustomNetwork inert = CustomNetwork.of(List.of("X"), List.of("k"), new double[] {0},
                 List.of(new CustomNetwork.ReactionDefinition("none", new int[] {1}, "k * X")));
         TissueSpec spec = TissueSpec.of(new CircuitSetup(inert, NoiseMode.NONE, 100, new double[] {1.0}),
-                new ParameterMapping(inert.defaultParameters(), List.of()), new MorphogenSpec(0, 0, 10, 0, List.of()),
+                new ParameterMapping(inert.defaultParameters(), List.of()), MorphogenSpec.of(0, 0, 10, 0, List.of()),
                 new Domain.Rectangle(100, 50), GrowthSpec.of(1, 5, 0,
                 new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e6, 0), Partitioning.equal()),
                 new FateClassifier(List.of(new FateRule("high", new double[] {0.5}, new double[] {Double.NaN})), "low"),

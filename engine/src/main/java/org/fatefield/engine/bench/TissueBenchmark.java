@@ -131,7 +131,7 @@ public final class TissueBenchmark {
     private static MorphogenSpec scaledField(TissueSpec template, double width, double height) {
         MorphogenSpec m = template.morphogen();
         double spacing = Math.max(m.gridSpacing(), Math.max(width, height) / 2048);
-        return new MorphogenSpec(m.diffusion(), m.decay(), spacing, m.initial(), m.sources(), m.solver());
+        return m.withGridSpacing(spacing);
     }
 
     /**

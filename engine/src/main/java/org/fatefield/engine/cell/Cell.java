@@ -41,26 +41,20 @@ public final class Cell {
     private static final double[] NO_SCORES = new double[0];
 
     /**
-     * @param id         unique id, never reused
-     * @param parentId   id of the mother, or -1 for a founder cell
-     * @param generation divisions since the founder (founders are generation 0)
-     * @param birthTime  time of birth (h)
-     * @param cycleTime  time from birth to division (h)
-     * @param state      circuit state (concentrations), owned by the cell from now on
-     * @param stream     the two state words of the cell's own random stream (see RandomStreams.seedWords)
-     * @param x          position (µm)
-     * @param y          position (µm)
-     */
-    public Cell(long id, long parentId, int generation, double birthTime, double cycleTime, double[] state,
-            long[] stream, double x, double y) {
-        this(id, parentId, generation, birthTime, cycleTime, state, stream, x, y, 1.0, 1.0);
-    }
-
-    /**
-     * A cell of a given size: as {@link #Cell(long, long, int, double, double, double[],
-     * long[], double, double)}, with {@code birthVolume} and the current {@code volume} in units
-     * of a mean newborn cell, both greater than 0. A founder is born before time 0 (a negative
-     * birth time) so that it starts part-way through its cycle.
+     * A cell. A founder is born before time 0 (a negative birth time) so that it starts part-way
+     * through its cycle.
+     *
+     * @param id          unique id, never reused
+     * @param parentId    id of the mother, or -1 for a founder cell
+     * @param generation  divisions since the founder (founders are generation 0)
+     * @param birthTime   time of birth (h)
+     * @param cycleTime   time from birth to division (h)
+     * @param state       circuit state (concentrations), owned by the cell from now on
+     * @param stream      the two state words of the cell's own random stream (see RandomStreams.seedWords)
+     * @param x           position (µm)
+     * @param y           position (µm)
+     * @param birthVolume volume at birth, in units of a mean newborn cell, greater than 0
+     * @param volume      volume now, in the same units, greater than 0
      */
     public Cell(long id, long parentId, int generation, double birthTime, double cycleTime, double[] state,
             long[] stream, double x, double y, double birthVolume, double volume) {
@@ -144,7 +138,8 @@ public final class Cell {
      * of missing the cache on every cell.
      */
     public Cell relocated() {
-        Cell cell = new Cell(id, parentId, generation, birthTime, cycleTime, state.clone(), new long[] {stream0, stream1}, birthX,
+        Cell cell = new Cell(id, parentId, generation, birthTime, cycleTime, state.clone(), new long[] {stream0,
+                stream1}, birthX,
                 birthY, birthVolume, volume);
         cell.x = x;
         cell.y = y;

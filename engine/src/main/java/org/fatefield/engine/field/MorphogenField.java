@@ -47,17 +47,7 @@ public final class MorphogenField {
     private int adiWorkers;
 
     /**
-     * A field covering {@code width x height} µm, filled with the initial concentration.
-     *
-     * @throws IllegalArgumentException if the domain is not positive or the grid would exceed
-     *                                  4096 squares per side
-     */
-    public MorphogenField(MorphogenSpec spec, double width, double height) {
-        this(spec, width, height, false);
-    }
-
-    /**
-     * A field as {@link #MorphogenField(MorphogenSpec, double, double)}; with {@code periodicY}
+     * A field over the width x height domain (µm); with {@code periodicY}
      * the field wraps around along y (a strip), which needs a height of a whole number of grid
      * squares, at least three.
      */
@@ -214,7 +204,8 @@ public final class MorphogenField {
                 adi = new AdiSolver(nx, ny, spec.diffusion(), spec.decay(), h, pool.workers(), periodicY);
                 adiWorkers = pool.workers();
             }
-            adi.step(current, synthesis, exchangeSource, exchangeUptake, dt, pool, leftFixed(), spec.leftWall().value());
+            adi.step(current, synthesis, exchangeSource, exchangeUptake, dt, pool, leftFixed(), spec.leftWall()
+                    .value());
             return;
         }
         int steps = subStepsFor(dt);

@@ -82,11 +82,44 @@ public record MorphogenSpec(String name, double diffusion, double decay, double 
         }
     }
 
-    /** A spec with no-flux walls, no cell exchange and no fixed profile. */
-    public MorphogenSpec(double diffusion, double decay, double gridSpacing, double initial,
-            List<SourceRegion> sources, Solver solver) {
-        this("morphogen", diffusion, decay, gridSpacing, initial, sources, solver, WallCondition.NO_FLUX,
-                CellExchange.OFF, null);
+    /**
+     * A field named "morphogen", advanced by the explicit solver, with no-flux walls, no cell
+     * exchange and no fixed profile; the {@code with} copies change any of these.
+     */
+    public static MorphogenSpec of(double diffusion, double decay, double gridSpacing, double initial,
+            List<SourceRegion> sources) {
+        return new MorphogenSpec("morphogen", diffusion, decay, gridSpacing, initial, sources, Solver.EXPLICIT,
+                WallCondition.NO_FLUX, CellExchange.OFF, null);
+    }
+
+    /** With time stepping by {@code value}. */
+    public MorphogenSpec withSolver(Solver value) {
+        return new MorphogenSpec(name, diffusion, decay, gridSpacing, initial, sources, value, leftWall, exchange,
+                profile);
+    }
+
+    /** With the name {@code value}. */
+    public MorphogenSpec withName(String value) {
+        return new MorphogenSpec(value, diffusion, decay, gridSpacing, initial, sources, solver, leftWall, exchange,
+                profile);
+    }
+
+    /** With the condition {@code value} at x = 0. */
+    public MorphogenSpec withLeftWall(WallCondition value) {
+        return new MorphogenSpec(name, diffusion, decay, gridSpacing, initial, sources, solver, value, exchange,
+                profile);
+    }
+
+    /** With cells exchanging the field by {@code value}. */
+    public MorphogenSpec withExchange(CellExchange value) {
+        return new MorphogenSpec(name, diffusion, decay, gridSpacing, initial, sources, solver, leftWall, value,
+                profile);
+    }
+
+    /** With the grid spacing {@code value} (µm). */
+    public MorphogenSpec withGridSpacing(double value) {
+        return new MorphogenSpec(name, diffusion, decay, value, initial, sources, solver, leftWall, exchange,
+                profile);
     }
 
     /** How the field is advanced in time. */
@@ -95,12 +128,6 @@ public record MorphogenSpec(String name, double diffusion, double decay, double 
         EXPLICIT,
         /** Peaceman-Rachford alternating-direction implicit: one step per tick at any step size. */
         ADI
-    }
-
-    /** An explicit-solver spec. */
-    public MorphogenSpec(double diffusion, double decay, double gridSpacing, double initial,
-            List<SourceRegion> sources) {
-        this(diffusion, decay, gridSpacing, initial, sources, Solver.EXPLICIT);
     }
 
     /** Validates every field. */

@@ -41,8 +41,9 @@ class MorphogenFieldTest {
 
     private static MorphogenField relaxed(double length, double h, double hours, MorphogenSpec.Solver solver,
             double dt) {
-        MorphogenSpec spec = new MorphogenSpec(D, K, h, 0.0, List.of(new SourceRegion(0, 0, W, h, S)), solver);
-        MorphogenField field = new MorphogenField(spec, length, h);
+        MorphogenSpec spec = MorphogenSpec.of(D, K, h, 0.0, List.of(new SourceRegion(0, 0, W, h, S)))
+                .withSolver(solver);
+        MorphogenField field = new MorphogenField(spec, length, h, false);
         for (int i = 0; i < Math.round(hours / dt); i++) {
             field.advance(dt);
         }
@@ -105,7 +106,8 @@ class MorphogenFieldTest {
         MorphogenField explicit = relaxed(60.0, 1.0, 60.0);
         MorphogenField adi = relaxed(60.0, 1.0, 200.0, MorphogenSpec.Solver.ADI, 2.0);
         for (int i = 0; i < explicit.columns(); i++) {
-            assertEquals(explicit.value(i, 0), adi.value(i, 0), 1e-10 * Math.max(1.0, explicit.value(i, 0)), "i = " + i);
+            assertEquals(explicit.value(i, 0), adi.value(i, 0), 1e-10 * Math.max(1.0, explicit.value(i, 0)),
+                    "i = " + i);
             double x = (i + 0.5);
             assertEquals(analytic(x, 60.0), adi.value(i, 0), 0.01 * analytic(x, 60.0) + 1e-12);
         }
@@ -115,12 +117,12 @@ class MorphogenFieldTest {
     void adiAndExplicitAgreeInTimeOnATwoDimensionalSource() {
         // ADI against the explicit reference at small steps: after 0.5 h with dt = 0.001 h the
         // first-order error of the explicit scheme dominates, and both agree to 0.1% of the peak.
-        MorphogenSpec explicitSpec = new MorphogenSpec(400.0, 0.5, 5.0, 0.0,
-                List.of(new SourceRegion(0, 20, 25, 60, 4.0)), MorphogenSpec.Solver.EXPLICIT);
-        MorphogenSpec adiSpec = new MorphogenSpec(400.0, 0.5, 5.0, 0.0,
-                List.of(new SourceRegion(0, 20, 25, 60, 4.0)), MorphogenSpec.Solver.ADI);
-        MorphogenField a = new MorphogenField(explicitSpec, 200, 100);
-        MorphogenField b = new MorphogenField(adiSpec, 200, 100);
+        MorphogenSpec explicitSpec = MorphogenSpec.of(400.0, 0.5, 5.0, 0.0, List.of(new SourceRegion(0, 20, 25, 60,
+                4.0))).withSolver(MorphogenSpec.Solver.EXPLICIT);
+        MorphogenSpec adiSpec = MorphogenSpec.of(400.0, 0.5, 5.0, 0.0, List.of(new SourceRegion(0, 20, 25, 60, 4.0)))
+                .withSolver(MorphogenSpec.Solver.ADI);
+        MorphogenField a = new MorphogenField(explicitSpec, 200, 100, false);
+        MorphogenField b = new MorphogenField(adiSpec, 200, 100, false);
         for (int i = 0; i < 500; i++) {
             a.advance(0.001);
             b.advance(0.001);
@@ -137,8 +139,8 @@ class MorphogenFieldTest {
     @Test
     void subStepsKeepEveryStepUnderTheStabilityLimit() {
         // Von Neumann limit of the 2D explicit scheme: dt <= 2 / (k + 8 D / h^2) (Morton & Mayers 2005).
-        MorphogenSpec spec = new MorphogenSpec(3600.0, 0.5, 10.0, 0.0, List.of());
-        MorphogenField field = new MorphogenField(spec, 100, 100);
+        MorphogenSpec spec = MorphogenSpec.of(3600.0, 0.5, 10.0, 0.0, List.of());
+        MorphogenField field = new MorphogenField(spec, 100, 100, false);
         assertEquals(2.0 / (0.5 + 8 * 3600.0 / 100.0), field.stableStepLimit(), 1e-15);
         double dt = 0.1;
         assertTrue(dt / field.subStepsFor(dt) <= 0.9 * field.stableStepLimit());
@@ -146,8 +148,8 @@ class MorphogenFieldTest {
 
     @Test
     void explicitStepsBeyondTheLimitWouldGrowButSubSteppingStaysBounded() {
-        MorphogenSpec spec = new MorphogenSpec(3600.0, 0.5, 10.0, 0.0, List.of(new SourceRegion(0, 0, 20, 100, 5)));
-        MorphogenField field = new MorphogenField(spec, 200, 100);
+        MorphogenSpec spec = MorphogenSpec.of(3600.0, 0.5, 10.0, 0.0, List.of(new SourceRegion(0, 0, 20, 100, 5)));
+        MorphogenField field = new MorphogenField(spec, 200, 100, false);
         for (int i = 0; i < 1000; i++) {
             field.advance(0.1);
         }

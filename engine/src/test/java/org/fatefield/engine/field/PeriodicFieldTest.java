@@ -24,7 +24,8 @@ class PeriodicFieldTest {
     private static final double K = 2 * Math.PI / H;
 
     private static MorphogenField strip(MorphogenSpec.Solver solver) {
-        MorphogenField field = new MorphogenField(new MorphogenSpec(D, 0.0, SPACING, 0.0, List.of(), solver), 50, H, true);
+        MorphogenField field = new MorphogenField(MorphogenSpec.of(D, 0.0, SPACING, 0.0, List.of()).withSolver(solver),
+                50, H, true);
         field.fill((x, y) -> 1.0 + 0.5 * Math.sin(K * y));
         return field;
     }
@@ -85,7 +86,8 @@ class PeriodicFieldTest {
 
     @Test
     void aStripMustHoldWholeGridSquares() {
-        MorphogenSpec spec = new MorphogenSpec(D, 0.0, SPACING, 0.0, List.of(), MorphogenSpec.Solver.EXPLICIT);
+        MorphogenSpec spec = MorphogenSpec.of(D, 0.0, SPACING, 0.0, List.of())
+                .withSolver(MorphogenSpec.Solver.EXPLICIT);
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> new MorphogenField(spec, 50, 102, true));
         assertEquals(true, e.getMessage().contains("whole number of grid squares"), e.getMessage());

@@ -27,8 +27,8 @@ class TimeAndTableTest {
         // Synthesis off until 2 h, on from 2.5 h: the field stays exactly zero for the first 2 h,
         // and afterwards follows a constant source started at 2.5 h to within the ramp's effect.
         PiecewiseLinear pulse = PiecewiseLinear.of(new double[] {2.0, 2.5}, new double[] {0.0, 1.0});
-        MorphogenField delayed = new MorphogenField(new MorphogenSpec(100, 1, 5, 0,
-                List.of(new SourceRegion(0, 0, 10, 50, 2.0, pulse))), 100, 50);
+        MorphogenField delayed = new MorphogenField(MorphogenSpec.of(100, 1, 5, 0, List.of(new SourceRegion(0, 0, 10,
+                50, 2.0, pulse))), 100, 50, false);
         for (int i = 0; i < 200; i++) {
             delayed.advance(0.01);
         }
@@ -36,8 +36,8 @@ class TimeAndTableTest {
         for (int i = 0; i < 800; i++) {
             delayed.advance(0.01);
         }
-        MorphogenField constant = new MorphogenField(new MorphogenSpec(100, 1, 5, 0,
-                List.of(new SourceRegion(0, 0, 10, 50, 2.0))), 100, 50);
+        MorphogenField constant = new MorphogenField(MorphogenSpec.of(100, 1, 5, 0, List.of(new SourceRegion(0, 0, 10,
+                50, 2.0))), 100, 50, false);
         for (int i = 0; i < 775; i++) {
             constant.advance(0.01);
         }

@@ -25,7 +25,7 @@ class WallAndExchangeTest {
 
     private static MorphogenField relaxed(WallCondition wall, Solver solver) {
         MorphogenSpec spec = new MorphogenSpec("m", D, K, 0.5, 0, List.of(), solver, wall, CellExchange.OFF, null);
-        MorphogenField field = new MorphogenField(spec, L, 0.5);
+        MorphogenField field = new MorphogenField(spec, L, 0.5, false);
         double dt = solver == Solver.ADI ? 0.05 : 0.001;
         for (int i = 0; i < Math.round(40 / dt); i++) {
             field.advance(dt);
@@ -64,7 +64,7 @@ class WallAndExchangeTest {
         // settles at q / k exactly; uptake u adds to the loss: q / (k + u).
         MorphogenSpec spec = new MorphogenSpec("m", 0, K, 10, 0, List.of(), Solver.EXPLICIT, WallCondition.NO_FLUX,
                 new CellExchange(CellExchange.ALL, 50, 0.5), null);
-        MorphogenField field = new MorphogenField(spec, 30, 10);
+        MorphogenField field = new MorphogenField(spec, 30, 10, false);
         double[] amount = new double[3];
         double[] uptake = new double[3];
         amount[1] = 50.0 / 100;

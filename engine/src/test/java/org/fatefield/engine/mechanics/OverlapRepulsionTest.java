@@ -12,7 +12,7 @@ import org.junit.jupiter.api.Test;
 class OverlapRepulsionTest {
 
     private static Cell cellAt(long id, double x, double y) {
-        return new Cell(id, -1, 0, 0, 10, new double[] {0}, RandomStreams.of(1).seedWords(id), x, y);
+        return new Cell(id, -1, 0, 0, 10, new double[] {0}, RandomStreams.of(1).seedWords(id), x, y, 1.0, 1.0);
     }
 
     @Test

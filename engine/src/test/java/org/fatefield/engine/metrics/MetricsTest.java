@@ -17,7 +17,7 @@ import org.junit.jupiter.api.Test;
 class MetricsTest {
 
     private static Cell cell(long id, long parent, double x, int fate) {
-        Cell c = new Cell(id, parent, 0, 0, 1, new double[] {0}, RandomStreams.of(1).seedWords(id), x, 1);
+        Cell c = new Cell(id, parent, 0, 0, 1, new double[] {0}, RandomStreams.of(1).seedWords(id), x, 1, 1.0, 1.0);
         c.setFate(fate, 0);
         return c;
     }

@@ -37,8 +37,8 @@ class CheckpointTest {
         return TissueSpec.of(new CircuitSetup(sw, NoiseMode.LANGEVIN, 50, new double[] {0.3, 0.3}),
                 new ParameterMapping(sw.defaultParameters(), List.of(SignalCoupling.of("repression",
                         sw.parameterGroup("repression"), new CouplingLaw.Hill(0.2, 1.8, 1, 2)))),
-                        new MorphogenSpec(2000,
-                                0.3, 10, 0, List.of(new SourceRegion(0, 0, 20, 100, 3))), new Domain.Rectangle(200,
+                        MorphogenSpec.of(2000, 0.3, 10, 0, List.of(new SourceRegion(0, 0, 20, 100, 3))),
+                                new Domain.Rectangle(200,
                                 100), GrowthSpec.of(60, 3, 20,
                                 new CycleTimeDistribution(CycleTimeDistribution.Kind.GAMMA, 3, 0.2),
                                 Partitioning.binomial()).withAxis(GrowthSpec.DivisionAxis.RANDOM).withDeathRate(0.02)

@@ -30,7 +30,7 @@ class GrowthOptionsTest {
 
     private static TissueSpec spec(int founders, GrowthSpec growth, double duration) {
         return TissueSpec.of(new CircuitSetup(INERT, NoiseMode.NONE, 100, new double[] {1.0}),
-                new ParameterMapping(INERT.defaultParameters(), List.of()), new MorphogenSpec(0, 0, 50, 0, List.of()),
+                new ParameterMapping(INERT.defaultParameters(), List.of()), MorphogenSpec.of(0, 0, 50, 0, List.of()),
                 new Domain.Rectangle(1000, 1000), growth, new FateClassifier(List.of(new FateRule("any",
                 new double[] {Double.NaN}, new double[] {Double.NaN})),
                         "none"), new Timing(duration, 0.01, 1.0));

@@ -31,7 +31,7 @@ class PartitionLineageTest {
                 new GeneKinetics(0.1, 0.35, 0.5, 4, 1.0, 0.5, 4, 1.0));
         double s = 0.6325258702713282;
         TissueSpec spec = TissueSpec.of(new CircuitSetup(sw, NoiseMode.NONE, 200, new double[] {s, s}),
-                new ParameterMapping(sw.defaultParameters(), List.of()), new MorphogenSpec(0, 0, 50, 0, List.of()),
+                new ParameterMapping(sw.defaultParameters(), List.of()), MorphogenSpec.of(0, 0, 50, 0, List.of()),
                 new Domain.Rectangle(1000, 1000), GrowthSpec.of(1000, 2, 0,
                 new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 100.0, 0), partitioning),
                 new FateClassifier(List.of(

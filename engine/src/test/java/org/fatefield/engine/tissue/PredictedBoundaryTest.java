@@ -39,8 +39,9 @@ class PredictedBoundaryTest {
         return TissueSpec.of(new CircuitSetup(gene, NoiseMode.LANGEVIN, systemSize, new double[] {0.05}),
                 new ParameterMapping(gene.defaultParameters(),
                         List.of(SignalCoupling.of("s", new int[] {1}, new CouplingLaw.Linear(0.0, 2.0)))),
-                                new MorphogenSpec(400, 1.0, 2.0, 0.0, List.of(new SourceRegion(0, 0, 10, 40, 20.0)),
-                        MorphogenSpec.Solver.ADI), new Domain.Rectangle(300, 40), GrowthSpec.of(1200, CELL_DIAMETER / 2,
+                                MorphogenSpec.of(400, 1.0, 2.0, 0.0, List.of(new SourceRegion(0, 0, 10, 40, 20.0)))
+                                        .withSolver(MorphogenSpec.Solver.ADI), new Domain.Rectangle(300, 40),
+                                        GrowthSpec.of(1200, CELL_DIAMETER / 2,
                                 0.0, new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e6, 0),
                                 Partitioning.binomial()), new FateClassifier(List.of(new FateRule("high",
                                 new double[] {0.5}, new double[] {Double.NaN})), "low"), new Timing(30, 0.01, 1));

@@ -39,7 +39,7 @@ class SizeControlTest {
                 0.1), Partitioning.equal()).withAxis(GrowthSpec.DivisionAxis.RANDOM).withDeathRate(0).withDilution(true)
                 .withAdhesion(0).withSize(new CellSize(control, SPLIT_CV));
         TissueSpec spec = TissueSpec.of(new CircuitSetup(INERT, NoiseMode.NONE, 100, new double[] {1.0}),
-                new ParameterMapping(INERT.defaultParameters(), List.of()), new MorphogenSpec(0, 0, 100, 0, List.of()),
+                new ParameterMapping(INERT.defaultParameters(), List.of()), MorphogenSpec.of(0, 0, 100, 0, List.of()),
                 new Domain.Rectangle(2000, 2000), growth, new FateClassifier(List.of(new FateRule("any",
                 new double[] {Double.NaN}, new double[] {Double.NaN})),
                         "none"), new Timing(52, 0.05, 4.0));

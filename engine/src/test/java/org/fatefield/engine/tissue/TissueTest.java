@@ -33,7 +33,7 @@ class TissueTest {
                 new FateRule("b-high", new double[] {Double.NaN, 1.0}, new double[] {0.6, Double.NaN})),
                 "undecided");
         return TissueSpec.of(new CircuitSetup(SWITCH, NoiseMode.LANGEVIN, omega, initial),
-                new ParameterMapping(SWITCH.defaultParameters(), List.of()), new MorphogenSpec(0, 0, 50, 0, List.of()),
+                new ParameterMapping(SWITCH.defaultParameters(), List.of()), MorphogenSpec.of(0, 0, 50, 0, List.of()),
                 new Domain.Rectangle(1000, 1000), GrowthSpec.of(cells, 2.0, 0.0, cycle, Partitioning.binomial()), fates,
                 new Timing(duration, 0.01, 1.0));
     }

@@ -37,16 +37,23 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
     private final CSVPrinter printer;
     private final List<String> fates;
 
-    /** Starts streaming into {@code folder} for a run with these fate names. */
-    public LineageFiles(Path folder, List<String> fates) throws IOException {
-        this(folder, fates, -1);
+    /** Starts a new table in {@code folder} for a run with these fate names. */
+    public static LineageFiles start(Path folder, List<String> fates) throws IOException {
+        return new LineageFiles(folder, fates, -1);
     }
 
     /**
-     * Streams into {@code folder}; with {@code resumeAt >= 0}, continues a partial table cut back
-     * to {@code resumeAt} bytes (the length it had at the checkpoint being resumed).
+     * Continues the partial table in {@code folder}, cut back to {@code length} bytes (the
+     * length it had at the checkpoint being resumed).
      */
-    public LineageFiles(Path folder, List<String> fates, long resumeAt) throws IOException {
+    public static LineageFiles resume(Path folder, List<String> fates, long length) throws IOException {
+        if (length < 0) {
+            throw new IllegalArgumentException("a resumed lineage table has a length of at least 0, got " + length);
+        }
+        return new LineageFiles(folder, fates, length);
+    }
+
+    private LineageFiles(Path folder, List<String> fates, long resumeAt) throws IOException {
         this.folder = folder;
         this.partial = RunLayout.partial(folder.resolve(RunLayout.LINEAGE));
         this.fates = List.copyOf(fates);
@@ -93,7 +100,8 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
         Map<Long, String> label = new HashMap<>();
         Map<Long, Double> length = new HashMap<>();
         List<Long> roots = new ArrayList<>();
-        try (Reader in = Files.newBufferedReader(table, StandardCharsets.UTF_8); CSVParser parser = RunTables.parser(in)) {
+        try (Reader in = Files.newBufferedReader(table,
+                StandardCharsets.UTF_8); CSVParser parser = RunTables.parser(in)) {
             for (CSVRecord r : parser) {
                 long id = Long.parseLong(r.get("id"));
                 long parent = Long.parseLong(r.get("parent_id"));

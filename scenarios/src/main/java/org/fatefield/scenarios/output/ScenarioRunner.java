@@ -48,8 +48,9 @@ public final class ScenarioRunner {
         long startNanos = System.nanoTime();
         Tissue tissue = new Tissue(scenario.tissue(), seed, request.threads());
         RunFolder folder = RunFolder.open(out);
-        LineageFiles lineage = new LineageFiles(out, scenario.tissue().fates().fateNames(),
-                saved == null ? -1 : saved.lineageBytes());
+        List<String> fates = scenario.tissue().fates().fateNames();
+        LineageFiles lineage = saved == null ? LineageFiles.start(out, fates)
+                : LineageFiles.resume(out, fates, saved.lineageBytes());
         tissue.setLineageSink(lineage);
         tissue.start();
         if (saved != null) {
@@ -87,7 +88,8 @@ public final class ScenarioRunner {
         files.add(RunLayout.LINEAGE);
         folder.writeText(RunLayout.SCENARIO_COPY, w -> w.write(scenario.text()));
         files.add(RunLayout.SCENARIO_COPY);
-        folder.writeText(RunLayout.TREES, w -> LineageFiles.writeTrees(out.resolve(RunLayout.LINEAGE), tissue.time(), w));
+        folder.writeText(RunLayout.TREES, w -> LineageFiles.writeTrees(out.resolve(RunLayout.LINEAGE), tissue.time(),
+                w));
         files.add(RunLayout.TREES);
         files.addAll(RunMetrics.of(tissue).write(folder, tissue.series().fateNames(), seed,
                 scenario.tissue().growth().partition().mode().name().toLowerCase(Locale.ROOT)));
@@ -103,7 +105,8 @@ public final class ScenarioRunner {
         files.add(RunLayout.FATE_CHART_SVG);
         String tissueTitle = String.format(Locale.ROOT, "%s at t = %.1f h (%d cells)", title, tissue.time(),
                 tissue.cells().size());
-        folder.write(RunLayout.TISSUE_IMAGE, o -> ImageIO.write(TissueRenderer.render(tissue, tissueTitle, 900), "png", o));
+        folder.write(RunLayout.TISSUE_IMAGE, o -> ImageIO.write(TissueRenderer.render(tissue, tissueTitle, 900), "png",
+                o));
         files.add(RunLayout.TISSUE_IMAGE);
         double wall = (System.nanoTime() - startNanos) / 1e9;
         folder.writeText(RunLayout.PROVENANCE, w -> w.write(RunProvenance.json(scenario, seed, tissue, started, wall,

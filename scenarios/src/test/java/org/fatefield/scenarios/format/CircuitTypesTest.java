@@ -119,7 +119,8 @@ class CircuitTypesTest {
                 interaction = [[0, -1, 1], [-1, 0, 0], [1, 0, 0]]
                 basal = [0.05, 0.05, 0.02]
                 """;
-        Scenario s = read(demoWithCircuit(circuit).replace("parameter = \"repression\"", "parameter = \"Ark.max_rate\""));
+        Scenario s = read(demoWithCircuit(circuit).replace("parameter = \"repression\"",
+                "parameter = \"Ark.max_rate\""));
         ReactionNetwork network = s.tissue().circuit().network();
         assertTrue(network instanceof HillNetwork);
         assertEquals(List.of("Lum", "Ark", "Tov"), network.speciesNames());
@@ -156,7 +157,8 @@ class CircuitTypesTest {
     void toggleIsTheSwitchWithoutSelfActivation() throws ScenarioException {
         String demo = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8);
         String toggle = demo.replace("type = \"self-activating-switch\"", "type = \"toggle\"")
-                .replace("self_activation = 0.2\n", "").replace("self_threshold = 0.5\n", "").replace("self_hill = 4\n", "");
+                .replace("self_activation = 0.2\n", "").replace("self_threshold = 0.5\n", "").replace("self_hill = 4\n",
+                        "");
         ReactionNetwork network = read(toggle).tissue().circuit().network();
         assertEquals(0.0, network.defaultParameters()[network.parameterIndex("Lum.self_activation")], 0.0);
         ScenarioException e = assertThrows(ScenarioException.class,
@@ -181,8 +183,7 @@ class CircuitTypesTest {
         assertEquals("quench", s.tissue().others().get(0).name());
         assertEquals(1, s.tissue().mapping().couplings().get(1).field());
         assertEquals(0, s.tissue().others().get(0).exchange().secretingFate());
-        MorphogenField measured = new MorphogenField(
-                s.tissue().morphogen(), 600, 300);
+        MorphogenField measured = new MorphogenField(s.tissue().morphogen(), 600, 300, false);
         // Square 14 is centred at x = 145 µm: 3.0 + (0.5 - 3.0) * 145 / 300 by the table.
         assertEquals(3.0 - 2.5 * 145 / 300, measured.value(14, 3), 1e-12);
 

@@ -43,7 +43,7 @@ class MemoryLayoutTest {
         Files.createDirectories(dir);
         Tissue tissue = new Tissue(scenario.tissue(), 5, threads);
         tissue.setMemoryLayout(reorder, relocate);
-        try (LineageFiles lineage = new LineageFiles(dir, scenario.tissue().fates().fateNames())) {
+        try (LineageFiles lineage = LineageFiles.start(dir, scenario.tissue().fates().fateNames())) {
             tissue.setLineageSink(lineage);
             tissue.start();
             tissue.runToEnd();

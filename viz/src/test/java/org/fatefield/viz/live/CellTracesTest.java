@@ -14,7 +14,7 @@ import org.junit.jupiter.api.Test;
 class CellTracesTest {
 
     private static Cell cell(long id, long parent, double a, double b) {
-        return new Cell(id, parent, 0, 0, 10, new double[] {a, b}, new long[] {1L, 2L}, 0, 0);
+        return new Cell(id, parent, 0, 0, 10, new double[] {a, b}, new long[] {1L, 2L}, 0, 0, 1.0, 1.0);
     }
 
     @Test

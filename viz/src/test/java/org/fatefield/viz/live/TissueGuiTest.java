@@ -32,7 +32,7 @@ class TissueGuiTest {
         CustomNetwork decay = CustomNetwork.of(List.of("X"), List.of("k"), new double[] {1},
                 List.of(new CustomNetwork.ReactionDefinition("decay", new int[] {-1}, "k * X")));
         TissueSpec spec = TissueSpec.of(new CircuitSetup(decay, NoiseMode.NONE, 100, new double[] {1.0}),
-                new ParameterMapping(decay.defaultParameters(), List.of()), new MorphogenSpec(0, 0, 10, 0, List.of()),
+                new ParameterMapping(decay.defaultParameters(), List.of()), MorphogenSpec.of(0, 0, 10, 0, List.of()),
                 new Domain.Rectangle(200, 100), GrowthSpec.of(30, 4, 10,
                 new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 4, 0), Partitioning.equal()),
                 new FateClassifier(List.of(new FateRule("high", new double[] {0.5}, new double[] {Double.NaN})), "low"),
