@@ -2,6 +2,7 @@ package org.fatefield.engine.metrics;
 
 import java.util.List;
 import org.fatefield.engine.cell.Cell;
+import org.fatefield.engine.tissue.Tissue;
 
 /**
  * Fractions of each fate in bins along the gradient axis (x): the pattern a modeler reads off a
@@ -12,6 +13,17 @@ import org.fatefield.engine.cell.Cell;
  * @param fractions {@code fractions[f][b]}: fraction of bin b's cells in fate f (NaN for empty bins)
  */
 public record FateProfile(double[] centres, int[] counts, double[][] fractions) {
+
+    /**
+     * The profile of {@code tissue}'s live cells in bins about two cell diameters wide: the
+     * tissue width over {@code round(width / (4 r))} bins, at least 10 and at most 60, so a bin
+     * holds enough cells for a fraction and the boundary is still resolved.
+     */
+    public static FateProfile of(Tissue tissue) {
+        double width = tissue.spec().width();
+        int bins = (int) Math.max(10, Math.min(60, Math.round(width / (4 * tissue.spec().growth().cellRadius()))));
+        return of(tissue.cells(), tissue.spec().fates().fateCount(), width, bins);
+    }
 
     /**
      * Bins {@code [0, width)} into {@code bins} equal bins and counts each fate.

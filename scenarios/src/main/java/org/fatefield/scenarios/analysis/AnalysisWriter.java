@@ -15,6 +15,9 @@ import org.fatefield.circuits.analysis.continuation.FoldCurveContinuation.FoldCu
 import org.fatefield.circuits.analysis.continuation.FoldCurveContinuation.FoldPoint;
 import org.fatefield.circuits.analysis.continuation.SpecialPoint;
 import org.fatefield.circuits.model.ReactionNetwork;
+import org.fatefield.circuits.study.AnalysisPlan;
+import org.fatefield.circuits.study.AnalysisResult;
+import org.fatefield.circuits.study.CircuitAnalysis;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.output.RunTables;
 import org.fatefield.viz.analysis.BifurcationDiagramChart;

@@ -7,7 +7,7 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import javax.swing.SwingUtilities;
 import org.fatefield.engine.tissue.Tissue;
-import org.fatefield.scenarios.analysis.ControlCircuit;
+import org.fatefield.engine.control.ControlCircuit;
 import org.fatefield.scenarios.format.Overrides;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
@@ -55,7 +55,7 @@ final class ViewCommand implements Callable<Integer> {
     /** A window for {@code loaded} (not yet visible). */
     static TissueWindow open(Scenario loaded, long runSeed) {
         int threads = Runtime.getRuntime().availableProcessors();
-        ControlCircuit circuit = ControlCircuit.of(loaded, 60);
+        ControlCircuit circuit = ControlCircuit.of(loaded.tissue(), 60);
         return new TissueWindow("Fatefield: " + loaded.name(), settings -> new Tissue(variant(loaded, settings).tissue(),
                 runSeed, threads), circuit == null ? List.of() : circuit.branches(),
                 circuit == null ? "control" : circuit.parameter(), circuit == null ? null : circuit.landscape());

@@ -27,10 +27,8 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
 
     /** Computes the metrics of {@code tissue} at its end. */
     public static RunMetrics of(Tissue tissue) {
-        double width = tissue.spec().width();
-        int bins = (int) Math.max(10, Math.min(60, Math.round(width / (4 * tissue.spec().growth().cellRadius()))));
         int fates = tissue.spec().fates().fateCount();
-        return new RunMetrics(FateProfile.of(tissue.cells(), fates, width, bins),
+        return new RunMetrics(FateProfile.of(tissue),
                 LineageStatistics.of(tissue.cells(), tissue.ancestry(), fates),
                 PredictedBoundary.of(tissue.spec(), tissue.controlField()));
     }

@@ -12,7 +12,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.function.DoubleFunction;
 import org.fatefield.circuits.analysis.QuasiPotential;
-import org.fatefield.scenarios.analysis.ControlCircuit;
+import org.fatefield.engine.control.ControlCircuit;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.format.ScenarioReader;
@@ -126,7 +126,7 @@ public final class RunReport {
         } catch (ScenarioException e) {
             return List.of();
         }
-        ControlCircuit circuit = ControlCircuit.of(scenario, 40);
+        ControlCircuit circuit = ControlCircuit.of(scenario.tissue(), 40);
         if (circuit == null) {
             return List.of();
         }

@@ -1,4 +1,4 @@
-package org.fatefield.scenarios.robustness;
+package org.fatefield.engine.robustness;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 

@@ -1,4 +1,4 @@
-package org.fatefield.scenarios.analysis;
+package org.fatefield.circuits.study;
 
 import java.util.List;
 import org.fatefield.circuits.analysis.BasinMap;

@@ -1,4 +1,4 @@
-package org.fatefield.scenarios.robustness;
+package org.fatefield.engine.robustness;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -6,7 +6,6 @@ import org.fatefield.engine.metrics.FateProfile;
 import org.fatefield.engine.metrics.SampleSummary;
 import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.engine.tissue.TissueSpec;
-import org.fatefield.scenarios.output.RunMetrics;
 
 /**
  * How the pattern shifts when one quantity changes by a stated fraction f. Each perturbation is
@@ -69,7 +68,7 @@ public final class RobustnessAnalysis {
         tissue.runToEnd();
         tissue.finish();
         int fates = spec.fates().fateCount();
-        FateProfile profile = RunMetrics.of(tissue).profile();
+        FateProfile profile = FateProfile.of(tissue);
         double[] out = new double[3 * fates];
         for (int f = 0; f < fates; f++) {
             out[f] = profile.boundary(f);

@@ -1,4 +1,4 @@
-package org.fatefield.scenarios.robustness;
+package org.fatefield.engine.robustness;
 
 import java.util.ArrayList;
 import java.util.List;

@@ -1,4 +1,4 @@
-package org.fatefield.scenarios.analysis;
+package org.fatefield.circuits.study;
 
 /**
  * What {@code fatefield analyze} computes for one circuit.

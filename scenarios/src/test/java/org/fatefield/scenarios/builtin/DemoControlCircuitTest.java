@@ -1,4 +1,4 @@
-package org.fatefield.scenarios.analysis;
+package org.fatefield.scenarios.builtin;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 import org.fatefield.circuits.analysis.QuasiPotential;
 import org.fatefield.circuits.analysis.continuation.Branch;
 import org.fatefield.circuits.analysis.continuation.SpecialPoint;
-import org.fatefield.scenarios.builtin.BuiltinScenarios;
+import org.fatefield.engine.control.ControlCircuit;
 import org.fatefield.scenarios.format.ScenarioReader;
 import org.junit.jupiter.api.Test;
 
@@ -14,12 +14,12 @@ import org.junit.jupiter.api.Test;
  * The demo circuit along its control parameter: a symmetric toggle whose symmetric state loses
  * stability at a pitchfork, bistable from there to the top of the coupling's range.
  */
-class ControlCircuitTest {
+class DemoControlCircuitTest {
 
     @Test
     void mostMultistableValueIsTheMiddleOfTheBistableStretchAndItsWellsAreEquallyDeep() throws Exception {
         var scenario = ScenarioReader.parse("demo", "demo", BuiltinScenarios.bytes("demo").orElseThrow());
-        ControlCircuit circuit = ControlCircuit.of(scenario, 60);
+        ControlCircuit circuit = ControlCircuit.of(scenario.tissue(), 60);
         assertNotNull(circuit);
         double pitchfork = Double.NaN;
         for (Branch b : circuit.branches()) {

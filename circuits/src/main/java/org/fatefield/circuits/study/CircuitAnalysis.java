@@ -1,4 +1,4 @@
-package org.fatefield.scenarios.analysis;
+package org.fatefield.circuits.study;
 
 import java.util.ArrayList;
 import java.util.Arrays;

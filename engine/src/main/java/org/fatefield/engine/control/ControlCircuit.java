@@ -1,4 +1,4 @@
-package org.fatefield.scenarios.analysis;
+package org.fatefield.engine.control;
 
 import java.util.List;
 import java.util.function.DoubleFunction;
@@ -11,26 +11,26 @@ import org.fatefield.circuits.analysis.continuation.EquilibriumContinuation;
 import org.fatefield.circuits.analysis.continuation.NetworkSystem;
 import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.engine.tissue.CircuitSetup;
-import org.fatefield.scenarios.format.Scenario;
+import org.fatefield.engine.tissue.TissueSpec;
 
 /**
- * A scenario's circuit along the control parameter its morphogen sets (its first coupling), as
+ * A tissue's circuit along the control parameter its morphogen sets (its first coupling), as
  * the live view and the report show it: the steady-state branches over the range the coupling
  * can reach, the value where most stable states coexist, and the stationary landscape at any
- * value. Scenarios without a coupling have none of these.
+ * value. Tissues without a coupling have none of these.
  */
 public final class ControlCircuit {
 
     private static final int LANDSCAPE_BINS = 60;
 
-    private final Scenario scenario;
+    private final TissueSpec spec;
     private final SignalCoupling coupling;
     private final double lo;
     private final double hi;
     private final List<Branch> branches;
 
-    private ControlCircuit(Scenario scenario, SignalCoupling coupling, double lo, double hi, List<Branch> branches) {
-        this.scenario = scenario;
+    private ControlCircuit(TissueSpec spec, SignalCoupling coupling, double lo, double hi, List<Branch> branches) {
+        this.spec = spec;
         this.coupling = coupling;
         this.lo = lo;
         this.hi = hi;
@@ -38,26 +38,26 @@ public final class ControlCircuit {
     }
 
     /**
-     * The circuit of {@code scenario} along its control parameter, continued with at most
-     * {@code (max - min) / stepsAcross} per step; null when the scenario has no coupling or the
+     * The circuit of {@code spec} along its control parameter, continued with at most
+     * {@code (max - min) / stepsAcross} per step; null when the tissue has no coupling or the
      * coupling's range is a single value.
      */
-    public static ControlCircuit of(Scenario scenario, int stepsAcross) {
-        if (scenario.tissue().mapping().couplings().isEmpty()) {
+    public static ControlCircuit of(TissueSpec spec, int stepsAcross) {
+        if (spec.mapping().couplings().isEmpty()) {
             return null;
         }
-        SignalCoupling c = scenario.tissue().mapping().couplings().get(0);
+        SignalCoupling c = spec.mapping().couplings().get(0);
         double lo = c.law().range()[0];
         double hi = c.law().range()[1];
         if (!(hi > lo)) {
             return null;
         }
-        NetworkSystem system = new NetworkSystem(scenario.tissue().circuit().network(),
-                scenario.tissue().mapping().base(), c.parameterIndices());
+        NetworkSystem system = new NetworkSystem(spec.circuit().network(),
+                spec.mapping().base(), c.parameterIndices());
         List<Branch> branches = EquilibriumContinuation.of(system,
                 ContinuationSettings.defaults().withMaxStep((hi - lo) / stepsAcross))
-                .diagram(scenario.tissue().circuit().initialState(), lo, lo, hi, true, 2);
-        return new ControlCircuit(scenario, c, lo, hi, branches);
+                .diagram(spec.circuit().initialState(), lo, lo, hi, true, 2);
+        return new ControlCircuit(spec, c, lo, hi, branches);
     }
 
     /** The steady-state branches. */
@@ -120,7 +120,7 @@ public final class ControlCircuit {
      * well depths) over a square box holding every branch; null unless the circuit has two species.
      */
     public DoubleFunction<QuasiPotential> landscape() {
-        CircuitSetup circuit = scenario.tissue().circuit();
+        CircuitSetup circuit = spec.circuit();
         if (circuit.network().speciesCount() != 2) {
             return null;
         }
@@ -139,7 +139,7 @@ public final class ControlCircuit {
         upper[0] = Math.max(upper[0], upper[1]);
         upper[1] = upper[0];
         int[] indices = coupling.parameterIndices();
-        double[] base = scenario.tissue().mapping().base();
+        double[] base = spec.mapping().base();
         return value -> {
             double[] params = base.clone();
             for (int index : indices) {
