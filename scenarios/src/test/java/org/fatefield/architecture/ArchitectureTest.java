@@ -4,9 +4,13 @@ import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
 
+import com.tngtech.archunit.core.domain.JavaClass;
 import com.tngtech.archunit.core.domain.JavaClasses;
+import com.tngtech.archunit.core.domain.JavaPackage;
 import com.tngtech.archunit.core.importer.ClassFileImporter;
 import com.tngtech.archunit.core.importer.ImportOption;
+import java.util.ArrayList;
+import java.util.List;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
@@ -62,6 +66,18 @@ class ArchitectureTest {
         noClasses().that().resideOutsideOfPackages("org.fatefield.engine.tissue", "org.fatefield.engine.cell")
                 .should().dependOnClassesThat().haveFullyQualifiedName("org.fatefield.engine.cell.CellRandom")
                 .check(classes);
+    }
+
+    @Test
+    void everyPackageSaysWhatLivesThere() {
+        List<String> missing = new ArrayList<>();
+        for (JavaClass c : classes) {
+            JavaPackage p = c.getPackage();
+            if (p.tryGetPackageInfo().isEmpty() && !missing.contains(p.getName())) {
+                missing.add(p.getName());
+            }
+        }
+        assertTrue(missing.isEmpty(), "packages without a package-info.java: " + missing);
     }
 
     @Test

@@ -1,0 +1,4 @@
+/**
+ * Headless drawing of the tissue (PNG frames, animated GIF).
+ */
+package org.fatefield.viz.tissue;
