@@ -32,8 +32,6 @@ public final class OverlapRepulsion {
     private double[] sy = new double[0];
     private double[] sr = new double[0];
     private int[] slotOfCell = new int[0];
-    private int[] cellOfSlot = new int[0];
-    private long[] idOfSlot = new long[0];
     private int[] bucketOfCell = new int[0];
     private int[] bucketStart = new int[0];
     private int[] bucketFill = new int[0];
@@ -220,29 +218,32 @@ public final class OverlapRepulsion {
         }
         System.arraycopy(bucketStart, 0, bucketFill, 0, buckets);
         for (int i = 0; i < n; i++) {
-            int slot = bucketFill[bucketOfCell[i]]++;
-            slotOfCell[i] = slot;
-            cellOfSlot[slot] = i;
-            idOfSlot[slot] = population.get(i).id();
+            slotOfCell[i] = bucketFill[bucketOfCell[i]]++;
+        }
+        // The buckets are known now, so their array is reused for the inverse map, slot to cell.
+        int[] cellOfSlot = bucketOfCell;
+        for (int i = 0; i < n; i++) {
+            cellOfSlot[slotOfCell[i]] = i;
         }
         for (int b = 0; b < buckets; b++) {
-            sortBucketById(bucketStart[b], bucketStart[b + 1]);
+            sortBucketById(population, cellOfSlot, bucketStart[b], bucketStart[b + 1]);
         }
     }
 
-    /** Insertion sort of slots {@code [from, to)} by cell id, keeping {@link #slotOfCell} in step. */
-    private void sortBucketById(int from, int to) {
+    /**
+     * Insertion sort of slots {@code [from, to)} (one bucket, a few cells) by cell id, keeping
+     * {@link #slotOfCell} in step.
+     */
+    private void sortBucketById(CellPopulation population, int[] cellOfSlot, int from, int to) {
         for (int k = from + 1; k < to; k++) {
-            long id = idOfSlot[k];
             int cell = cellOfSlot[k];
+            long id = population.get(cell).id();
             int j = k - 1;
-            while (j >= from && idOfSlot[j] > id) {
-                idOfSlot[j + 1] = idOfSlot[j];
+            while (j >= from && population.get(cellOfSlot[j]).id() > id) {
                 cellOfSlot[j + 1] = cellOfSlot[j];
                 slotOfCell[cellOfSlot[j + 1]] = j + 1;
                 j--;
             }
-            idOfSlot[j + 1] = id;
             cellOfSlot[j + 1] = cell;
             slotOfCell[cell] = j + 1;
         }
@@ -260,8 +261,6 @@ public final class OverlapRepulsion {
             sy = new double[size];
             sr = new double[size];
             slotOfCell = new int[size];
-            cellOfSlot = new int[size];
-            idOfSlot = new long[size];
             bucketOfCell = new int[size];
         }
         if (largestVolumeOfWorker.length != workers) {
