@@ -1,13 +1,17 @@
 package org.fatefield.scenarios.cli;
 
 import java.awt.GraphicsEnvironment;
+import java.awt.event.WindowAdapter;
+import java.awt.event.WindowEvent;
+import java.lang.reflect.InvocationTargetException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
+import java.util.concurrent.CountDownLatch;
 import javax.swing.SwingUtilities;
-import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.engine.control.ControlCircuit;
+import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.scenarios.format.Overrides;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
@@ -47,12 +51,31 @@ final class ViewCommand implements Callable<Integer> {
         if (loaded == null) {
             return FatefieldCommand.INVALID_INPUT;
         }
-        TissueWindow window = open(loaded, seed.orElse(loaded.seed()));
-        SwingUtilities.invokeLater(() -> window.setVisible(true));
+        long runSeed = seed.orElse(loaded.seed());
+        CountDownLatch closed = new CountDownLatch(1);
+        try {
+            SwingUtilities.invokeAndWait(() -> {
+                TissueWindow window = open(loaded, runSeed);
+                window.addWindowListener(new WindowAdapter() {
+                    @Override
+                    public void windowClosed(WindowEvent e) {
+                        closed.countDown();
+                    }
+                });
+                window.setVisible(true);
+            });
+            // The command lasts as long as the window: main exits when it returns.
+            closed.await();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        } catch (InvocationTargetException e) {
+            spec.commandLine().getErr().println("the live window could not be opened: " + e.getCause());
+            return FatefieldCommand.OUTPUT_ERROR;
+        }
         return 0;
     }
 
-    /** A window for {@code loaded} (not yet visible). */
+    /** A window for {@code loaded} (not yet visible); call on the event dispatch thread. */
     static TissueWindow open(Scenario loaded, long runSeed) {
         int threads = Runtime.getRuntime().availableProcessors();
         ControlCircuit circuit = ControlCircuit.of(loaded.tissue(), 60);

@@ -49,6 +49,13 @@ public final class FateProportionChart {
         population.addSeries(cells);
 
         NumberAxis time = new NumberAxis("time (h)");
+        double last = series.rows().isEmpty() ? 0 : series.rows().get(series.rows().size() - 1).time();
+        if (last > 0) {
+            time.setRange(0, last);
+        } else {
+            // Before the first step there is one point, at t = 0: one hour of axis, not ticks of 1e-9 h.
+            time.setRange(0, 1);
+        }
         NumberAxis fraction = new NumberAxis("fraction of cells");
         fraction.setRange(0.0, 1.0);
         XYLineAndShapeRenderer fateLines = new XYLineAndShapeRenderer(true, false);

@@ -6,8 +6,12 @@ import java.awt.Dimension;
 import java.awt.GridLayout;
 import java.awt.event.ComponentAdapter;
 import java.awt.event.ComponentEvent;
+import java.awt.event.InputEvent;
+import java.awt.event.KeyEvent;
 import java.awt.event.MouseAdapter;
 import java.awt.event.MouseEvent;
+import java.awt.event.WindowAdapter;
+import java.awt.event.WindowEvent;
 import java.awt.geom.Point2D;
 import java.util.List;
 import java.util.Locale;
@@ -17,6 +21,7 @@ import javax.swing.BorderFactory;
 import javax.swing.JButton;
 import javax.swing.JCheckBox;
 import javax.swing.JComboBox;
+import javax.swing.JComponent;
 import javax.swing.JFrame;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
@@ -24,6 +29,7 @@ import javax.swing.JSlider;
 import javax.swing.JTextArea;
 import javax.swing.JTextField;
 import javax.swing.JToggleButton;
+import javax.swing.KeyStroke;
 import javax.swing.ScrollPaneConstants;
 import javax.swing.SwingUtilities;
 import javax.swing.Timer;
@@ -92,6 +98,15 @@ public final class TissueWindow extends JFrame {
         this.parameter = parameter;
         this.landscape = landscape;
         setDefaultCloseOperation(DISPOSE_ON_CLOSE);
+        addWindowListener(new WindowAdapter() {
+            @Override
+            public void windowClosed(WindowEvent e) {
+                timer.stop();
+                if (gui != null) {
+                    gui.finish();
+                }
+            }
+        });
         timer = new Timer(30, e -> advance(speed.getValue()));
         JToggleButton play = new JToggleButton("Play");
         play.addActionListener(e -> {
@@ -107,6 +122,11 @@ public final class TissueWindow extends JFrame {
         step.addActionListener(e -> advance(1));
         JButton reset = new JButton("Reset");
         reset.addActionListener(e -> reset());
+        JButton quit = new JButton("Quit");
+        quit.setToolTipText("close the window and end the program (Ctrl+Q)");
+        quit.addActionListener(e -> close());
+        getRootPane().registerKeyboardAction(e -> close(),
+                KeyStroke.getKeyStroke(KeyEvent.VK_Q, InputEvent.CTRL_DOWN_MASK), JComponent.WHEN_IN_FOCUSED_WINDOW);
         colour.addActionListener(e -> {
             gui.setMode((TissueGui.ColourMode) colour.getSelectedItem());
             display.repaint();
@@ -116,6 +136,7 @@ public final class TissueWindow extends JFrame {
         controls.add(play);
         controls.add(step);
         controls.add(reset);
+        controls.add(quit);
         controls.add(new JLabel("speed"));
         controls.add(speed);
         controls.add(new JLabel("zoom"));
@@ -244,6 +265,12 @@ public final class TissueWindow extends JFrame {
         display.attach(gui.field(), "morphogen", showField.isSelected());
         display.attach(gui.cells(), "cells");
         display.repaint();
+    }
+
+    /** Stops the clock and closes the window, as its close button does (the view command then ends). */
+    public void close() {
+        timer.stop();
+        dispatchEvent(new WindowEvent(this, WindowEvent.WINDOW_CLOSING));
     }
 
     /** Advances the tissue by {@code steps} steps and refreshes the view. */
