@@ -39,8 +39,8 @@ public final class ControlCircuit {
 
     /**
      * The circuit of {@code spec} along its control parameter, continued with at most
-     * {@code (max - min) / stepsAcross} per step; null when the tissue has no coupling or the
-     * coupling's range is a single value.
+     * {@code (max - min) / stepsAcross} per step; null when the tissue has no coupling, the
+     * coupling's range is a single value, or the circuit has no steady state to continue over it.
      */
     public static ControlCircuit of(TissueSpec spec, int stepsAcross) {
         if (spec.mapping().couplings().isEmpty()) {
@@ -54,9 +54,15 @@ public final class ControlCircuit {
         }
         NetworkSystem system = new NetworkSystem(spec.circuit().network(),
                 spec.mapping().base(), c.parameterIndices());
-        List<Branch> branches = EquilibriumContinuation.of(system,
-                ContinuationSettings.defaults().withMaxStep((hi - lo) / stepsAcross))
-                .diagram(spec.circuit().initialState(), lo, lo, hi, true, 2);
+        List<Branch> branches;
+        try {
+            branches = EquilibriumContinuation.of(system,
+                    ContinuationSettings.defaults().withMaxStep((hi - lo) / stepsAcross))
+                    .diagram(spec.circuit().initialState(), lo, lo, hi, true, 2);
+        } catch (IllegalArgumentException | IllegalStateException e) {
+            // No steady state to continue over the range (a pure integrator has none): nothing to show.
+            return null;
+        }
         return new ControlCircuit(spec, c, lo, hi, branches);
     }
 

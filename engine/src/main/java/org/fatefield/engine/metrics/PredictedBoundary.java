@@ -20,13 +20,24 @@ import org.fatefield.engine.tissue.TissueSpec;
  *
  * @param criticalValues control-parameter values of the circuit's folds and branch points
  * @param positions      positions along x (µm) where the local control parameter crosses them (NaN if it does not)
+ * @param undefined      why there is no prediction (no coupling, or no steady state to continue), or
+ *                       empty when the lists above are the prediction
  */
-public record PredictedBoundary(double[] criticalValues, double[] positions) {
+public record PredictedBoundary(double[] criticalValues, double[] positions, String undefined) {
 
-    /** Computes the prediction for the tissue of {@code spec} with morphogen {@code field}. */
+    /** No prediction, for the reason given. */
+    public static PredictedBoundary undefined(String reason) {
+        return new PredictedBoundary(new double[0], new double[0], reason);
+    }
+
+    /**
+     * Computes the prediction for the tissue of {@code spec} with morphogen {@code field}; a
+     * circuit whose steady states cannot be continued over the tissue's control range (a pure
+     * integrator has none) gives an undefined prediction that says why, never an error.
+     */
     public static PredictedBoundary of(TissueSpec spec, MorphogenField field) {
         if (spec.mapping().couplings().isEmpty()) {
-            return new PredictedBoundary(new double[0], new double[0]);
+            return undefined("the scenario couples no parameter to a field");
         }
         SignalCoupling coupling = spec.mapping().couplings().get(0);
         double[] control = new double[field.columns()];
@@ -46,9 +57,15 @@ public record PredictedBoundary(double[] criticalValues, double[] positions) {
         hi += margin;
         NetworkSystem system = new NetworkSystem(spec.circuit().network(), spec.mapping().base(),
                 coupling.parameterIndices());
-        List<Branch> branches = EquilibriumContinuation.of(system,
-                ContinuationSettings.defaults().withMaxStep(Math.max(1e-3, (hi - lo) / 40)))
-                .diagram(spec.circuit().initialState(), lo, lo, hi, true, 2);
+        List<Branch> branches;
+        try {
+            branches = EquilibriumContinuation.of(system,
+                    ContinuationSettings.defaults().withMaxStep(Math.max(1e-3, (hi - lo) / 40)))
+                    .diagram(spec.circuit().initialState(), lo, lo, hi, true, 2);
+        } catch (IllegalArgumentException | IllegalStateException e) {
+            return undefined("the circuit's steady states could not be continued over the control range ["
+                    + lo + ", " + hi + "]: " + e.getMessage());
+        }
         List<Double> critical = new ArrayList<>();
         for (Branch b : branches) {
             for (SpecialPoint s : b.specials()) {
@@ -71,6 +88,6 @@ public record PredictedBoundary(double[] criticalValues, double[] positions) {
                 }
             }
         }
-        return new PredictedBoundary(values, positions);
+        return new PredictedBoundary(values, positions, "");
     }
 }

@@ -131,7 +131,8 @@ public final class AnalysisWriter {
         });
         List<String> special = new ArrayList<>(List.of("branch", "type", plan.parameter()));
         special.addAll(species);
-        special.addAll(List.of("frequency", "eigenvalues"));
+        // The imaginary part of the critical eigenvalue pair at a Hopf point: an angular frequency.
+        special.addAll(List.of("frequency_rad_per_h", "eigenvalues"));
         table("special-points.csv", special, rows -> {
             for (Branch b : branches) {
                 for (SpecialPoint s : b.specials()) {

@@ -24,6 +24,8 @@ public final class FatefieldCommand implements Runnable {
     static final int INVALID_INPUT = 1;
     /** Exit code when output cannot be written. */
     static final int OUTPUT_ERROR = 3;
+    /** Exit code of a fault in Fatefield itself (an exception no command expected). */
+    static final int INTERNAL_ERROR = 4;
 
     @Override
     public void run() {
@@ -32,12 +34,33 @@ public final class FatefieldCommand implements Runnable {
 
     /** Runs the command line on the standard streams and returns its exit code. */
     public static int execute(String... args) {
-        return new CommandLine(new FatefieldCommand()).execute(args);
+        return commandLine().execute(args);
     }
 
     /** Runs the command line with its output and errors sent to the given writers. */
     public static int execute(PrintWriter out, PrintWriter err, String... args) {
-        return new CommandLine(new FatefieldCommand()).setOut(out).setErr(err).execute(args);
+        return commandLine().setOut(out).setErr(err).execute(args);
+    }
+
+    /**
+     * The command line, with a handler that turns an unexpected exception into one line saying
+     * what failed (no stack trace reaches a user unless FATEFIELD_DEBUG=1).
+     */
+    private static CommandLine commandLine() {
+        CommandLine line = new CommandLine(new FatefieldCommand());
+        line.setExecutionExceptionHandler((e, command, parsed) -> {
+            PrintWriter err = command.getErr();
+            err.println("fatefield " + command.getCommandName() + " failed: " + e.getClass().getSimpleName()
+                    + (e.getMessage() == null ? "" : ": " + e.getMessage()));
+            err.println("This is a fault in Fatefield, not in your input; please report it with the scenario and the"
+                    + " command line. Files already finished in the output folder are kept.");
+            if ("1".equals(System.getenv("FATEFIELD_DEBUG"))) {
+                e.printStackTrace(err);
+            }
+            err.flush();
+            return INTERNAL_ERROR;
+        });
+        return line;
     }
 
     /** Entry point. */

@@ -97,6 +97,8 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
             predicted.add(p);
         }
         root.add("predicted_boundaries", predicted);
+        root.addProperty("predicted_boundaries_undefined", this.predicted.undefined().isEmpty() ? null
+                : this.predicted.undefined());
         root.addProperty("sister_fate_agreement", JsonFiles.finite(lineage.sisterAgreement()));
         JsonObject related = new JsonObject();
         lineage.sameFate().forEach((d, v) -> related.addProperty(Integer.toString(d), JsonFiles.finite(v)));

@@ -91,12 +91,12 @@ public final class ScenarioRunner {
         folder.writeText(RunLayout.TREES, w -> LineageFiles.writeTrees(out.resolve(RunLayout.LINEAGE), tissue.time(),
                 w));
         files.add(RunLayout.TREES);
-        files.addAll(RunMetrics.of(tissue).write(folder, tissue.series().fateNames(), seed,
-                scenario.tissue().growth().partition().mode().name().toLowerCase(Locale.ROOT)));
         folder.writeText(RunLayout.TIMESERIES, w -> RunTables.writeTimeSeries(tissue.series(), w));
         files.add(RunLayout.TIMESERIES);
         folder.writeText(RunLayout.CELLS, w -> RunTables.writeCells(tissue, w));
         files.add(RunLayout.CELLS);
+        files.addAll(RunMetrics.of(tissue).write(folder, tissue.series().fateNames(), seed,
+                scenario.tissue().growth().partition().mode().name().toLowerCase(Locale.ROOT)));
         String title = scenario.name() + ", seed " + seed;
         var proportions = FateProportionChart.create(tissue.series(), "Fate proportions: " + title);
         folder.write(RunLayout.FATE_CHART, o -> ChartFiles.png(proportions, 960, 560, o));

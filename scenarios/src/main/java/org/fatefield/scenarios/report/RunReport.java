@@ -82,6 +82,10 @@ public final class RunReport {
             predicted.add(List.of(text(p.get("critical_control_value")), text(p.get("position_um"))));
         }
         page.table(List.of("critical control value (fold or branch point)", "predicted position (µm)"), predicted);
+        JsonElement undefined = metrics.get("predicted_boundaries_undefined");
+        if (undefined != null && !undefined.isJsonNull()) {
+            page.paragraph("No boundary is predicted: " + undefined.getAsString() + ".");
+        }
         page.heading("Lineages");
         List<List<String>> related = new ArrayList<>();
         for (Map.Entry<String, JsonElement> e : metrics.getAsJsonObject("same_fate_by_lineage_distance").entrySet()) {

@@ -177,4 +177,26 @@ class RunCommandTest {
             assertTrue(!Files.exists(Path.of(args[args.length - 1])), "nothing created for " + String.join(" ", args));
         }
     }
+
+    @Test
+    void aCircuitWithoutSteadyStatesRunsToItsTablesWithTheMetricsItCannotComputeMarkedUndefined()
+            throws IOException {
+        // dX/dt = k > 0 has no steady state (a pure integrator), so no boundary can be predicted.
+        Path scenario = tmp.resolve("integrator.toml");
+        try (var in = RunCommandTest.class.getResourceAsStream("/integrator.toml")) {
+            Files.write(scenario, in.readAllBytes());
+        }
+        Path out = tmp.resolve("integrator-run");
+        Outcome run = fatefield("run", scenario.toString(), "--out", out.toString(), "--quiet");
+        assertEquals(0, run.code(), run.err());
+        for (String file : List.of("cells.csv", "timeseries.csv", "lineage.csv", "metrics.json", "run.json")) {
+            assertTrue(Files.exists(out.resolve(file)), file + " written");
+        }
+        String metrics = Files.readString(out.resolve("metrics.json"));
+        assertTrue(metrics.contains("\"predicted_boundaries\": []"), metrics);
+        assertTrue(metrics.contains("no steady state"), metrics);
+        Outcome report = fatefield("report", out.toString());
+        assertEquals(0, report.code(), report.err());
+        assertTrue(Files.readString(out.resolve("report.html")).contains("No boundary is predicted"));
+    }
 }

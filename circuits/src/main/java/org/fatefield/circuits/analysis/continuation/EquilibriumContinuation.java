@@ -70,11 +70,24 @@ public final class EquilibriumContinuation {
             throw new IllegalArgumentException("no steady state converged from the start point at parameter "
                     + lambda0 + "; start closer to a steady state");
         }
+        double span = lambdaMax - lambdaMin;
+        if (!(y[n] >= lambdaMin - 1e-9 * span && y[n] <= lambdaMax + 1e-9 * span)) {
+            throw new IllegalArgumentException("the circuit has no steady state near its start for the parameter in ["
+                    + lambdaMin + ", " + lambdaMax + "]: the nearest one found is at " + y[n]);
+        }
         List<Branch> branches = new ArrayList<>();
         List<Crossing> crossings = new ArrayList<>();
-        double[] up = new double[n + 1];
-        up[n] = 1.0;
-        double[] tangent = arclength.tangent(y, up);
+        double[] tangent = null;
+        // Orient along the parameter first; where the branch is vertical in it, along a state component.
+        for (int axis = n; axis >= 0 && tangent == null; axis--) {
+            double[] along = new double[n + 1];
+            along[axis] = 1.0;
+            tangent = arclength.tangent(y, along);
+        }
+        if (tangent == null) {
+            throw new IllegalArgumentException("the steady states through " + Arrays.toString(y) + " do not form a"
+                    + " curve that can be continued (the Jacobian is singular in every direction there)");
+        }
         branches.add(joinBothWays(y, tangent, lambdaMin, lambdaMax, 0, crossings));
         List<Crossing> pending = new ArrayList<>(crossings);
         List<double[]> visited = new ArrayList<>();
