@@ -6,13 +6,14 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.fatefield.circuits.model.ReactionNetwork;
-import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.circuits.study.AnalysisPlan;
 import org.fatefield.circuits.study.AnalysisResult;
-import org.fatefield.scenarios.analysis.AnalysisWriter;
 import org.fatefield.circuits.study.CircuitAnalysis;
+import org.fatefield.engine.coupling.SignalCoupling;
+import org.fatefield.scenarios.analysis.AnalysisWriter;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.output.RunFolder;
+import org.fatefield.scenarios.output.RunLayout;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -96,7 +97,7 @@ final class AnalyzeCommand implements Callable<Integer> {
             return FatefieldCommand.INVALID_INPUT;
         }
         ReactionNetwork network = loaded.tissue().circuit().network();
-        Path folder = out.orElse(Path.of(loaded.name() + "-analysis"));
+        Path folder = out.orElse(RunLayout.defaultFolder(loaded.name(), "-analysis"));
         try {
             RunFolder.checkUsable(folder, force.given());
             CircuitAnalysis analysis = new CircuitAnalysis(network, loaded.tissue().mapping().base(), plan);

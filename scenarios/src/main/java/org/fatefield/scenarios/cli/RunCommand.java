@@ -10,13 +10,14 @@ import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.output.Progress;
+import org.fatefield.scenarios.output.RunLayout;
 import org.fatefield.scenarios.output.RunRequest;
 import org.fatefield.scenarios.output.ScenarioRunner;
-import picocli.CommandLine;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
+import picocli.CommandLine;
 
 /** {@code fatefield run}: simulate a scenario and write its run folder. */
 @Command(name = "run", mixinStandardHelpOptions = true,
@@ -70,7 +71,7 @@ final class RunCommand implements Callable<Integer> {
             return FatefieldCommand.INVALID_INPUT;
         }
         long runSeed = seed.orElse(loaded.seed());
-        Path folder = out.orElse(Path.of(loaded.name() + "-seed" + runSeed));
+        Path folder = out.orElse(RunLayout.defaultFolder(loaded.name(), "-seed" + runSeed));
         Progress progress = quiet ? Progress.silent()
                 : Progress.forConsole(loaded.name(), loaded.tissue().timing().totalSteps(), System.err);
         try {

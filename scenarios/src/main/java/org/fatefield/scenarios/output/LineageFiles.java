@@ -2,6 +2,7 @@ package org.fatefield.scenarios.output;
 
 import java.io.BufferedWriter;
 import java.io.IOException;
+import java.io.InputStream;
 import java.io.Reader;
 import java.io.UncheckedIOException;
 import java.io.Writer;
@@ -17,6 +18,7 @@ import java.util.Deque;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.zip.CRC32;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVPrinter;
 import org.apache.commons.csv.CSVRecord;
@@ -44,13 +46,51 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
 
     /**
      * Continues the partial table in {@code folder}, cut back to {@code length} bytes (the
-     * length it had at the checkpoint being resumed).
+     * length it had at the checkpoint being resumed), after checking that its first
+     * {@code length} bytes are those the checkpoint saw ({@code crc}, a CRC-32 of them). A table
+     * already renamed into place (a run killed while writing its results) is taken back.
+     *
+     * @throws IOException saying the folder is damaged if the table is missing, shorter than the
+     *                     checkpoint's or altered, so that a resumed run never silently loses rows
      */
-    public static LineageFiles resume(Path folder, List<String> fates, long length) throws IOException {
-        if (length < 0) {
-            throw new IllegalArgumentException("a resumed lineage table has a length of at least 0, got " + length);
+    public static LineageFiles resume(Path folder, List<String> fates, long length, long crc) throws IOException {
+        Path partial = RunLayout.partial(folder.resolve(RunLayout.LINEAGE));
+        Path complete = folder.resolve(RunLayout.LINEAGE);
+        if (!Files.exists(partial) && Files.exists(complete)) {
+            Files.move(complete, partial);
+        }
+        String damaged = "cannot resume from the checkpoint in " + folder + ": the lineage table ";
+        String fix = "; the folder was changed since the checkpoint was written, start the run again"
+                + " (without --resume, with --force)";
+        if (!Files.exists(partial)) {
+            throw new IOException(damaged + "(" + partial.getFileName() + ") is missing" + fix);
+        }
+        long size = Files.size(partial);
+        if (size < length) {
+            throw new IOException(damaged + "holds " + size + " bytes but held " + length + " at the checkpoint" + fix);
+        }
+        if (prefixCrc(partial, length) != crc) {
+            throw new IOException(damaged + "does not hold the rows it held at the checkpoint" + fix);
         }
         return new LineageFiles(folder, fates, length);
+    }
+
+    /** The CRC-32 of the first {@code length} bytes of {@code file}. */
+    static long prefixCrc(Path file, long length) throws IOException {
+        CRC32 crc = new CRC32();
+        byte[] buffer = new byte[1 << 16];
+        try (InputStream in = Files.newInputStream(file)) {
+            long left = length;
+            while (left > 0) {
+                int read = in.read(buffer, 0, (int) Math.min(buffer.length, left));
+                if (read < 0) {
+                    break;
+                }
+                crc.update(buffer, 0, read);
+                left -= read;
+            }
+        }
+        return crc.getValue();
     }
 
     private LineageFiles(Path folder, List<String> fates, long resumeAt) throws IOException {
@@ -75,6 +115,12 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
     public long flushedLength() throws IOException {
         printer.flush();
         return Files.size(partial);
+    }
+
+    /** The CRC-32 of the first {@code length} bytes of the partial table (for checkpoints). */
+    public long flushedCrc(long length) throws IOException {
+        printer.flush();
+        return prefixCrc(partial, length);
     }
 
     @Override

@@ -1,14 +1,19 @@
 package org.fatefield.scenarios.output;
 
+import java.io.Closeable;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.io.OutputStreamWriter;
 import java.io.Writer;
+import java.nio.channels.FileChannel;
+import java.nio.channels.FileLock;
+import java.nio.channels.OverlappingFileLockException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
 import java.util.stream.Stream;
 
 /**
@@ -67,6 +72,34 @@ public final class RunFolder {
     /** The folder. */
     public Path path() {
         return path;
+    }
+
+    /**
+     * Takes the folder for one run: an exclusive lock on its lock file, released (and the file
+     * removed) by closing what this returns.
+     *
+     * @throws IOException saying so if another run (in this or another process) holds the folder
+     */
+    public Closeable lock() throws IOException {
+        Path file = path.resolve(RunLayout.LOCK);
+        FileChannel channel = FileChannel.open(file, StandardOpenOption.CREATE, StandardOpenOption.WRITE);
+        FileLock lock;
+        try {
+            lock = channel.tryLock();
+        } catch (OverlappingFileLockException e) {
+            lock = null;
+        }
+        if (lock == null) {
+            channel.close();
+            throw new IOException("another Fatefield run is writing into " + path + "; wait for it to finish, or"
+                    + " choose another --out");
+        }
+        FileLock held = lock;
+        return () -> {
+            held.release();
+            channel.close();
+            Files.deleteIfExists(file);
+        };
     }
 
     /** Writes {@code name} atomically: to a temporary file first, then renamed over the target. */

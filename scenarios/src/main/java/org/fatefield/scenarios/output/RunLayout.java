@@ -42,6 +42,8 @@ public final class RunLayout {
     public static final String PROVENANCE = "run.json";
     /** The run's state for --resume, deleted when the run finishes. */
     public static final String CHECKPOINT = "checkpoint.bin";
+    /** Held (locked) while a run writes into its folder, so a second run cannot write there too. */
+    public static final String LOCK = ".fatefield.lock";
     /** The offline HTML report. */
     public static final String REPORT = "report.html";
     /** A replicate set's table of runs. */
@@ -58,6 +60,17 @@ public final class RunLayout {
      */
     public static Path partial(Path target) {
         return target.resolveSibling("." + target.getFileName() + ".partial");
+    }
+
+    /**
+     * The folder a command writes to without {@code --out}: {@code <name><suffix>} in the current
+     * folder, the scenario's name reduced to letters, digits, '.', '_' and '-' (a scenario file
+     * is untrusted: its name can never choose a folder elsewhere, such as {@code ../../x} or an
+     * absolute path).
+     */
+    public static Path defaultFolder(String scenarioName, String suffix) {
+        String safe = scenarioName.replaceAll("[^A-Za-z0-9._-]", "_").replaceAll("^[.]+", "");
+        return Path.of((safe.isEmpty() ? "scenario" : safe) + suffix);
     }
 
     /** The folder of the replicate run with {@code seed} in a replicate set. */

@@ -1,7 +1,9 @@
 package org.fatefield.scenarios.output;
 
+import java.io.Closeable;
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.ArrayList;
@@ -36,25 +38,34 @@ public final class ScenarioRunner {
      * @throws IOException if the folder may not be used or a file cannot be written
      */
     public static Tissue run(RunRequest request) throws IOException {
+        if (!request.resume()) {
+            RunFolder.checkUsable(request.out(), request.force());
+        } else if (!Files.isDirectory(request.out())) {
+            throw new IOException("nothing to resume: " + request.out() + " is not a folder");
+        }
+        RunFolder folder = RunFolder.open(request.out());
+        try (Closeable held = folder.lock()) {
+            return run(request, folder);
+        }
+    }
+
+    /** The run, in a folder this process holds. */
+    private static Tissue run(RunRequest request, RunFolder folder) throws IOException {
         Scenario scenario = request.scenario();
         Path out = request.out();
         long seed = request.seed();
         Checkpoints checkpoints = new Checkpoints(out, scenario, seed);
         Checkpoints.Saved saved = request.resume() ? checkpoints.load() : null;
-        if (!request.resume()) {
-            RunFolder.checkUsable(out, request.force());
-        }
         Instant started = Instant.now();
         long startNanos = System.nanoTime();
         Tissue tissue = new Tissue(scenario.tissue(), seed, request.threads());
-        RunFolder folder = RunFolder.open(out);
         List<String> fates = scenario.tissue().fates().fateNames();
         LineageFiles lineage = saved == null ? LineageFiles.start(out, fates)
-                : LineageFiles.resume(out, fates, saved.lineageBytes());
+                : LineageFiles.resume(out, fates, saved.lineageBytes(), saved.lineageCrc());
         tissue.setLineageSink(lineage);
         tissue.start();
         if (saved != null) {
-            saved.restoreInto(tissue);
+            saved.restoreInto(tissue, out.resolve(RunLayout.CHECKPOINT));
         }
         long total = scenario.tissue().timing().totalSteps();
         Frames frames = new Frames(out, scenario.name() + ", seed " + seed);
@@ -69,7 +80,8 @@ public final class ScenarioRunner {
         if (request.checkpointSteps() > 0) {
             tissue.addObserver(TissueObserver.every(request.checkpointSteps(), unchecked(t -> {
                 if (!t.finished()) {
-                    checkpoints.save(t, lineage.flushedLength());
+                    long length = lineage.flushedLength();
+                    checkpoints.save(t, length, lineage.flushedCrc(length));
                 }
             })));
         }

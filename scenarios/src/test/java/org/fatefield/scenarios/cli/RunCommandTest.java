@@ -9,6 +9,8 @@ import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.List;
 import org.fatefield.scenarios.builtin.BuiltinScenarios;
+import org.fatefield.scenarios.output.RunFolder;
+import org.fatefield.scenarios.output.RunLayout;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
@@ -138,6 +140,9 @@ class RunCommandTest {
         process.destroyForcibly().waitFor();
         assertTrue(Files.exists(checkpoint), "the run was killed after its first checkpoint");
         assertFalse(Files.exists(killed.resolve("run.json")), "the killed run did not finish");
+        refusesDamagedFolders(scenario, killed);
+        // A kill while the results were being written leaves the table renamed into place: still resumable.
+        Files.move(killed.resolve(".lineage.csv.partial"), killed.resolve("lineage.csv"));
 
         Outcome resumed = fatefield("run", scenario.toString(), "--out", killed.toString(), "--seed", "3", "--quiet",
                 "--resume");
@@ -149,6 +154,62 @@ class RunCommandTest {
         Outcome nothing = fatefield("run", scenario.toString(), "--out", tmp.resolve("empty").toString(), "--resume");
         assertEquals(FatefieldCommand.OUTPUT_ERROR, nothing.code());
         assertTrue(nothing.err().contains("nothing to resume"), nothing.err());
+    }
+
+    /**
+     * Copies of a killed run's folder with the checkpoint cut short, a byte of it flipped, or the
+     * lineage table cut short: each resume is refused with a message, and nothing is written.
+     */
+    private void refusesDamagedFolders(Path scenario, Path killed) throws IOException {
+        byte[] checkpoint = Files.readAllBytes(killed.resolve("checkpoint.bin"));
+        byte[] flipped = checkpoint.clone();
+        flipped[flipped.length / 2] ^= 0x10;
+        Path lineage = killed.resolve(".lineage.csv.partial");
+        byte[] rows = Files.readAllBytes(lineage);
+        String[][] damages = {{"checkpoint.bin", "cut"}, {"checkpoint.bin", "flip"}, {".lineage.csv.partial", "cut"}};
+        for (String[] damage : damages) {
+            Path copy = tmp.resolve("damaged-" + damage[0] + "-" + damage[1]);
+            Files.createDirectories(copy);
+            try (var files = Files.list(killed)) {
+                for (Path f : files.toList()) {
+                    Files.copy(f, copy.resolve(f.getFileName()));
+                }
+            }
+            byte[] original = damage[0].equals("checkpoint.bin") ? checkpoint : rows;
+            byte[] bad = damage[1].equals("flip") ? flipped : Arrays.copyOf(original, original.length / 3);
+            Files.write(copy.resolve(damage[0]), bad);
+            Outcome resumed = fatefield("run", scenario.toString(), "--out", copy.toString(), "--seed", "3", "--quiet",
+                    "--resume");
+            assertEquals(FatefieldCommand.OUTPUT_ERROR, resumed.code(), damage[0] + " " + damage[1] + ": "
+                    + resumed.err());
+            assertTrue(resumed.err().contains("start the run again"), resumed.err());
+            assertFalse(resumed.err().contains("Exception"), "a message, not a stack trace: " + resumed.err());
+            assertFalse(Files.exists(copy.resolve("run.json")), "nothing finished from a damaged folder");
+        }
+    }
+
+    @Test
+    void aSecondRunCannotWriteIntoAFolderARunHolds() throws IOException {
+        Path scenario = shortDemo();
+        Path out = tmp.resolve("held");
+        Files.createDirectories(out);
+        try (var held = RunFolder.open(out).lock()) {
+            Outcome second = fatefield("run", scenario.toString(), "--out", out.toString(), "--force", "--quiet");
+            assertEquals(FatefieldCommand.OUTPUT_ERROR, second.code(), second.err());
+            assertTrue(second.err().contains("another Fatefield run is writing into"), second.err());
+            assertFalse(Files.exists(out.resolve("lineage.csv")) || Files.exists(out.resolve(".lineage.csv.partial")),
+                    "the second run wrote nothing");
+        }
+        assertEquals(0, fatefield("run", scenario.toString(), "--out", out.toString(), "--force", "--quiet").code());
+        assertFalse(Files.exists(out.resolve(".fatefield.lock")), "the lock is gone with the run");
+    }
+
+    @Test
+    void aScenarioNameCannotChooseAFolderOutsideTheCurrentOne() {
+        assertEquals(Path.of("_.._x-seed1"), RunLayout.defaultFolder("../../x", "-seed1"));
+        assertEquals(Path.of("_etc_passwd-analysis"), RunLayout.defaultFolder("/etc/passwd", "-analysis"));
+        assertEquals(Path.of("glassfin-fold-seed1"), RunLayout.defaultFolder("glassfin-fold", "-seed1"));
+        assertEquals(Path.of("scenario-seed2"), RunLayout.defaultFolder("..", "-seed2"));
     }
 
     @Test
