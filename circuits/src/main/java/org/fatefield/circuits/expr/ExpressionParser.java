@@ -17,14 +17,25 @@ import java.util.List;
  *   atom    = number | name | name "(" sum ("," sum)* ")" | "(" sum ")"
  * </pre>
  * Names are species or parameters of the circuit, or the functions of {@link Node.Function}.
- * Anything else is an error that names the column.
+ * Anything else is an error that names the column. A rate law is at most {@value #MAX_LENGTH}
+ * characters and {@value #MAX_TERMS} terms, nested at most {@value #MAX_NESTING} deep, so that
+ * no scenario can exhaust the stack of the parser, the differentiator or the evaluator.
  */
 public final class ExpressionParser {
+
+    /** Longest rate law, in characters. */
+    public static final int MAX_LENGTH = 20_000;
+    /** Most numbers, names and operators in one rate law. */
+    public static final int MAX_TERMS = 2_000;
+    /** Deepest nesting of parentheses, signs, powers and function calls. */
+    public static final int MAX_NESTING = 100;
 
     private final String text;
     private final List<String> species;
     private final List<String> parameters;
     private int position;
+    private int nesting;
+    private int terms;
 
     private ExpressionParser(String text, List<String> species, List<String> parameters) {
         this.text = text;
@@ -40,6 +51,10 @@ public final class ExpressionParser {
      * @throws ExpressionException with the column of the first problem
      */
     public static Node parse(String text, List<String> species, List<String> parameters) {
+        if (text.length() > MAX_LENGTH) {
+            throw new ExpressionException("the rate law is " + text.length() + " characters long; at most "
+                    + MAX_LENGTH + " are allowed (split it with parameters or more reactions)", MAX_LENGTH + 1);
+        }
         ExpressionParser parser = new ExpressionParser(text, species, parameters);
         parser.skipSpace();
         if (parser.atEnd()) {
@@ -82,7 +97,32 @@ public final class ExpressionParser {
         }
     }
 
+    /** Counts one more term, refusing a rate law with too many. */
+    private void term() {
+        if (++terms > MAX_TERMS) {
+            throw new ExpressionException("the rate law has more than " + MAX_TERMS + " terms; split it with"
+                    + " parameters or more reactions", position + 1);
+        }
+    }
+
+    /** Enters one level of nesting, refusing a rate law nested too deep. */
+    private void enter() {
+        if (++nesting > MAX_NESTING) {
+            throw new ExpressionException("the rate law nests deeper than " + MAX_NESTING + " levels (parentheses,"
+                    + " signs, powers and calls); write it flatter", position + 1);
+        }
+    }
+
     private Node unary() {
+        enter();
+        try {
+            return signed();
+        } finally {
+            nesting--;
+        }
+    }
+
+    private Node signed() {
         skipSpace();
         if (accept('-')) {
             return new Node.Negate(unary());
@@ -103,6 +143,7 @@ public final class ExpressionParser {
     }
 
     private Node atom() {
+        term();
         skipSpace();
         if (atEnd()) {
             throw new ExpressionException("the expression ends where a number, name or '(' was expected",

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.util.Collections;
 import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -102,6 +103,29 @@ class ExpressionParserTest {
             down[k] -= h;
             double numeric = (f.evaluate(X, up) - f.evaluate(X, down)) / (2 * h);
             assertEquals(numeric, d.evaluate(X, P), 1e-7 * (1 + Math.abs(numeric)), text + " by parameter " + k);
+        }
+    }
+
+    @Test
+    void sizeAndNestingAreBoundedSoNoRateLawCanExhaustTheStack() {
+        // At the limits: 100 levels of parentheses, and 2000 terms (a left-deep sum 1999 deep).
+        String deepest = "(".repeat(99) + "k" + ")".repeat(99);
+        assertEquals(2.5, eval(deepest), 0.0);
+        String widest = String.join("+", Collections.nCopies(2000, "k"));
+        assertEquals(5000.0, eval(widest), 1e-9);
+        CompiledExpression.compile(Differentiator.byParameter(ExpressionParser.parse(widest, SPECIES, PARAMS), 0));
+        // Past them: clear errors, never a StackOverflowError.
+        String[][] cases = {
+            {"(".repeat(10_000) + "k" + ")".repeat(10_000), "characters long"},
+            {"(".repeat(150) + "k" + ")".repeat(150), "nests deeper than 100"},
+            {String.join("^", Collections.nCopies(150, "1")), "nests deeper than 100"},
+            {String.join("+", Collections.nCopies(2001, "k")), "more than 2000 terms"},
+            {"-".repeat(200) + "k", "nests deeper than 100"},
+        };
+        for (String[] c : cases) {
+            ExpressionException e = assertThrows(ExpressionException.class,
+                    () -> ExpressionParser.parse(c[0], SPECIES, PARAMS));
+            assertTrue(e.getMessage().contains(c[1]), e.getMessage());
         }
     }
 }

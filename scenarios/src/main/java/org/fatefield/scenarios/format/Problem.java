@@ -12,6 +12,9 @@ package org.fatefield.scenarios.format;
  */
 public record Problem(String file, int line, int column, String keyPath, String value, String message) {
 
+    /** Longest value shown in a message; a longer one is cut, with its length said. */
+    private static final int SHOWN = 120;
+
     /** {@code file:line:column: key = value: message}, the form editors can jump to. */
     public String format() {
         StringBuilder out = new StringBuilder(file);
@@ -25,7 +28,8 @@ public record Problem(String file, int line, int column, String keyPath, String 
         if (keyPath != null && !keyPath.isEmpty()) {
             out.append(keyPath);
             if (value != null) {
-                out.append(" = ").append(value);
+                out.append(" = ").append(value.length() <= SHOWN ? value
+                        : value.substring(0, SHOWN) + "... (" + value.length() + " characters)");
             }
             out.append(": ");
         }
