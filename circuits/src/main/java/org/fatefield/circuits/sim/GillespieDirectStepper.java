@@ -1,5 +1,6 @@
 package org.fatefield.circuits.sim;
 
+import java.util.Arrays;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.fatefield.circuits.model.ReactionNetwork;
 
@@ -64,6 +65,12 @@ public final class GillespieDirectStepper implements CircuitStepper {
             for (int j = 0; j < reactions; j++) {
                 propensity[j] = Math.max(propensity[j], 0.0) * systemSize;
                 total += propensity[j];
+            }
+            if (!Double.isFinite(total)) {
+                // A rate law gave no finite number: no event time exists. The state becomes NaN,
+                // which the caller (the tissue's finiteness check) reports with the cell.
+                Arrays.fill(state, Double.NaN);
+                return;
             }
             if (!(total > 0)) {
                 break;

@@ -1,5 +1,6 @@
 package org.fatefield.circuits.sim;
 
+import java.util.Arrays;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.PoissonSampler;
 import org.fatefield.circuits.model.ReactionNetwork;
@@ -74,6 +75,11 @@ public final class TauLeapingStepper implements CircuitStepper {
         int exactLeft = 0;
         while (t < dt) {
             double total = propensities(counts, params);
+            if (!Double.isFinite(total)) {
+                // A rate law gave no finite number: the state becomes NaN, for the caller to report.
+                Arrays.fill(state, Double.NaN);
+                return;
+            }
             if (!(total > 0)) {
                 break;
             }

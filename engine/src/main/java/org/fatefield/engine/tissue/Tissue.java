@@ -5,6 +5,7 @@ import java.io.DataOutputStream;
 import java.io.IOException;
 import java.util.Arrays;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Objects;
@@ -54,6 +55,11 @@ public final class Tissue extends SimState {
     private int relocateEvery = 100;
     private final List<TissueObserver> observers = new ArrayList<>();
     private CellRandom[] randoms;
+    /** Per worker, spaced a cache line apart: the lowest id whose state the cell loop found not finite. */
+    private static final int PAD = 16;
+    private long[] failedCell;
+    private int[] failedSpecies;
+    private double[] failedValue;
 
     private final TissueSpec spec;
     private final RandomStreams streams;
@@ -118,6 +124,10 @@ public final class Tissue extends SimState {
                 .distinct().toArray();
         steppers = new CircuitStepper[threads];
         randoms = new CellRandom[threads];
+        failedCell = new long[threads * PAD];
+        Arrays.fill(failedCell, Long.MAX_VALUE);
+        failedSpecies = new int[threads * PAD];
+        failedValue = new double[threads * PAD];
         params = new double[threads][];
         CircuitStepper prototype = circuit.noise().stepper(circuit.network(), circuit.systemSize());
         for (int w = 0; w < threads; w++) {
@@ -227,11 +237,37 @@ public final class Tissue extends SimState {
                 for (int k = 0; k < extrinsic.size(); k++) {
                     extrinsic.get(k).apply(cell.scores()[k], p);
                 }
-                circuit.advance(cell.liveState(), p, dt, random.of(cell));
+                double[] state = cell.liveState();
+                circuit.advance(state, p, dt, random.of(cell));
+                for (int s = 0; s < state.length; s++) {
+                    if (!Double.isFinite(state[s]) && cell.id() < failedCell[worker * PAD]) {
+                        failedCell[worker * PAD] = cell.id();
+                        failedSpecies[worker * PAD] = s;
+                        failedValue[worker * PAD] = state[s];
+                    }
+                }
                 cell.grow(end, size, dilute);
                 readyNow[i] = cell.readyToDivide(size, end);
             }
         });
+        checkFinite(end);
+    }
+
+    /**
+     * Stops the run if the cell loop left any state that is not a finite number, naming the cell
+     * of lowest id (the same whatever the thread count).
+     */
+    private void checkFinite(double now) {
+        int worst = -1;
+        for (int w = 0; w < threads; w++) {
+            if (failedCell[w * PAD] != Long.MAX_VALUE && (worst < 0 || failedCell[w * PAD] < failedCell[worst * PAD])) {
+                worst = w;
+            }
+        }
+        if (worst >= 0) {
+            throw new SimulationFailure(failedCell[worst * PAD], now,
+                    spec.circuit().network().speciesNames().get(failedSpecies[worst * PAD]), failedValue[worst * PAD]);
+        }
     }
 
     /** Resets the parameters extrinsic noise multiplies to their base values. */

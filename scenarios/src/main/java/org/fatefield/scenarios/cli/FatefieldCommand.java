@@ -1,6 +1,7 @@
 package org.fatefield.scenarios.cli;
 
 import java.io.PrintWriter;
+import org.fatefield.engine.tissue.SimulationFailure;
 import org.fatefield.scenarios.output.RunProvenance;
 import picocli.CommandLine.Command;
 import picocli.CommandLine;
@@ -50,6 +51,13 @@ public final class FatefieldCommand implements Runnable {
         CommandLine line = new CommandLine(new FatefieldCommand());
         line.setExecutionExceptionHandler((e, command, parsed) -> {
             PrintWriter err = command.getErr();
+            if (e instanceof SimulationFailure failure) {
+                err.println("The simulation stopped: " + failure.getMessage() + ".");
+                err.println("Nothing was written that looks finished (no run.json); the folder keeps what the run had"
+                        + " streamed so far.");
+                err.flush();
+                return INVALID_INPUT;
+            }
             err.println("fatefield " + command.getCommandName() + " failed: " + e.getClass().getSimpleName()
                     + (e.getMessage() == null ? "" : ": " + e.getMessage()));
             err.println("This is a fault in Fatefield, not in your input; please report it with the scenario and the"

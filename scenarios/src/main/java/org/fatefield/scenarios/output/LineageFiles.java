@@ -132,6 +132,14 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
         }
     }
 
+    /**
+     * Closes the table of a run that did not finish, leaving it under its temporary name (so no
+     * file looks finished; a checkpoint can still resume from it).
+     */
+    public void abandon() throws IOException {
+        printer.close();
+    }
+
     /** Completes the table (renamed into place), then writes the trees from it. */
     @Override
     public void close() throws IOException {

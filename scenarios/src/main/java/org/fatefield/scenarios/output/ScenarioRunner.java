@@ -85,13 +85,19 @@ public final class ScenarioRunner {
                 }
             })));
         }
+        boolean simulated = false;
         try (progress) {
             tissue.runToEnd();
+            simulated = true;
         } catch (UncheckedIOException e) {
             throw e.getCause();
         } finally {
             tissue.finish();
-            lineage.close();
+            if (simulated) {
+                lineage.close();
+            } else {
+                lineage.abandon();
+            }
         }
         List<String> files = new ArrayList<>();
         if (request.frameSteps() > 0) {
