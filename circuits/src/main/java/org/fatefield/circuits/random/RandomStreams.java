@@ -15,6 +15,12 @@ import org.apache.commons.rng.core.source64.XoRoShiRo128PlusPlus;
  */
 public final class RandomStreams {
 
+    /**
+     * The largest seed Fatefield takes or writes, 2^53 - 1: every seed from 0 to it is an
+     * integer a double holds exactly, so tables read by tools that parse numbers as doubles keep it.
+     */
+    public static final long MAX_SEED = (1L << 53) - 1;
+
     private static final long GOLDEN_GAMMA = 0x9e3779b97f4a7c15L;
 
     private final long masterSeed;

@@ -84,6 +84,9 @@ final class AnalyzeCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        SharedOptions.require(spec, systemSize == null || (systemSize > 0 && Double.isFinite(systemSize)),
+                "--system-size", systemSize, "must be a finite number greater than 0");
+        SharedOptions.require(spec, at == null || Double.isFinite(at), "--at", at, "must be a finite number");
         PrintWriter err = spec.commandLine().getErr();
         Scenario loaded = ScenarioArgument.loadOrReport(scenario, spec.commandLine().getErr());
         if (loaded == null) {

@@ -59,6 +59,17 @@ final class BenchCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        for (int cells : sizes) {
+            SharedOptions.require(spec, cells >= 1 && cells <= 10_000_000, "--cells", cells,
+                    "must be sizes from 1 to 10000000 cells");
+        }
+        SharedOptions.require(spec, steps >= 1, "--steps", steps, "must be at least 1");
+        SharedOptions.require(spec, repeats >= 1, "--repeats", repeats, "must be at least 1");
+        SharedOptions.require(spec, memoryCells >= 0 && memoryCells <= 10_000_000, "--memory", memoryCells,
+                "must be from 0 (skip) to 10000000 cells");
+        for (int threads : threadCounts) {
+            SharedOptions.checkWorkers(spec, "--threads", threads);
+        }
         PrintWriter out = spec.commandLine().getOut();
         Scenario loaded = ScenarioArgument.loadOrReport(scenario, spec.commandLine().getErr());
         if (loaded == null) {

@@ -25,6 +25,8 @@ public final class FatefieldCommand implements Runnable {
     static final int INVALID_INPUT = 1;
     /** Exit code when output cannot be written. */
     static final int OUTPUT_ERROR = 3;
+    /** Exit code of {@code sweep collect} when some runs failed or are missing (the tables hold the rest). */
+    static final int INCOMPLETE = 5;
     /** Exit code of a fault in Fatefield itself (an exception no command expected). */
     static final int INTERNAL_ERROR = 4;
 

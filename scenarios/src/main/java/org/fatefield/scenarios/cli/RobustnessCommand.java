@@ -24,7 +24,7 @@ import picocli.CommandLine;
 @Command(name = "robustness", mixinStandardHelpOptions = true,
         description = {"Perturb the morphogen amplitude, tissue size, noise level and each circuit parameter by"
                 + " +-FRACTION and report how boundary positions, widths and fate proportions shift.",
-            "Writes robustness.csv (sensitivity = change per relative change, with 95% intervals over replicate"
+            "Writes robustness.csv (sensitivity = change per relative change, with 95%% intervals over replicate"
                     + " pairs run on the same seeds) and robustness.png for the chosen metric."})
 final class RobustnessCommand implements Callable<Integer> {
 
@@ -75,7 +75,7 @@ final class RobustnessCommand implements Callable<Integer> {
         String chosen = metric != null ? metric : "boundary_" + fates.get(fates.size() - 1) + "_um";
         try {
             Path out = this.out.path();
-            RunFolder.checkUsable(out, false);
+            RunFolder.checkUsable(out, false, false);
             int workers = threads.resolve();
             List<RobustnessAnalysis.Sensitivity> result = RobustnessAnalysis.run(loaded.tissue(), perturbations,
                     fraction, replicates, loaded.seed(), workers);

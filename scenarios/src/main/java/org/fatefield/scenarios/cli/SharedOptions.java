@@ -1,6 +1,7 @@
 package org.fatefield.scenarios.cli;
 
 import java.nio.file.Path;
+import org.fatefield.circuits.random.RandomStreams;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParameterException;
@@ -24,11 +25,12 @@ final class SharedOptions {
 
         private Long value;
 
-        @Option(names = "--seed", paramLabel = "N", description = "master random seed, 0 or greater"
+        @Option(names = "--seed", paramLabel = "N", description = "master random seed, from 0 to 2^53 - 1"
                 + " (default: run.seed of the scenario)")
         void set(long seed) {
-            if (seed < 0) {
-                throw new ParameterException(spec.commandLine(), "--seed must be 0 or greater, got " + seed);
+            if (seed < 0 || seed > RandomStreams.MAX_SEED) {
+                throw new ParameterException(spec.commandLine(), "--seed must be from 0 to " + RandomStreams.MAX_SEED
+                        + " (2^53 - 1), got " + seed);
             }
             this.value = seed;
         }
@@ -47,18 +49,35 @@ final class SharedOptions {
 
         private Integer value;
 
-        @Option(names = "--threads", paramLabel = "N", description = "threads to step cells on, at least 1"
-                + " (default: all processors); results do not depend on it")
+        @Option(names = "--threads", paramLabel = "N", description = "threads to step cells on, from 1 to four"
+                + " per processor (default: all processors); results do not depend on it")
         void set(int threads) {
-            if (threads < 1) {
-                throw new ParameterException(spec.commandLine(), "--threads must be at least 1, got " + threads);
-            }
+            checkWorkers(spec, "--threads", threads);
             this.value = threads;
         }
 
         /** The thread count given, or the number of processors. */
         int resolve() {
             return value != null ? value : Runtime.getRuntime().availableProcessors();
+        }
+    }
+
+    /**
+     * Refuses a thread or worker count below 1 or above four per processor of this machine (more
+     * only adds switching between threads).
+     */
+    static void checkWorkers(CommandSpec spec, String option, int count) {
+        int most = 4 * Runtime.getRuntime().availableProcessors();
+        if (count < 1 || count > most) {
+            throw new ParameterException(spec.commandLine(), option + " must be from 1 to " + most + " (four per"
+                    + " processor of this machine), got " + count);
+        }
+    }
+
+    /** Refuses a value of {@code option} that breaks {@code rule} ({@code ok} false), as a usage error. */
+    static void require(CommandSpec spec, boolean ok, String option, Object value, String rule) {
+        if (!ok) {
+            throw new ParameterException(spec.commandLine(), option + " " + rule + ", got " + value);
         }
     }
 

@@ -72,7 +72,7 @@ final class SweepCommand implements Runnable {
                             sweep.scenarioText().getBytes(StandardCharsets.UTF_8), file.toAbsolutePath().getParent(),
                             variant);
                 }
-                RunFolder.checkUsable(out, false);
+                RunFolder.checkUsable(out, false, false);
                 RunFolder folder = RunFolder.open(out);
                 folder.writeText(SweepRunner.BASE, w -> w.write(sweep.scenarioText()));
                 folder.writeText(Manifest.NAME, manifest::write);
@@ -113,6 +113,9 @@ final class SweepCommand implements Runnable {
 
         @Override
         public Integer call() {
+            if (workers != null) {
+                SharedOptions.checkWorkers(spec, "--workers", workers);
+            }
             PrintWriter err = spec.commandLine().getErr();
             try {
                 SweepRunner runner = new SweepRunner(folder);
@@ -233,7 +236,8 @@ final class SweepCommand implements Runnable {
                             + folder + ")");
                 }
                 out.flush();
-                return 0;
+                // Tables of an incomplete sweep are written from the runs that finished, and say so in the exit code.
+                return report.failed().isEmpty() && report.missing().isEmpty() ? 0 : FatefieldCommand.INCOMPLETE;
             } catch (IOException e) {
                 spec.commandLine().getErr().println("Cannot collect: " + e.getMessage());
                 return FatefieldCommand.OUTPUT_ERROR;

@@ -1,10 +1,12 @@
 package org.fatefield.scenarios.output;
 
+import java.io.BufferedOutputStream;
 import java.io.Closeable;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.io.OutputStreamWriter;
 import java.io.Writer;
+import java.nio.channels.Channels;
 import java.nio.channels.FileChannel;
 import java.nio.channels.FileLock;
 import java.nio.channels.OverlappingFileLockException;
@@ -50,14 +52,22 @@ public final class RunFolder {
      *                     is false, or if it is a file
      */
     public static void checkUsable(Path path, boolean force) throws IOException {
+        checkUsable(path, force, true);
+    }
+
+    /**
+     * As {@link #checkUsable(Path, boolean)}, for a command that has a {@code --force} option
+     * ({@code forceOption}) or not: the message suggests only what the command offers.
+     */
+    public static void checkUsable(Path path, boolean force, boolean forceOption) throws IOException {
         if (Files.exists(path) && !Files.isDirectory(path)) {
             throw new IOException("output path " + path + " is a file, not a folder; choose another --out");
         }
         if (Files.isDirectory(path) && !force) {
             try (Stream<Path> entries = Files.list(path)) {
                 if (entries.findAny().isPresent()) {
-                    throw new IOException("output folder " + path + " already holds files; choose another --out,"
-                            + " or add --force to overwrite the run files in it");
+                    throw new IOException("output folder " + path + " already holds files; choose another --out"
+                            + (forceOption ? ", or add --force to overwrite the run files in it" : ""));
                 }
             }
         }
@@ -102,13 +112,23 @@ public final class RunFolder {
         };
     }
 
-    /** Writes {@code name} atomically: to a temporary file first, then renamed over the target. */
+    /**
+     * Writes {@code name} atomically: to a temporary file first, forced to disk, then renamed over
+     * the target; an error names the file.
+     */
     public Path write(String name, Content content) throws IOException {
         Path target = path.resolve(name);
         Path temporary = RunLayout.partial(target);
         try {
-            try (OutputStream out = Files.newOutputStream(temporary)) {
+            try (FileChannel channel = FileChannel.open(temporary, StandardOpenOption.CREATE,
+                    StandardOpenOption.TRUNCATE_EXISTING, StandardOpenOption.WRITE)) {
+                OutputStream out = new BufferedOutputStream(Channels.newOutputStream(channel));
                 content.writeTo(out);
+                out.flush();
+                // On disk before it takes its final name: a crash leaves the old file or the new one, whole.
+                channel.force(true);
+            } catch (IOException e) {
+                throw new IOException("cannot write " + target + ": " + e.getMessage(), e);
             }
             try {
                 Files.move(temporary, target, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);

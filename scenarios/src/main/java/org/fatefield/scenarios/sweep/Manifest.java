@@ -48,7 +48,8 @@ public record Manifest(List<String> keys, List<Run> runs) {
         RandomStreams streams = RandomStreams.of(sweep.seed());
         for (int p = 0; p < points.size(); p++) {
             for (int r = 0; r < sweep.replicates(); r++) {
-                long seed = streams.stream(p * 100_003L + r).nextLong() >>> 1;
+                // 53 bits: from 0 to RandomStreams.MAX_SEED, like every seed Fatefield takes.
+                long seed = streams.stream(p * 100_003L + r).nextLong() >>> 11;
                 runs.add(new Run(String.format(Locale.ROOT, "p%04d-r%03d", p, r), p, r, seed, points.get(p)));
             }
         }

@@ -45,6 +45,9 @@ import org.tomlj.TomlTable;
 public record SweepDefinition(String scenarioText, String scenarioLabel, String design, int points, int replicates,
         long seed, List<SweepParameter> parameters) {
 
+    /** Largest base scenario file a sweep reads (a scenario is a short text; this refuses /dev/zero). */
+    private static final long MAX_SCENARIO_BYTES = 1 << 20;
+
     /** Reads and checks a sweep file, reporting every problem at once. */
     public static SweepDefinition read(Path file) throws ScenarioException {
         String label = file.toString();
@@ -72,37 +75,45 @@ public record SweepDefinition(String scenarioText, String scenarioLabel, String 
                         + " replicates, seed"));
             }
         }
-        String scenario = sweep.getString("scenario");
+        String scenario = sweep.isString("scenario") ? sweep.getString("scenario") : null;
         String text = null;
         if (scenario == null) {
-            problems.add(new Problem(label, 0, 0, "sweep.scenario", null, "required: the base scenario file or built-in"));
+            problems.add(sweep.contains("scenario") ? at(label, sweep, "scenario", "sweep.scenario",
+                    "must be text: a scenario file in the sweep's folder, or a built-in name")
+                    : new Problem(label, 0, 0, "sweep.scenario", null, "required: the base scenario file or built-in"));
         } else {
-            Path base = file.toAbsolutePath().getParent().resolve(scenario);
-            try {
-                Optional<byte[]> builtin = BuiltinScenarios.bytes(scenario);
-                text = Files.exists(base) ? Files.readString(base, StandardCharsets.UTF_8)
-                        : builtin.map(b -> new String(b, StandardCharsets.UTF_8)).orElse(null);
-            } catch (IOException e) {
-                text = null;
-            }
-            if (text == null) {
+            Path folder = file.toAbsolutePath().getParent().normalize();
+            Path base = folder.resolve(scenario).normalize();
+            Optional<byte[]> builtin = BuiltinScenarios.bytes(scenario);
+            if (Path.of(scenario).isAbsolute() || !base.startsWith(folder)) {
+                problems.add(at(label, sweep, "scenario", "sweep.scenario", "must name a file in the sweep's folder"
+                        + " or below it (a sweep file cannot reach elsewhere), or a built-in scenario"));
+            } else if (Files.isRegularFile(base)) {
+                try {
+                    if (Files.size(base) > MAX_SCENARIO_BYTES) {
+                        problems.add(at(label, sweep, "scenario", "sweep.scenario", "is larger than "
+                                + MAX_SCENARIO_BYTES / 1024 + " KiB; a scenario file is a short text"));
+                    } else {
+                        text = Files.readString(base, StandardCharsets.UTF_8);
+                    }
+                } catch (IOException e) {
+                    problems.add(at(label, sweep, "scenario", "sweep.scenario", "cannot be read: " + e.getMessage()));
+                }
+            } else if (builtin.isPresent()) {
+                text = new String(builtin.get(), StandardCharsets.UTF_8);
+            } else {
                 problems.add(at(label, sweep, "scenario", "sweep.scenario", "no such file next to the sweep file and no"
                         + " built-in of that name"));
             }
         }
-        String design = sweep.getString("design") != null ? sweep.getString("design") : "grid";
+        String design = sweep.isString("design") ? sweep.getString("design") : sweep.contains("design") ? "" : "grid";
         if (!List.of("grid", "latin-hypercube", "sobol").contains(design)) {
             problems.add(at(label, sweep, "design", "sweep.design", "must be one of \"grid\", \"latin-hypercube\","
                     + " \"sobol\""));
         }
-        long points = sweep.getLong("points", () -> 8L);
-        long replicates = sweep.getLong("replicates", () -> 1L);
-        if (points < 1 || points > 100_000) {
-            problems.add(at(label, sweep, "points", "sweep.points", "must be a whole number from 1 to 100000"));
-        }
-        if (replicates < 1 || replicates > 10_000) {
-            problems.add(at(label, sweep, "replicates", "sweep.replicates", "must be a whole number from 1 to 10000"));
-        }
+        long points = wholeNumber(label, sweep, "points", 8, 1, 100_000, problems);
+        long replicates = wholeNumber(label, sweep, "replicates", 1, 1, 10_000, problems);
+        long seed = wholeNumber(label, sweep, "seed", 1, 0, RandomStreams.MAX_SEED, problems);
         List<SweepParameter> parameters = new ArrayList<>();
         TomlArray array = toml.getArrayOrEmpty("parameter");
         if (array.isEmpty()) {
@@ -121,8 +132,20 @@ public record SweepDefinition(String scenarioText, String scenarioLabel, String 
         if (!problems.isEmpty()) {
             throw new ScenarioException(problems);
         }
-        return new SweepDefinition(text, scenario, design, (int) points, (int) replicates,
-                sweep.getLong("seed", () -> 1L), parameters);
+        return new SweepDefinition(text, scenario, design, (int) points, (int) replicates, seed, parameters);
+    }
+
+    /** A whole number from {@code min} to {@code max} at {@code key}, or a problem saying so. */
+    private static long wholeNumber(String label, TomlTable table, String key, long fallback, long min, long max,
+            List<Problem> problems) {
+        if (!table.contains(key)) {
+            return fallback;
+        }
+        if (table.isLong(key) && table.getLong(key) >= min && table.getLong(key) <= max) {
+            return table.getLong(key);
+        }
+        problems.add(at(label, table, key, "sweep." + key, "must be a whole number from " + min + " to " + max));
+        return fallback;
     }
 
     private static SweepParameter parameter(TomlTable p) {

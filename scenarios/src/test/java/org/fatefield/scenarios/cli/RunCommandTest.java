@@ -223,19 +223,30 @@ class RunCommandTest {
     }
 
     @Test
-    void sharedOptionsRefuseOutOfRangeValuesBeforeAnythingRuns() {
+    void outOfRangeOptionsAreRefusedBeforeAnythingRuns() {
+        Path out = tmp.resolve("never");
+        String o = out.toString();
+        // Each case: the option that must be named, then the command line.
         String[][] cases = {
-            {"run", "demo", "--threads", "0", "--out", tmp.resolve("t0").toString()},
-            {"run", "demo", "--seed", "-3", "--out", tmp.resolve("s3").toString()},
-            {"replicates", "demo", "--runs", "2", "--threads", "-1", "--out", tmp.resolve("r").toString()},
-            {"analyze", "demo", "--seed", "-1", "--out", tmp.resolve("a").toString()},
+            {"--threads", "run", "demo", "--threads", "0", "--out", o},
+            {"--threads", "run", "demo", "--threads", "100000", "--out", o},
+            {"--seed", "run", "demo", "--seed", "-3", "--out", o},
+            {"--seed", "run", "demo", "--seed", "9007199254740992", "--out", o},
+            {"--threads", "replicates", "demo", "--runs", "2", "--threads", "-1", "--out", o},
+            {"--seed", "analyze", "demo", "--seed", "-1", "--out", o},
+            {"--system-size", "analyze", "demo", "--system-size", "0", "--out", o},
+            {"--at", "analyze", "demo", "--at", "NaN", "--out", o},
+            {"--cells", "bench", "--cells", "0"},
+            {"--cells", "bench", "--cells", "-5"},
+            {"--steps", "bench", "--steps", "0"},
+            {"--workers", "sweep", "run", o, "--workers", "0"},
         };
-        for (String[] args : cases) {
+        for (String[] c : cases) {
+            String[] args = Arrays.copyOfRange(c, 1, c.length);
             Outcome bad = fatefield(args);
-            String option = args[args.length - 4].startsWith("--") ? args[args.length - 4] : args[2];
-            assertEquals(2, bad.code(), String.join(" ", args));
-            assertTrue(bad.err().contains(option + " must be"), bad.err());
-            assertTrue(!Files.exists(Path.of(args[args.length - 1])), "nothing created for " + String.join(" ", args));
+            assertEquals(2, bad.code(), String.join(" ", args) + ": " + bad.err());
+            assertTrue(bad.err().contains(c[0] + " must be"), bad.err());
+            assertTrue(!Files.exists(out), "nothing created for " + String.join(" ", args));
         }
     }
 

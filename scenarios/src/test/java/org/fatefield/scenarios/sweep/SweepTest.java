@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
@@ -171,5 +172,43 @@ class SweepTest {
         try (var files = Files.list(results)) {
             return (int) files.filter(f -> f.getFileName().toString().matches("p\\d+-r\\d+\\.json")).count();
         }
+    }
+
+    @Test
+    void hostileSweepFilesGetClearErrorsNamingKeyAndLine() throws IOException {
+        sweepFile("grid", 1, 1);
+        String parameter = "\n[[parameter]]\nkey = \"coupling[1].gain\"\nvalues = [1.2, 1.8]\n";
+        Files.createDirectories(tmp.resolve("inner"));
+        String[][] cases = {
+            {"points = \"eight\"", "sweep.points", "whole number from 1 to 100000"},
+            {"replicates = 2.5", "sweep.replicates", "whole number from 1 to 10000"},
+            {"seed = -4", "sweep.seed", "whole number from 0 to 9007199254740991"},
+            {"scenario = 7", "sweep.scenario", "must be text"},
+            {"scenario = \"../base.toml\"", "sweep.scenario", "in the sweep's folder"},
+            {"scenario = \"/dev/zero\"", "sweep.scenario", "in the sweep's folder"},
+        };
+        for (String[] c : cases) {
+            String key = c[0].substring(0, c[0].indexOf(' '));
+            String sweep = "[sweep]\n" + (key.equals("scenario") ? "" : "scenario = \"base.toml\"\n")
+                    + c[0] + "\n" + parameter;
+            Path file = tmp.resolve("inner").resolve("hostile.toml");
+            Files.writeString(file, sweep);
+            if (!key.equals("scenario")) {
+                Files.copy(tmp.resolve("base.toml"), tmp.resolve("inner").resolve("base.toml"),
+                        StandardCopyOption.REPLACE_EXISTING);
+            }
+            ScenarioException e = assertThrows(ScenarioException.class, () -> SweepDefinition.read(file), c[0]);
+            assertEquals(c[1], e.problems().get(0).keyPath(), c[0] + ": " + e.getMessage());
+            assertTrue(e.problems().get(0).line() > 0, c[0] + ": the line is named");
+            assertTrue(e.getMessage().contains(c[2]), c[0] + ": " + e.getMessage());
+        }
+    }
+
+    @Test
+    void collectSaysInItsExitCodeWhenRunsAreMissing() throws Exception {
+        Path file = sweepFile("grid", 1, 1);
+        Path folder = tmp.resolve("partial-sweep");
+        assertEquals(0, FatefieldCommandAccess.run("sweep", "plan", file.toString(), "--out", folder.toString()));
+        assertEquals(5, FatefieldCommandAccess.run("sweep", "collect", folder.toString()), "nothing has run yet");
     }
 }
