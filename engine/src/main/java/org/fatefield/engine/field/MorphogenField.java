@@ -169,13 +169,27 @@ public final class MorphogenField {
 
     /** The largest stable explicit time step (h). */
     public double stableStepLimit() {
+        return stableStepLimit(spec);
+    }
+
+    /** The largest stable explicit time step (h) of a field of {@code spec}. */
+    private static double stableStepLimit(MorphogenSpec spec) {
+        double h = spec.gridSpacing();
         double rate = spec.decay() + 8.0 * spec.diffusion() / (h * h);
         return rate > 0 ? 2.0 / rate : Double.POSITIVE_INFINITY;
     }
 
     /** Number of sub-steps {@link #advance(double)} takes for a step of {@code dt}. */
     public int subStepsFor(double dt) {
-        return Math.max(1, (int) Math.ceil(dt / (SAFETY * stableStepLimit())));
+        return (int) subSteps(spec, dt);
+    }
+
+    /**
+     * Explicit sub-steps a field of {@code spec} takes per step of {@code dt} (as a double: for
+     * estimates of work, where a hopeless scenario may ask for more than an int holds).
+     */
+    public static double subSteps(MorphogenSpec spec, double dt) {
+        return Math.max(1, Math.ceil(dt / (SAFETY * stableStepLimit(spec))));
     }
 
     /** Advances the field by {@code dt} hours in stable sub-steps, on the caller's thread. */

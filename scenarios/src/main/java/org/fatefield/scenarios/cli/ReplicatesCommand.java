@@ -50,6 +50,9 @@ final class ReplicatesCommand implements Callable<Integer> {
     @Mixin
     private SharedOptions.Threads threads;
 
+    @Mixin
+    private SharedOptions.Confirm confirm;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
@@ -62,6 +65,9 @@ final class ReplicatesCommand implements Callable<Integer> {
         }
         if (runs < 2) {
             err.println("--runs must be at least 2 to measure a spread, got " + runs);
+            return FatefieldCommand.INVALID_INPUT;
+        }
+        if (!confirm.allows(spec, loaded)) {
             return FatefieldCommand.INVALID_INPUT;
         }
         long first = seed.orElse(loaded.seed());

@@ -41,6 +41,9 @@ final class RunCommand implements Callable<Integer> {
     @Mixin
     private SharedOptions.Threads threads;
 
+    @Mixin
+    private SharedOptions.Confirm confirm;
+
     @Option(names = "--checkpoint-every", paramLabel = "HOURS", description = "save a checkpoint every HOURS of"
             + " simulated time, so a killed run can be resumed (default: never)")
     private Double checkpointEvery;
@@ -68,6 +71,9 @@ final class RunCommand implements Callable<Integer> {
         } catch (ScenarioException e) {
             err.println(e.getMessage());
             err.println("Nothing was run. Fix the lines above (see: fatefield keys), then run again.");
+            return FatefieldCommand.INVALID_INPUT;
+        }
+        if (!confirm.allows(spec, loaded)) {
             return FatefieldCommand.INVALID_INPUT;
         }
         long runSeed = seed.orElse(loaded.seed());

@@ -1,7 +1,11 @@
 package org.fatefield.scenarios.cli;
 
+import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.List;
 import org.fatefield.circuits.random.RandomStreams;
+import org.fatefield.engine.tissue.WorkEstimate;
+import org.fatefield.scenarios.format.Scenario;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.ParameterException;
@@ -103,6 +107,38 @@ final class SharedOptions {
         /** The folder given, or {@code fallback}. */
         Path orElse(Path fallback) {
             return value != null ? value : fallback;
+        }
+    }
+
+    /**
+     * {@code --yes}: run even when the estimate of work ({@link WorkEstimate}) says the run is very
+     * long. Runs the estimate calls impossible (more steps, cells or packing than any machine
+     * takes) are refused whatever.
+     */
+    static final class Confirm {
+
+        @Option(names = "--yes", description = "start even if the run is estimated to take very long")
+        private boolean yes;
+
+        /**
+         * Checks the work {@code scenario} asks for; prints why and returns false if the run must not
+         * start.
+         */
+        boolean allows(CommandSpec spec, Scenario scenario) {
+            WorkEstimate estimate = WorkEstimate.of(scenario.tissue());
+            PrintWriter err = spec.commandLine().getErr();
+            List<String> impossible = estimate.impossible();
+            List<String> lengthy = estimate.lengthy();
+            if (impossible.isEmpty() && (lengthy.isEmpty() || yes)) {
+                return true;
+            }
+            err.println(scenario.name() + " asks for " + estimate.summary() + ":");
+            impossible.forEach(m -> err.println("  " + m));
+            lengthy.forEach(m -> err.println("  " + m));
+            err.println(impossible.isEmpty() ? "Nothing was run; add --yes to start it anyway."
+                    : "Nothing was run: change the scenario as said above.");
+            err.flush();
+            return false;
         }
     }
 

@@ -3,6 +3,7 @@ package org.fatefield.scenarios.cli;
 import java.io.PrintWriter;
 import java.util.List;
 import java.util.concurrent.Callable;
+import org.fatefield.engine.tissue.WorkEstimate;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
 import picocli.CommandLine;
@@ -33,6 +34,15 @@ final class ValidateCommand implements Callable<Integer> {
                 out.printf("%s: valid (%s: %d founders, %.4g h in steps of %.4g h, %d fates)%n", file, scenario.name(),
                         scenario.tissue().growth().initialCells(), scenario.tissue().timing().duration(),
                         scenario.tissue().timing().step(), scenario.tissue().fates().fateCount());
+                WorkEstimate estimate = WorkEstimate.of(scenario.tissue());
+                out.printf("  expected work: %s%n", estimate.summary());
+                for (String m : estimate.impossible()) {
+                    out.println("  cannot run: " + m);
+                    status = FatefieldCommand.INVALID_INPUT;
+                }
+                for (String m : estimate.lengthy()) {
+                    out.println("  very long (run needs --yes): " + m);
+                }
             } catch (ScenarioException e) {
                 err.println(e.getMessage());
                 status = FatefieldCommand.INVALID_INPUT;

@@ -271,4 +271,25 @@ class RunCommandTest {
         assertEquals(0, report.code(), report.err());
         assertTrue(Files.readString(out.resolve("report.html")).contains("No boundary is predicted"));
     }
+
+    @Test
+    void scenariosAskingForImpossibleOrVeryLongWorkAreRefusedBeforeTheyStart() throws IOException {
+        String demo = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8);
+        String[][] cases = {
+            {"duration = 48.0", "duration = 1e308", "time steps"},
+            {"step = 0.01 ", "step = 1e-300 ", "time steps"},
+            {"cycle_mean = 12.0", "cycle_mean = 0.001", "cells at the end"},
+            {"founders = 120", "founders = 200000", "founders cover"},
+            {"diffusion = 3600.0", "diffusion = 1e12", "add --yes"},
+        };
+        for (String[] c : cases) {
+            Path scenario = tmp.resolve("hostile.toml");
+            Files.writeString(scenario, demo.replace(c[0], c[1]));
+            Path out = tmp.resolve("hostile-run");
+            Outcome run = fatefield("run", scenario.toString(), "--out", out.toString(), "--quiet");
+            assertEquals(FatefieldCommand.INVALID_INPUT, run.code(), c[1] + ": " + run.err());
+            assertTrue(run.err().contains(c[2]), c[1] + ": " + run.err());
+            assertFalse(Files.exists(out), c[1] + ": nothing was created");
+        }
+    }
 }
