@@ -9,11 +9,12 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.fatefield.scenarios.format.Overrides;
+import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.format.ScenarioReader;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.sweep.Manifest;
-import org.fatefield.scenarios.format.Overrides;
 import org.fatefield.scenarios.sweep.SlurmScript;
 import org.fatefield.scenarios.sweep.SweepCollector;
 import org.fatefield.scenarios.sweep.SweepDefinition;
@@ -62,19 +63,24 @@ final class SweepCommand implements Runnable {
             try {
                 SweepDefinition sweep = SweepDefinition.read(file);
                 Manifest manifest = Manifest.plan(sweep);
+                // The base scenario's own folder: its includes are found there.
+                Path baseFile = file.toAbsolutePath().getParent().resolve(sweep.scenarioLabel()).normalize();
+                Path baseFolder = Files.isRegularFile(baseFile) ? baseFile.getParent() : null;
+                byte[] baseBytes = sweep.scenarioText().getBytes(StandardCharsets.UTF_8);
+                Scenario base = ScenarioReader.parse(sweep.scenarioLabel(), "base", baseBytes, baseFolder);
                 // Every variant must be a valid scenario before anything is written.
                 for (double[] values : sweep.pointValues()) {
                     Overrides variant = Overrides.none();
                     for (int k = 0; k < values.length; k++) {
                         variant = variant.with(sweep.parameters().get(k).key(), values[k]);
                     }
-                    ScenarioReader.parse("variant of " + sweep.scenarioLabel(), "variant",
-                            sweep.scenarioText().getBytes(StandardCharsets.UTF_8), file.toAbsolutePath().getParent(),
+                    ScenarioReader.parse("variant of " + sweep.scenarioLabel(), "variant", baseBytes, baseFolder,
                             variant);
                 }
                 RunFolder.checkUsable(out, false, false);
                 RunFolder folder = RunFolder.open(out);
-                folder.writeText(SweepRunner.BASE, w -> w.write(sweep.scenarioText()));
+                // The base and its includes, together: every run reads them from the sweep folder.
+                base.copyInto(SweepRunner.BASE, (name, text) -> folder.writeText(name, w -> w.write(text)));
                 folder.writeText(Manifest.NAME, manifest::write);
                 spec.commandLine().getOut().printf("Planned %d runs (%d points x %d replicates) in %s%n",
                         manifest.runs().size(), manifest.runs().size() / sweep.replicates(), sweep.replicates(),

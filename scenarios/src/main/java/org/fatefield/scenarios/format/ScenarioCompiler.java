@@ -109,7 +109,7 @@ final class ScenarioCompiler {
             String name = scenario.contains("name") ? scenario.getString("name") : fallbackName;
             String description = scenario.contains("description") ? scenario.getString("description") : "";
             long seed = run.contains("seed") ? run.getLong("seed") : 1L;
-            return new Scenario(name, description, file, sha256, seed, spec, text, overrides);
+            return new Scenario(name, description, file, sha256, seed, spec, text, overrides, Map.of());
         } catch (IllegalArgumentException e) {
             problems.add(new Problem(file, 0, 0, "", null, e.getMessage()));
             return null;

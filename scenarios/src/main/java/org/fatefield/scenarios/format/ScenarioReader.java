@@ -11,6 +11,7 @@ import java.util.Arrays;
 import java.util.HashSet;
 import java.util.HexFormat;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 import org.tomlj.TomlParseResult;
 import org.tomlj.TomlTable;
@@ -109,6 +110,10 @@ public final class ScenarioReader {
         }
         if (!problems.isEmpty() || scenario == null) {
             throw new ScenarioException(sorted(problems));
+        }
+        if (checker.circuitIncluded()) {
+            scenario = scenario.withIncludes(Map.of(toml.getString("circuit.file"),
+                    new String(circuit.bytes(), StandardCharsets.UTF_8)));
         }
         return scenario;
     }

@@ -119,6 +119,7 @@ public final class RunFolder {
     public Path write(String name, Content content) throws IOException {
         Path target = path.resolve(name);
         Path temporary = RunLayout.partial(target);
+        Files.createDirectories(target.getParent());
         try {
             try (FileChannel channel = FileChannel.open(temporary, StandardOpenOption.CREATE,
                     StandardOpenOption.TRUNCATE_EXISTING, StandardOpenOption.WRITE)) {

@@ -104,8 +104,10 @@ public final class ScenarioRunner {
             files.addAll(frames.finish(folder));
         }
         files.add(RunLayout.LINEAGE);
-        folder.writeText(RunLayout.SCENARIO_COPY, w -> w.write(scenario.text()));
-        files.add(RunLayout.SCENARIO_COPY);
+        scenario.copyInto(RunLayout.SCENARIO_COPY, (name, text) -> {
+            folder.writeText(name, w -> w.write(text));
+            files.add(name);
+        });
         folder.writeText(RunLayout.TREES, w -> LineageFiles.writeTrees(out.resolve(RunLayout.LINEAGE), tissue.time(),
                 w));
         files.add(RunLayout.TREES);

@@ -211,4 +211,33 @@ class SweepTest {
         assertEquals(0, FatefieldCommandAccess.run("sweep", "plan", file.toString(), "--out", folder.toString()));
         assertEquals(5, FatefieldCommandAccess.run("sweep", "collect", folder.toString()), "nothing has run yet");
     }
+
+    @Test
+    void aScenarioWithAnIncludedCircuitIsCopiedWholeIntoRunAndSweepFolders() throws Exception {
+        String demo = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8)
+                .replace("duration = 48.0", "duration = 4.0");
+        int from = demo.indexOf("[circuit]");
+        int to = demo.indexOf("[morphogen]");
+        Path home = tmp.resolve("bundle");
+        Files.createDirectories(home.resolve("circuits"));
+        Files.writeString(home.resolve("circuits").resolve("switch.toml"), demo.substring(from, to));
+        Files.writeString(home.resolve("base.toml"), demo.substring(0, from) + "[circuit]\nfile = \"circuits/switch.toml\"\n\n"
+                + demo.substring(to));
+        Path run = home.resolve("run");
+        assertEquals(0, FatefieldCommandAccess.run("run", home.resolve("base.toml").toString(), "--out", run.toString(),
+                "--quiet"));
+        assertEquals(Files.readString(home.resolve("circuits").resolve("switch.toml")),
+                Files.readString(run.resolve("circuits").resolve("switch.toml")), "the include is copied beside scenario.toml");
+        assertEquals(0, FatefieldCommandAccess.run("report", run.toString()));
+        assertTrue(Files.readString(run.resolve("report.html")).contains("bifurcation diagram"),
+                "the report finds the included circuit and draws it");
+        Path sweep = home.resolve("sweep.toml");
+        Files.writeString(sweep, "[sweep]\nscenario = \"base.toml\"\ndesign = \"grid\"\nreplicates = 1\n\n"
+                + "[[parameter]]\nkey = \"circuit.kinetics.repression_hill\"\nvalues = [3.0, 4.0]\n");
+        Path folder = home.resolve("sweep-out");
+        assertEquals(0, FatefieldCommandAccess.run("sweep", "plan", sweep.toString(), "--out", folder.toString()));
+        assertTrue(Files.exists(folder.resolve("circuits").resolve("switch.toml")), "the include is in the sweep folder");
+        assertEquals(0, FatefieldCommandAccess.run("sweep", "run", folder.toString(), "--workers", "1"));
+        assertEquals(0, FatefieldCommandAccess.run("sweep", "collect", folder.toString()), "every run finished");
+    }
 }
