@@ -13,7 +13,8 @@ package org.fatefield.circuits.study;
  * @param secondMin      lower end of the second range
  * @param secondMax      upper end of the second range
  * @param xSpecies       species on the horizontal axis of state-plane figures
- * @param ySpecies       species on the vertical axis
+ * @param ySpecies       species on the vertical axis, or -1 for a one-species circuit (no state plane:
+ *                       steady states, continuation and switching only)
  * @param systemSize     molecules per unit concentration for the stochastic analyses
  * @param trajectories   trajectories per landscape, per first-passage estimate and per commitment start
  * @param grid           cells per axis of the landscape grid
@@ -37,11 +38,16 @@ public record AnalysisPlan(String parameter, int[] indices, double min, double m
         if (grid < 10 || grid > 400) {
             throw new IllegalArgumentException("--grid must be from 10 to 400, got " + grid);
         }
-        if (xSpecies == ySpecies) {
+        if (xSpecies == ySpecies && ySpecies >= 0) {
             throw new IllegalArgumentException("--x and --y must name different species");
         }
         indices = indices.clone();
         secondIndices = secondIndices.clone();
+    }
+
+    /** True when there is a state plane (two species to plot) for basins, landscapes and commitment. */
+    public boolean hasPlane() {
+        return ySpecies >= 0;
     }
 
     /** True when a second parameter was given. */

@@ -14,8 +14,8 @@ import org.fatefield.circuits.analysis.continuation.FoldCurveContinuation.FoldCu
  * @param steadyStates   steady states at the plan's parameter value
  * @param branches       continuation branches
  * @param foldCurves     fold curves in the two-parameter plane (empty without a second parameter)
- * @param basins         basin map at the plan's value
- * @param landscape      landscape over the state plane at the plan's value
+ * @param basins         basin map at the plan's value; null without a state plane (one species)
+ * @param landscape      landscape over the state plane at the plan's value; null without a state plane
  * @param alongParameter one-dimensional landscapes (along the x species) at {@code parameterValues}
  * @param parameterValues parameter values of {@code alongParameter}
  * @param passages       first-passage estimates, one per system size in {@code systemSizes}

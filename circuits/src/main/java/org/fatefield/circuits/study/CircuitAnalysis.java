@@ -70,6 +70,16 @@ public final class CircuitAnalysis {
         List<Branch> branches = continuation();
         List<FoldCurve> folds = plan.hasSecond() ? foldCurves(branches) : List.of();
         List<SteadyState> stable = states.stream().filter(SteadyState::isStable).toList();
+        double[] sizes = {plan.systemSize() / 8, plan.systemSize() / 4, plan.systemSize() / 2, plan.systemSize()};
+        List<Switching.FirstPassage> passages = new ArrayList<>();
+        if (!plan.hasPlane()) {
+            // One species: no state plane for basins, landscapes and commitment maps.
+            if (stable.size() >= 2) {
+                passages = passages(p, stable, sizes);
+            }
+            return new AnalysisResult(states, branches, folds, null, null, List.of(), new double[0], passages, sizes,
+                    new double[0][0]);
+        }
         double[] corner = {upper[plan.xSpecies()], upper[plan.ySpecies()]};
         BasinMap basins = BasinMap.compute(network, p, new double[network.speciesCount()], stable, plan.xSpecies(),
                 plan.ySpecies(), new double[2], corner, GRID);
@@ -85,17 +95,12 @@ public final class CircuitAnalysis {
                     .filter(SteadyState::isStable).map(SteadyState::state).toList();
             slices.add(landscape(pk, wells.isEmpty() ? List.of(start) : wells, corner, plan.seed() + k).marginalX());
         }
-        double[] sizes = {plan.systemSize() / 8, plan.systemSize() / 4, plan.systemSize() / 2, plan.systemSize()};
-        List<Switching.FirstPassage> passages = new ArrayList<>();
         double[][] commitment = new double[0][0];
         if (stable.size() >= 2) {
             double[] a = stable.get(0).state();
             double[] b = stable.get(stable.size() - 1).state();
             double radius = 0.25 * distance(a, b);
-            for (double omega : sizes) {
-                passages.add(Switching.meanFirstPassage(network, p, omega, a, b, radius, plan.trajectories(), 0.01,
-                        2000, plan.seed()));
-            }
+            passages = passages(p, stable, sizes);
             commitment = new double[COMMITMENT_GRID][COMMITMENT_GRID];
             for (int j = 0; j < COMMITMENT_GRID; j++) {
                 for (int i = 0; i < COMMITMENT_GRID; i++) {
@@ -109,6 +114,19 @@ public final class CircuitAnalysis {
         }
         return new AnalysisResult(states, branches, folds, basins, landscape, slices, values, passages, sizes,
                 commitment);
+    }
+
+    /** Mean first-passage times from the first stable state to the last, at each system size. */
+    private List<Switching.FirstPassage> passages(double[] p, List<SteadyState> stable, double[] sizes) {
+        double[] a = stable.get(0).state();
+        double[] b = stable.get(stable.size() - 1).state();
+        double radius = 0.25 * distance(a, b);
+        List<Switching.FirstPassage> passages = new ArrayList<>();
+        for (double omega : sizes) {
+            passages.add(Switching.meanFirstPassage(network, p, omega, a, b, radius, plan.trajectories(), 0.01,
+                    2000, plan.seed()));
+        }
+        return passages;
     }
 
     /**

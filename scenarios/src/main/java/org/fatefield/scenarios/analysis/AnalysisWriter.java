@@ -58,15 +58,19 @@ public final class AnalysisWriter {
         if (plan.hasSecond()) {
             foldCurves(result.foldCurves());
         }
-        basins(result);
-        landscape(result);
-        switching(result);
+        firstPassages(result);
         String xName = species.get(plan.xSpecies());
-        String yName = species.get(plan.ySpecies());
         figure("bifurcation", BifurcationDiagramChart.create(result.branches(), plan.xSpecies(), plan.parameter(), xName));
         if (plan.hasSecond()) {
             figure("bistable-region", BistableRegionChart.create(result.foldCurves(), plan.parameter(), plan.second()));
         }
+        if (!plan.hasPlane()) {
+            return;
+        }
+        basins(result);
+        landscape(result);
+        commitment(result);
+        String yName = species.get(plan.ySpecies());
         double[] upper = analysis.upperCorner();
         figure("phase-portrait", PhasePortraitChart.create(network, analysis.parametersAt(plan.at()),
                 new double[species.size()], plan.xSpecies(), plan.ySpecies(), new double[2],
@@ -212,7 +216,7 @@ public final class AnalysisWriter {
         }
     }
 
-    private void switching(AnalysisResult result) throws IOException {
+    private void firstPassages(AnalysisResult result) throws IOException {
         table("switching.csv", List.of("system_size", "mean_first_passage_h", "sd_h", "ci95_low_h", "ci95_high_h",
                 "arrived", "censored"), rows -> {
                     for (int k = 0; k < result.passages().size(); k++) {
@@ -223,6 +227,9 @@ public final class AnalysisWriter {
                                 Integer.toString(f.censored())));
                     }
                 });
+    }
+
+    private void commitment(AnalysisResult result) throws IOException {
         double[] upper = new double[] {result.basins().xs()[result.basins().xs().length - 1],
             result.basins().ys()[result.basins().ys().length - 1]};
         table("commitment.csv", List.of(species.get(plan.xSpecies()), species.get(plan.ySpecies()), "probability"),

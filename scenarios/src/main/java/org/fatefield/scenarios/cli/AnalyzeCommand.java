@@ -146,7 +146,8 @@ final class AnalyzeCommand implements Callable<Integer> {
             r2 = secondRange != null ? parseRange(secondRange, "--second-range") : around(base[secondIndices[0]]);
         }
         int x = species(network, xSpecies, 0, "--x");
-        int y = species(network, ySpecies, 1, "--y");
+        // A one-species circuit has no state plane: steady states, continuation and switching only.
+        int y = network.speciesCount() == 1 && ySpecies == null ? -1 : species(network, ySpecies, 1, "--y");
         return new AnalysisPlan(name, indices, r[0], r[1], at != null ? at : 0.5 * (r[0] + r[1]), second,
                 secondIndices, r2[0], r2[1], x, y,
                 systemSize != null ? systemSize : loaded.tissue().circuit().systemSize(), trajectories, grid,

@@ -93,4 +93,40 @@ class AnalyzeCommandTest {
         assertTrue(err.toString().contains("Lum.repression"), err.toString());
         assertTrue(Files.notExists(tmp.resolve("x")));
     }
+
+    @Test
+    void aOneSpeciesCircuitGetsItsSteadyStatesFoldAndSwitchingWithoutPlaneFigures() throws IOException {
+        // dX/dt = b + v h(X) - X with h(X) = X^4 / (K^4 + X^4), b = 0.02, K = 0.5. A fold has f = 0 and
+        // f' = 0: v = 1 / h'(X) and b + h(X) / h'(X) = X, one equation in X, solved here by Brent's method.
+        Path scenario = tmp.resolve("one-gene-switch.toml");
+        try (var in = AnalyzeCommandTest.class.getResourceAsStream("/one-gene-switch.toml")) {
+            Files.write(scenario, in.readAllBytes());
+        }
+        Path out = tmp.resolve("one-gene");
+        StringWriter err = new StringWriter();
+        int code = FatefieldCommand.execute(new PrintWriter(new StringWriter()), new PrintWriter(err), "analyze",
+                scenario.toString(), "--out", out.toString(), "--parameter", "vmax", "--range", "0.5:1.5", "--at",
+                "1.0", "--trajectories", "6");
+        assertEquals(0, code, err.toString());
+        double b = 0.02;
+        double k = 0.5;
+        DoubleUnaryOperator h = x -> HillFunctions.activation(x, k, 4);
+        DoubleUnaryOperator slope = x -> HillFunctions.activationSlope(x, k, 4);
+        double xFold = new BrentSolver(1e-14).solve(200, x -> b + h.applyAsDouble(x) / slope.applyAsDouble(x) - x,
+                0.5, 0.9);
+        double vFold = 1 / slope.applyAsDouble(xFold);
+        List<CSVRecord> special = csv(out.resolve("special-points.csv"));
+        assertEquals(1, special.size(), "one fold in [0.5, 1.5]; the other is near v = 822");
+        assertEquals(vFold, Double.parseDouble(special.get(0).get("vmax")), 1e-7);
+        assertEquals(xFold, Double.parseDouble(special.get(0).get("X")), 1e-6);
+        List<CSVRecord> states = csv(out.resolve("steady-states.csv"));
+        assertEquals(3, states.size(), "bistable at v = 1");
+        for (CSVRecord state : states) {
+            double x = Double.parseDouble(state.get("X"));
+            assertEquals(0, b + h.applyAsDouble(x) - x, 1e-8, "a steady state of the law at X = " + x);
+        }
+        assertTrue(Files.exists(out.resolve("switching.csv")) && Files.exists(out.resolve("bifurcation.png")));
+        assertTrue(!Files.exists(out.resolve("phase-portrait.png")) && !Files.exists(out.resolve("basins.csv")),
+                "no state-plane figures for one species");
+    }
 }
