@@ -3,7 +3,6 @@ package org.fatefield.scenarios.cli;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assertions.fail;
-import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import java.awt.Rectangle;
 import java.awt.Robot;
@@ -32,14 +31,7 @@ class ViewCommandIT {
 
     @Test
     void theReadmeCommandOpensAWindowThatEndsTheProgramWhenClosed() throws Exception {
-        boolean display = System.getenv("DISPLAY") != null;
-        boolean required = "1".equals(System.getenv("FATEFIELD_REQUIRE_DISPLAY"));
-        if (!display && !required) {
-            System.err.println("ViewCommandIT skipped: no DISPLAY (.ci/run starts Xvfb; set"
-                    + " FATEFIELD_REQUIRE_DISPLAY=1 to make this a failure)");
-        }
-        assumeTrue(display || required, "no display");
-        assertTrue(display, "FATEFIELD_REQUIRE_DISPLAY=1 but DISPLAY is not set");
+        RequiredDisplay.check("ViewCommandIT");
         Path jar = Path.of("target", "fatefield.jar").toAbsolutePath();
         assertTrue(Files.exists(jar), "the jar is built before this test: " + jar);
         Path log = Path.of("target", "view-from-jar.log").toAbsolutePath();

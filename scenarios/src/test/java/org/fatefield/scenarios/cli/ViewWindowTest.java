@@ -2,7 +2,6 @@ package org.fatefield.scenarios.cli;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import java.awt.image.BufferedImage;
 import java.nio.charset.StandardCharsets;
@@ -25,14 +24,7 @@ class ViewWindowTest {
 
     @Test
     void windowShowsTheTissueAndItsCharts() throws Exception {
-        boolean display = System.getenv("DISPLAY") != null;
-        boolean required = "1".equals(System.getenv("FATEFIELD_REQUIRE_DISPLAY"));
-        if (!display && !required) {
-            System.err.println("ViewWindowTest skipped: no DISPLAY (.ci/run starts Xvfb; set"
-                    + " FATEFIELD_REQUIRE_DISPLAY=1 to make this a failure)");
-        }
-        assumeTrue(display || required, "no display");
-        assertTrue(display, "FATEFIELD_REQUIRE_DISPLAY=1 but DISPLAY is not set");
+        RequiredDisplay.check("ViewWindowTest");
         Path shot = Path.of("target", "view-screenshot.png").toAbsolutePath();
         Files.createDirectories(shot.getParent());
         Process process = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
