@@ -71,7 +71,7 @@ final class ReplicatesCommand implements Callable<Integer> {
             return FatefieldCommand.INVALID_INPUT;
         }
         long first = seed.orElse(loaded.seed());
-        int workers = threads.resolve();
+        int workers = threads.resolveFor(loaded);
         Path out = this.out.path();
         List<String> fates = loaded.tissue().fates().fateNames();
         double[][] boundaries = new double[fates.size()][runs];

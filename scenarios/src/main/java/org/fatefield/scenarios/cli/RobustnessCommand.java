@@ -76,7 +76,7 @@ final class RobustnessCommand implements Callable<Integer> {
         try {
             Path out = this.out.path();
             RunFolder.checkUsable(out, false, false);
-            int workers = threads.resolve();
+            int workers = threads.resolveFor(loaded);
             List<RobustnessAnalysis.Sensitivity> result = RobustnessAnalysis.run(loaded.tissue(), perturbations,
                     fraction, replicates, loaded.seed(), workers);
             RunFolder folder = RunFolder.open(out);

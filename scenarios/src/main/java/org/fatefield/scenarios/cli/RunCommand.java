@@ -98,7 +98,7 @@ final class RunCommand implements Callable<Integer> {
                 frameSteps = Math.max(1, Math.round(framesEvery / loaded.tissue().timing().step()));
             }
             Tissue tissue = ScenarioRunner.run(RunRequest.of(loaded, folder).withSeed(runSeed)
-                    .withThreads(threads.resolve()).withForce(force.given()).withProgress(progress)
+                    .withThreads(threads.resolveFor(loaded)).withForce(force.given()).withProgress(progress)
                     .withCheckpointSteps(every).withResume(resume).withFrameSteps(frameSteps));
             if (!quiet) {
                 TimeSeries.Row last = tissue.series().last();

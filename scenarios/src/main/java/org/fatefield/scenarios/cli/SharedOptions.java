@@ -54,7 +54,8 @@ final class SharedOptions {
         private Integer value;
 
         @Option(names = "--threads", paramLabel = "N", description = "threads to step cells on, from 1 to four"
-                + " per processor (default: all processors); results do not depend on it")
+                + " per processor (default: one for a tissue expected to stay under 20000 cells, else all"
+                + " processors); results do not depend on it")
         void set(int threads) {
             checkWorkers(spec, "--threads", threads);
             this.value = threads;
@@ -64,6 +65,23 @@ final class SharedOptions {
         int resolve() {
             return value != null ? value : Runtime.getRuntime().availableProcessors();
         }
+
+        /**
+         * The thread count given, or by default one thread for a tissue expected to stay below
+         * {@value #SMALL_TISSUE} cells (a step of a small tissue is too short for handing work
+         * between threads to pay: two threads made a 300-cell run three times slower) and every
+         * processor otherwise.
+         */
+        int resolveFor(Scenario scenario) {
+            if (value != null) {
+                return value;
+            }
+            return WorkEstimate.of(scenario.tissue()).finalCells() < SMALL_TISSUE ? 1
+                    : Runtime.getRuntime().availableProcessors();
+        }
+
+        /** Cells below which a run takes one thread unless told otherwise. */
+        static final int SMALL_TISSUE = 20_000;
     }
 
     /**

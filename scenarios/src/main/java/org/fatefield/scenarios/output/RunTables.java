@@ -113,6 +113,7 @@ public final class RunTables {
     /**
      * {@code cells.csv}: the live cells at the end: {@code id, parent_id, generation, x_um, y_um},
      * one {@code <species>_molecules} column per species (concentration times system size, rounded),
+     * one {@code <species>_concentration} column per species (at full precision),
      * {@code morphogen}, {@code control_<parameter>} (the first coupled parameter's local value)
      * and {@code fate}.
      */
@@ -123,6 +124,9 @@ public final class RunTables {
         List<String> header = new ArrayList<>(List.of("id", "parent_id", "generation", "x_um", "y_um"));
         for (String s : species) {
             header.add(s + "_molecules");
+        }
+        for (String s : species) {
+            header.add(s + "_concentration");
         }
         header.add("morphogen");
         header.add("control_" + controlName(spec));
@@ -139,6 +143,10 @@ public final class RunTables {
             values.add(number(cell.y()));
             for (int i = 0; i < species.size(); i++) {
                 values.add(Long.toString(Math.round(cell.concentration(i) * omega)));
+            }
+            for (int i = 0; i < species.size(); i++) {
+                // Full precision: the shortest decimal that reads back as the same double.
+                values.add(Double.toString(cell.concentration(i)));
             }
             double signal = tissue.signalAt(cell);
             values.add(number(signal));
