@@ -21,6 +21,10 @@ public final class FatefieldCommand implements Runnable {
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
+    @CommandLine.Option(names = "--debug", scope = CommandLine.ScopeType.INHERIT,
+            description = "on a fault in Fatefield, print the stack trace as well")
+    private boolean debug;
+
     /** Exit code of a scenario with problems. */
     static final int INVALID_INPUT = 1;
     /** Exit code when output cannot be written. */
@@ -47,7 +51,7 @@ public final class FatefieldCommand implements Runnable {
 
     /**
      * The command line, with a handler that turns an unexpected exception into one line saying
-     * what failed (no stack trace reaches a user unless FATEFIELD_DEBUG=1).
+     * what failed (no stack trace reaches a user unless --debug or FATEFIELD_DEBUG=1).
      */
     private static CommandLine commandLine() {
         CommandLine line = new CommandLine(new FatefieldCommand());
@@ -64,7 +68,7 @@ public final class FatefieldCommand implements Runnable {
                     + (e.getMessage() == null ? "" : ": " + e.getMessage()));
             err.println("This is a fault in Fatefield, not in your input; please report it with the scenario and the"
                     + " command line. Files already finished in the output folder are kept.");
-            if ("1".equals(System.getenv("FATEFIELD_DEBUG"))) {
+            if (parsed.hasMatchedOption("--debug") || "1".equals(System.getenv("FATEFIELD_DEBUG"))) {
                 e.printStackTrace(err);
             }
             err.flush();
