@@ -3,9 +3,7 @@ package org.fatefield.engine.tissue;
 import java.io.DataInputStream;
 import java.io.DataOutputStream;
 import java.io.IOException;
-import java.util.Arrays;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Objects;
@@ -13,12 +11,9 @@ import java.util.Optional;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.fatefield.circuits.random.EmbeddedStream;
 import org.fatefield.circuits.random.RandomStreams;
-import org.fatefield.circuits.sim.CircuitStepper;
 import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.cell.CellRandom;
 import org.fatefield.engine.cell.CellPopulation;
-import org.fatefield.engine.coupling.ParameterMapping;
-import org.fatefield.engine.division.SizeControl;
 import org.fatefield.engine.field.MorphogenField;
 import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.lineage.Ancestry;
@@ -54,28 +49,18 @@ public final class Tissue extends SimState {
     /** Steps between relocations of the cells in memory in stepping order (see CellPopulation). */
     private int relocateEvery = 100;
     private final List<TissueObserver> observers = new ArrayList<>();
-    private CellRandom[] randoms;
-    /** Per worker, spaced a cache line apart: the lowest id whose state the cell loop found not finite. */
-    private static final int PAD = 16;
-    private long[] failedCell;
-    private int[] failedSpecies;
-    private double[] failedValue;
 
     private final TissueSpec spec;
     private final RandomStreams streams;
     private CellPopulation population;
     private MorphogenField field;
     private MorphogenField[] fields;
-    private double[][] signals;
     private TimeSeries series;
     private final int threads;
     private BlockParallel pool;
-    private CircuitStepper[] steppers;
     private OverlapRepulsion mechanics;
-    private double[][] params;
-    private double[] baseParameters;
-    private int[] noisyIndices;
     private CellDivision division;
+    private CellLoop cellLoop;
     /** Which cells the last cell loop found ready to divide, by population index. */
     private boolean[] ready = new boolean[0];
     private long steps;
@@ -119,27 +104,10 @@ public final class Tissue extends SimState {
             pool.close();
         }
         pool = new BlockParallel(threads);
-        baseParameters = spec.mapping().base();
-        noisyIndices = spec.extrinsic().stream().flatMapToInt(noise -> Arrays.stream(noise.indices()))
-                .distinct().toArray();
-        steppers = new CircuitStepper[threads];
-        randoms = new CellRandom[threads];
-        failedCell = new long[threads * PAD];
-        Arrays.fill(failedCell, Long.MAX_VALUE);
-        failedSpecies = new int[threads * PAD];
-        failedValue = new double[threads * PAD];
-        params = new double[threads][];
-        CircuitStepper prototype = circuit.noise().stepper(circuit.network(), circuit.systemSize());
-        for (int w = 0; w < threads; w++) {
-            steppers[w] = w == 0 ? prototype : prototype.copy();
-            randoms[w] = new CellRandom();
-            params[w] = Arrays.copyOf(spec.mapping().base(), spec.mapping().parameterCount()
-                    + CircuitStepper.SCRATCH_PADDING);
-        }
-        signals = new double[threads][fields.length + CircuitStepper.SCRATCH_PADDING];
+        cellLoop = new CellLoop(spec, threads, fields.length);
         mechanics = new OverlapRepulsion(spec.domain(), growth.repulsionRate(), growth.cellRadius(),
                 growth.adhesion(), 0.2);
-        division = new CellDivision(spec, streams, randoms[0]);
+        division = new CellDivision(spec, streams, cellLoop.serialRandom());
         steps = 0;
         ancestry = new Ancestry();
         lineageClosed = false;
@@ -156,7 +124,7 @@ public final class Tissue extends SimState {
             Cell founder = new Cell(id, -1, 0, -age, cycle, circuit.initialState(), birth.streamWords(), point[0],
                     point[1], 1.0, growth.size().control().volume(1.0, age, cycle));
             if (!spec.extrinsic().isEmpty()) {
-                founder.setScores(ExtrinsicNoise.founderScores(spec.extrinsic(), randoms[0].of(founder)));
+                founder.setScores(ExtrinsicNoise.founderScores(spec.extrinsic(), cellLoop.serialRandom().of(founder)));
             }
             population.add(founder);
             ancestry.add(id, -1);
@@ -206,75 +174,9 @@ public final class Tissue extends SimState {
         }
     }
 
-    /**
-     * The cell loop: each cell reads every field at its position, sets its parameters from them
-     * (and its extrinsic factors), advances its circuit, dilutes and ages.
-     */
+    /** The cell stage of the tick (see {@link CellLoop}). */
     private void stepCells(double dt, double end) {
-        ParameterMapping mapping = spec.mapping();
-        CellPopulation cells = population;
-        boolean dilute = spec.growth().dilution();
-        SizeControl size = spec.growth().size().control();
-        List<ExtrinsicNoise> extrinsic = spec.extrinsic();
-        if (ready.length < cells.size()) {
-            ready = new boolean[cells.size() + cells.size() / 4];
-        }
-        boolean[] readyNow = ready;
-        pool.forEach(cells.size(), (from, to, worker) -> {
-            CircuitStepper circuit = steppers[worker];
-            CellRandom random = randoms[worker];
-            double[] p = params[worker];
-            double[] levels = signals[worker];
-            for (int i = from; i < to; i++) {
-                Cell cell = cells.get(i);
-                for (int f = 0; f < fields.length; f++) {
-                    levels[f] = fields[f].sample(cell.x(), cell.y());
-                }
-                if (!extrinsic.isEmpty()) {
-                    restoreNoisy(p);
-                }
-                mapping.applySignals(levels, p);
-                for (int k = 0; k < extrinsic.size(); k++) {
-                    extrinsic.get(k).apply(cell.scores()[k], p);
-                }
-                double[] state = cell.liveState();
-                circuit.advance(state, p, dt, random.of(cell));
-                for (int s = 0; s < state.length; s++) {
-                    if (!Double.isFinite(state[s]) && cell.id() < failedCell[worker * PAD]) {
-                        failedCell[worker * PAD] = cell.id();
-                        failedSpecies[worker * PAD] = s;
-                        failedValue[worker * PAD] = state[s];
-                    }
-                }
-                cell.grow(end, size, dilute);
-                readyNow[i] = cell.readyToDivide(size, end);
-            }
-        });
-        checkFinite(end);
-    }
-
-    /**
-     * Stops the run if the cell loop left any state that is not a finite number, naming the cell
-     * of lowest id (the same whatever the thread count).
-     */
-    private void checkFinite(double now) {
-        int worst = -1;
-        for (int w = 0; w < threads; w++) {
-            if (failedCell[w * PAD] != Long.MAX_VALUE && (worst < 0 || failedCell[w * PAD] < failedCell[worst * PAD])) {
-                worst = w;
-            }
-        }
-        if (worst >= 0) {
-            throw new SimulationFailure(failedCell[worst * PAD], now,
-                    spec.circuit().network().speciesNames().get(failedSpecies[worst * PAD]), failedValue[worst * PAD]);
-        }
-    }
-
-    /** Resets the parameters extrinsic noise multiplies to their base values. */
-    private void restoreNoisy(double[] p) {
-        for (int index : noisyIndices) {
-            p[index] = baseParameters[index];
-        }
+        ready = cellLoop.step(population, fields, dt, end, pool);
     }
 
     /**
@@ -285,7 +187,7 @@ public final class Tissue extends SimState {
     private void removeDead(double dt) {
         double p = spec.growth().deathRate() * dt;
         double now = time();
-        CellRandom random = randoms[0];
+        CellRandom random = cellLoop.serialRandom();
         List<Cell> dead = new ArrayList<>();
         population.removeIf(cell -> {
             if (random.of(cell).nextDouble() >= p) {
