@@ -3,6 +3,8 @@ package org.fatefield.scenarios.output;
 import java.io.BufferedWriter;
 import java.io.IOException;
 import java.io.InputStream;
+import java.io.OutputStream;
+import java.io.OutputStreamWriter;
 import java.io.Reader;
 import java.io.UncheckedIOException;
 import java.io.Writer;
@@ -19,6 +21,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.zip.CRC32;
+import java.util.zip.CheckedOutputStream;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVPrinter;
 import org.apache.commons.csv.CSVRecord;
@@ -35,13 +38,14 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
 
     private final Path folder;
     private final Path partial;
-    private final BufferedWriter out;
     private final CSVPrinter printer;
+    /** CRC-32 of every byte the table holds, kept up to date as bytes reach the file. */
+    private final CRC32 crc;
     private final List<String> fates;
 
     /** Starts a new table in {@code folder} for a run with these fate names. */
     public static LineageFiles start(Path folder, List<String> fates) throws IOException {
-        return new LineageFiles(folder, fates, -1);
+        return new LineageFiles(folder, fates, -1, new CRC32());
     }
 
     /**
@@ -69,14 +73,15 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
         if (size < length) {
             throw new IOException(damaged + "holds " + size + " bytes but held " + length + " at the checkpoint" + fix);
         }
-        if (prefixCrc(partial, length) != crc) {
+        CRC32 prefix = prefixCrc(partial, length);
+        if (prefix.getValue() != crc) {
             throw new IOException(damaged + "does not hold the rows it held at the checkpoint" + fix);
         }
-        return new LineageFiles(folder, fates, length);
+        return new LineageFiles(folder, fates, length, prefix);
     }
 
-    /** The CRC-32 of the first {@code length} bytes of {@code file}. */
-    static long prefixCrc(Path file, long length) throws IOException {
+    /** The CRC-32 of the first {@code length} bytes of {@code file}, ready to go on with what follows. */
+    private static CRC32 prefixCrc(Path file, long length) throws IOException {
         CRC32 crc = new CRC32();
         byte[] buffer = new byte[1 << 16];
         try (InputStream in = Files.newInputStream(file)) {
@@ -90,23 +95,28 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
                 left -= read;
             }
         }
-        return crc.getValue();
+        return crc;
     }
 
-    private LineageFiles(Path folder, List<String> fates, long resumeAt) throws IOException {
+    /**
+     * Opens the table; with {@code resumeAt >= 0} it is cut back to that many bytes, whose
+     * checksum {@code crc} already holds, and continued.
+     */
+    private LineageFiles(Path folder, List<String> fates, long resumeAt, CRC32 crc) throws IOException {
         this.folder = folder;
         this.partial = RunLayout.partial(folder.resolve(RunLayout.LINEAGE));
         this.fates = List.copyOf(fates);
+        this.crc = crc;
         if (resumeAt >= 0) {
-            try (FileChannel channel = FileChannel.open(partial,
-                    StandardOpenOption.WRITE)) {
+            try (FileChannel channel = FileChannel.open(partial, StandardOpenOption.WRITE)) {
                 channel.truncate(resumeAt);
             }
-            this.out = Files.newBufferedWriter(partial, StandardCharsets.UTF_8, StandardOpenOption.APPEND);
-            this.printer = RunTables.printer(out);
-        } else {
-            this.out = Files.newBufferedWriter(partial, StandardCharsets.UTF_8);
-            this.printer = RunTables.printer(out);
+        }
+        OutputStream raw = resumeAt >= 0 ? Files.newOutputStream(partial, StandardOpenOption.APPEND)
+                : Files.newOutputStream(partial);
+        this.printer = RunTables.printer(new BufferedWriter(new OutputStreamWriter(new CheckedOutputStream(raw, crc),
+                StandardCharsets.UTF_8)));
+        if (resumeAt < 0) {
             printer.printRecord(RunTables.LINEAGE_HEADER);
         }
     }
@@ -117,10 +127,13 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
         return Files.size(partial);
     }
 
-    /** The CRC-32 of the first {@code length} bytes of the partial table (for checkpoints). */
-    public long flushedCrc(long length) throws IOException {
+    /**
+     * The CRC-32 of the table as flushed so far (for checkpoints, beside {@link #flushedLength});
+     * kept as the bytes are written, so a checkpoint never reads the table back.
+     */
+    public long flushedCrc() throws IOException {
         printer.flush();
-        return prefixCrc(partial, length);
+        return crc.getValue();
     }
 
     @Override

@@ -80,8 +80,7 @@ public final class ScenarioRunner {
         if (request.checkpointSteps() > 0) {
             tissue.addObserver(TissueObserver.every(request.checkpointSteps(), unchecked(t -> {
                 if (!t.finished()) {
-                    long length = lineage.flushedLength();
-                    checkpoints.save(t, length, lineage.flushedCrc(length));
+                    checkpoints.save(t, lineage.flushedLength(), lineage.flushedCrc());
                 }
             })));
         }
