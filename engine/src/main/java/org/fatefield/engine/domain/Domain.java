@@ -84,6 +84,12 @@ public sealed interface Domain permits Domain.Rectangle, Domain.Disc, Domain.Str
         }
     }
 
+    /** A uniform point at which a disc of radius {@code r} lies inside the width x height box. */
+    private static void boxPoint(UniformRandomProvider rng, double r, double width, double height, double[] out) {
+        out[0] = r + (width - 2 * r) * rng.nextDouble();
+        out[1] = r + (height - 2 * r) * rng.nextDouble();
+    }
+
     /** Clamps x (and, for walls along y, y) into the box for radius {@code r}. */
     private static void clampToBox(double x, double y, double r, double width, double height, boolean wrapY,
             double[] out) {
@@ -107,8 +113,7 @@ public sealed interface Domain permits Domain.Rectangle, Domain.Disc, Domain.Str
 
         @Override
         public void samplePoint(UniformRandomProvider rng, double r, double[] out) {
-            out[0] = r + (width - 2 * r) * rng.nextDouble();
-            out[1] = r + (height - 2 * r) * rng.nextDouble();
+            boxPoint(rng, r, width, height, out);
         }
 
         @Override
@@ -139,8 +144,7 @@ public sealed interface Domain permits Domain.Rectangle, Domain.Disc, Domain.Str
         public void samplePoint(UniformRandomProvider rng, double r, double[] out) {
             // Rejection from the bounding box: uniform in the disc.
             do {
-                out[0] = r + (width - 2 * r) * rng.nextDouble();
-                out[1] = r + (height - 2 * r) * rng.nextDouble();
+                boxPoint(rng, r, width, height, out);
             } while (Math.hypot(out[0] - 0.5 * width, out[1] - 0.5 * height) > 0.5 * Math.min(width, height) - r);
         }
 

@@ -101,16 +101,10 @@ final class CellDivision {
         int count = 0;
         for (int i = 0; i < n; i++) {
             if (ready[i]) {
-                count++;
-            }
-        }
-        if (order.length < count) {
-            order = new long[count + count / 4];
-        }
-        int k = 0;
-        for (int i = 0; i < n; i++) {
-            if (ready[i]) {
-                order[k++] = (population.get(i).id() << 32) | i;
+                if (count == order.length) {
+                    order = Arrays.copyOf(order, Math.max(16, count + count / 2));
+                }
+                order[count++] = (population.get(i).id() << 32) | i;
             }
         }
         Arrays.sort(order, 0, count);

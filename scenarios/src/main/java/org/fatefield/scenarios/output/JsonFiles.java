@@ -41,9 +41,7 @@ public final class JsonFiles {
      * @throws IOException naming the file if it is missing or is not a JSON object
      */
     public static JsonObject read(Path file) throws IOException {
-        if (!Files.exists(file)) {
-            throw new IOException(file + " is missing: is this a finished Fatefield run folder?");
-        }
+        RunLayout.requireFile(file);
         try {
             return JsonParser.parseString(Files.readString(file, StandardCharsets.UTF_8)).getAsJsonObject();
         } catch (JsonParseException | IllegalStateException e) {

@@ -56,18 +56,14 @@ public final class RunFolderReader {
     /** The copy of the scenario that was run. */
     public String scenarioText() throws IOException {
         Path file = run.resolve(RunLayout.SCENARIO_COPY);
-        if (!Files.exists(file)) {
-            throw new IOException(file + " is missing: is this a finished Fatefield run folder?");
-        }
+        RunLayout.requireFile(file);
         return Files.readString(file, StandardCharsets.UTF_8);
     }
 
     /** The bytes of an image (or any file) of the run, named as in {@link RunLayout}. */
     public byte[] bytes(String name) throws IOException {
         Path file = run.resolve(name);
-        if (!Files.exists(file)) {
-            throw new IOException(file + " is missing: is this a finished Fatefield run folder?");
-        }
+        RunLayout.requireFile(file);
         return Files.readAllBytes(file);
     }
 

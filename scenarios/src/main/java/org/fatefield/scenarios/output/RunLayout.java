@@ -1,5 +1,7 @@
 package org.fatefield.scenarios.output;
 
+import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 
 /**
@@ -71,6 +73,18 @@ public final class RunLayout {
     public static Path defaultFolder(String scenarioName, String suffix) {
         String safe = scenarioName.replaceAll("[^A-Za-z0-9._-]", "_").replaceAll("^[.]+", "");
         return Path.of((safe.isEmpty() ? "scenario" : safe) + suffix);
+    }
+
+    /**
+     * Checks that a file a finished run folder holds is there.
+     *
+     * @throws IOException naming it, if it is missing
+     */
+    static Path requireFile(Path file) throws IOException {
+        if (!Files.exists(file)) {
+            throw new IOException(file + " is missing: is this a finished Fatefield run folder?");
+        }
+        return file;
     }
 
     /** The folder of the replicate run with {@code seed} in a replicate set. */

@@ -56,9 +56,7 @@ public final class RunTables {
      * @throws IOException naming the file if it is missing or malformed
      */
     public static List<CSVRecord> records(Path file) throws IOException {
-        if (!Files.exists(file)) {
-            throw new IOException(file + " is missing: is this a finished Fatefield run folder?");
-        }
+        RunLayout.requireFile(file);
         try (Reader in = Files.newBufferedReader(file, StandardCharsets.UTF_8); CSVParser parser = parser(in)) {
             return parser.getRecords();
         } catch (UncheckedIOException | IllegalArgumentException | IllegalStateException e) {
