@@ -17,6 +17,18 @@ public final class Spectra {
      * sorted by decreasing real part, then increasing imaginary part.
      */
     public static Complex[] eigenvalues(double[][] jac) {
+        boolean zero = true;
+        for (double[] row : jac) {
+            for (double v : row) {
+                zero &= v == 0.0;
+            }
+        }
+        if (zero) {
+            // The decomposition refuses a zero matrix (it normalises eigenvectors); all eigenvalues are 0.
+            Complex[] zeros = new Complex[jac.length];
+            Arrays.fill(zeros, Complex.ZERO);
+            return zeros;
+        }
         Complex[] eigen = new EigenDecompositionNonSymmetric(new Array2DRowRealMatrix(jac, true)).getEigenvalues();
         Arrays.sort(eigen, Comparator.comparingDouble(Complex::getReal).reversed()
                 .thenComparing(Comparator.comparingDouble(Complex::getImaginary)));

@@ -67,7 +67,7 @@ public final class CircuitAnalysis {
     public AnalysisResult run() {
         double[] p = parametersAt(plan.at());
         List<SteadyState> states = SteadyStateFinder.of(network).find(p, lower, upper);
-        List<Branch> branches = continuation();
+        List<Branch> branches = diagram();
         List<FoldCurve> folds = plan.hasSecond() ? foldCurves(branches) : List.of();
         List<SteadyState> stable = states.stream().filter(SteadyState::isStable).toList();
         double[] sizes = {plan.systemSize() / 8, plan.systemSize() / 4, plan.systemSize() / 2, plan.systemSize()};
@@ -143,8 +143,11 @@ public final class CircuitAnalysis {
                 new double[2], corner, GRID, new QuasiPotential.Sampling(plan.trajectories(), 20, 200, 0.01, seed));
     }
 
-    /** Branches through every steady state at both ends of the range, without repeats. */
-    private List<Branch> continuation() {
+    /**
+     * The bifurcation diagram: branches through every steady state at both ends of the range and
+     * at the plan's value, each stretch traced once, each special point listed once.
+     */
+    public List<Branch> diagram() {
         NetworkSystem system = new NetworkSystem(network, base, plan.indices());
         double span = plan.max() - plan.min();
         ContinuationSettings settings = ContinuationSettings.defaults().withMaxStep(Math.max(1e-3, span / 40));
@@ -155,14 +158,14 @@ public final class CircuitAnalysis {
                 if (onKnownBranch(s.state(), value, branches)) {
                     continue;
                 }
-                for (Branch b : continuation.diagram(s.state(), value, plan.min(), plan.max(), true, 2)) {
+                for (Branch b : continuation.diagram(s.state(), value, plan.min(), plan.max(), true, 2, branches)) {
                     if (b.points().size() > 1 && !duplicate(b, branches)) {
                         branches.add(new Branch(branches.size(), b.points(), b.specials()));
                     }
                 }
             }
         }
-        return branches;
+        return EquilibriumContinuation.withoutRepeatedSpecials(branches);
     }
 
     /**
@@ -182,7 +185,7 @@ public final class CircuitAnalysis {
             for (int i : plan.secondIndices()) {
                 nudged[i] = secondValue;
             }
-            branches = new CircuitAnalysis(network, nudged, plan).continuation();
+            branches = new CircuitAnalysis(network, nudged, plan).diagram();
         }
         List<FoldCurve> curves = new ArrayList<>();
         for (Branch branch : branches) {

@@ -1,6 +1,7 @@
 package org.fatefield.engine.metrics;
 
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
 import org.fatefield.circuits.analysis.continuation.Branch;
 import org.fatefield.circuits.analysis.continuation.ContinuationSettings;
@@ -19,15 +20,23 @@ import org.fatefield.engine.tissue.TissueSpec;
  * row-averaged morphogen, crosses each of them.
  *
  * @param criticalValues control-parameter values of the circuit's folds and branch points
+ * @param kinds          what each critical value is, e.g. "saddle-node (fold)" or "supercritical pitchfork (branch point)"
  * @param positions      positions along x (µm) where the local control parameter crosses them (NaN if it does not)
  * @param undefined      why there is no prediction (no coupling, or no steady state to continue), or
  *                       empty when the lists above are the prediction
  */
-public record PredictedBoundary(double[] criticalValues, double[] positions, String undefined) {
+public record PredictedBoundary(double[] criticalValues, String[] kinds, double[] positions, String undefined) {
+
+    /** Copies the arrays. */
+    public PredictedBoundary {
+        criticalValues = criticalValues.clone();
+        kinds = kinds.clone();
+        positions = positions.clone();
+    }
 
     /** No prediction, for the reason given. */
     public static PredictedBoundary undefined(String reason) {
-        return new PredictedBoundary(new double[0], new double[0], reason);
+        return new PredictedBoundary(new double[0], new String[0], new double[0], reason);
     }
 
     /**
@@ -66,16 +75,18 @@ public record PredictedBoundary(double[] criticalValues, double[] positions, Str
             return undefined("the circuit's steady states could not be continued over the control range ["
                     + lo + ", " + hi + "]: " + e.getMessage());
         }
-        List<Double> critical = new ArrayList<>();
+        List<SpecialPoint> critical = new ArrayList<>();
         for (Branch b : branches) {
             for (SpecialPoint s : b.specials()) {
-                boolean relevant = s.type() == SpecialPointType.SADDLE_NODE || s.type() == SpecialPointType.BRANCH_POINT;
-                if (relevant && critical.stream().noneMatch(c -> Math.abs(c - s.parameter()) < 1e-6)) {
-                    critical.add(s.parameter());
+                boolean relevant = s.type() == SpecialPointType.SADDLE_NODE || s.type().isBranchPoint();
+                if (relevant && critical.stream().noneMatch(c -> Math.abs(c.parameter() - s.parameter()) < 1e-6)) {
+                    critical.add(s);
                 }
             }
         }
-        double[] values = critical.stream().mapToDouble(Double::doubleValue).sorted().toArray();
+        critical.sort(Comparator.comparingDouble(SpecialPoint::parameter));
+        double[] values = critical.stream().mapToDouble(SpecialPoint::parameter).toArray();
+        String[] kinds = critical.stream().map(SpecialPoint::description).toArray(String[]::new);
         double[] positions = new double[values.length];
         for (int k = 0; k < values.length; k++) {
             positions[k] = Double.NaN;
@@ -88,6 +99,6 @@ public record PredictedBoundary(double[] criticalValues, double[] positions, Str
                 }
             }
         }
-        return new PredictedBoundary(values, positions, "");
+        return new PredictedBoundary(values, kinds, positions, "");
     }
 }

@@ -136,7 +136,7 @@ public final class AnalysisWriter {
         List<String> special = new ArrayList<>(List.of("branch", "type", plan.parameter()));
         special.addAll(species);
         // The imaginary part of the critical eigenvalue pair at a Hopf point: an angular frequency.
-        special.addAll(List.of("frequency_rad_per_h", "eigenvalues"));
+        special.addAll(List.of("frequency_rad_per_h", "criticality", "normal_form_coefficient", "eigenvalues"));
         table("special-points.csv", special, rows -> {
             for (Branch b : branches) {
                 for (SpecialPoint s : b.specials()) {
@@ -145,7 +145,8 @@ public final class AnalysisWriter {
                     for (double v : s.state()) {
                         row.add(RunTables.number(v));
                     }
-                    row.addAll(List.of(RunTables.number(s.frequency()), eigenvalues(s.eigenvalues())));
+                    row.addAll(List.of(RunTables.number(s.frequency()), s.criticality().label(),
+                            RunTables.number(s.coefficient()), eigenvalues(s.eigenvalues())));
                     rows.add(row);
                 }
             }

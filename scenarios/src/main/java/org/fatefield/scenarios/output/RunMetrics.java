@@ -93,6 +93,7 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
         for (int k = 0; k < this.predicted.criticalValues().length; k++) {
             JsonObject p = new JsonObject();
             p.addProperty("critical_control_value", this.predicted.criticalValues()[k]);
+            p.addProperty("kind", this.predicted.kinds()[k]);
             p.addProperty("position_um", JsonFiles.finite(this.predicted.positions()[k]));
             predicted.add(p);
         }

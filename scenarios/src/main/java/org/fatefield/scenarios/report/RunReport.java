@@ -79,9 +79,10 @@ public final class RunReport {
         List<List<String>> predicted = new ArrayList<>();
         for (JsonElement e : metrics.getAsJsonArray("predicted_boundaries")) {
             JsonObject p = e.getAsJsonObject();
-            predicted.add(List.of(text(p.get("critical_control_value")), text(p.get("position_um"))));
+            predicted.add(List.of(text(p.get("critical_control_value")),
+                    p.has("kind") ? p.get("kind").getAsString() : "", text(p.get("position_um"))));
         }
-        page.table(List.of("critical control value (fold or branch point)", "predicted position (µm)"), predicted);
+        page.table(List.of("critical control value", "bifurcation", "predicted position (µm)"), predicted);
         JsonElement undefined = metrics.get("predicted_boundaries_undefined");
         if (undefined != null && !undefined.isJsonNull()) {
             page.paragraph("No boundary is predicted: " + undefined.getAsString() + ".");

@@ -66,8 +66,12 @@ class AnalyzeCommandTest {
             assertTrue(Files.size(out.resolve(name)) > 0, name);
         }
         CSVRecord pitchfork = csv(out.resolve("special-points.csv")).stream()
-                .filter(r -> r.get("type").equals("branch point (pitchfork)")).findFirst().orElseThrow();
+                .filter(r -> r.get("type").equals("pitchfork (branch point)")).findFirst().orElseThrow();
         assertEquals(pitchforkRepression(), Double.parseDouble(pitchfork.get("repression")), 1e-8);
+        // Past the pitchfork the symmetric state is a saddle between two stable nodes (asserted
+        // below): the asymmetric states are born stable, so the pitchfork is supercritical.
+        assertEquals("supercritical", pitchfork.get("criticality"));
+        assertTrue(Double.parseDouble(pitchfork.get("normal_form_coefficient")) < 0);
         List<CSVRecord> states = csv(out.resolve("steady-states.csv"));
         assertEquals(List.of("stable node", "saddle", "stable node"), states.stream().map(r -> r.get("type")).toList());
         assertTrue(csv(out.resolve("fold-curve.csv")).stream().anyMatch(r -> r.get("kind").equals("cusp")));
@@ -80,7 +84,8 @@ class AnalyzeCommandTest {
             assertEquals("svg", svg.getDocumentElement().getNodeName(), figure);
         }
         String bifurcation = Files.readString(out.resolve("bifurcation.svg"));
-        assertTrue(bifurcation.contains("branch point (pitchfork)"), "the special point is labelled in the SVG");
+        assertTrue(bifurcation.contains("supercritical pitchfork (branch point)"),
+                "the special point and its criticality are labelled in the SVG");
     }
 
     @Test

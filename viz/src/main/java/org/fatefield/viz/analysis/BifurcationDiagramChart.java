@@ -74,7 +74,7 @@ public final class BifurcationDiagramChart {
                 double sy = s.state()[species];
                 marks.add(sx, sy);
                 XYTextAnnotation label = new XYTextAnnotation(
-                        String.format(Locale.ROOT, "  %s, %s = %.4g", s.type().label(), parameter, sx), sx, sy);
+                        String.format(Locale.ROOT, "  %s, %s = %.4g", s.description(), parameter, sx), sx, sy);
                 label.setFont(ChartStyle.SMALL);
                 label.setTextAnchor(TextAnchor.BOTTOM_LEFT);
                 plot.addAnnotation(label);

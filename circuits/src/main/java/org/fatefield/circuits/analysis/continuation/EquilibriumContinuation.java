@@ -26,17 +26,17 @@ import org.hipparchus.linear.SingularValueDecomposition;
  */
 public final class EquilibriumContinuation {
 
-    private static final double IMAGINARY_TOLERANCE = 1e-9;
-
     private final ParametrisedSystem system;
     private final ContinuationSettings settings;
     private final PseudoArclength arclength;
+    private final SpecialPointLocator locator;
     private final int n;
 
     private EquilibriumContinuation(ParametrisedSystem system, ContinuationSettings settings) {
         this.system = system;
         this.settings = settings;
         this.arclength = new PseudoArclength(new EquilibriumBranchSystem(system), settings.tolerance(), 12);
+        this.locator = new SpecialPointLocator(system, arclength);
         this.n = system.dimension();
     }
 
@@ -56,6 +56,17 @@ public final class EquilibriumContinuation {
      */
     public List<Branch> diagram(double[] x0, double lambda0, double lambdaMin, double lambdaMax, boolean switchBranches,
             int depth) {
+        return diagram(x0, lambda0, lambdaMin, lambdaMax, switchBranches, depth, List.of());
+    }
+
+    /**
+     * As {@link #diagram(double[], double, double, double, boolean, int)}, but tracing stops where
+     * a branch runs onto one of the {@code known} branches (traced before, say from another start
+     * point), so no stretch is traced twice.
+     */
+    public List<Branch> diagram(double[] x0, double lambda0, double lambdaMin, double lambdaMax, boolean switchBranches,
+            int depth, List<Branch> known) {
+        List<List<BranchPoint>> before = known.stream().map(Branch::points).toList();
         double[] start = new double[n + 1];
         System.arraycopy(x0, 0, start, 0, n);
         start[n] = lambda0;
@@ -88,7 +99,7 @@ public final class EquilibriumContinuation {
             throw new IllegalArgumentException("the steady states through " + Arrays.toString(y) + " do not form a"
                     + " curve that can be continued (the Jacobian is singular in every direction there)");
         }
-        branches.add(joinBothWays(y, tangent, lambdaMin, lambdaMax, 0, crossings));
+        branches.add(joinBothWays(y, tangent, lambdaMin, lambdaMax, 0, crossings, before));
         List<Crossing> pending = new ArrayList<>(crossings);
         List<double[]> visited = new ArrayList<>();
         for (int level = 0; switchBranches && level < depth && !pending.isEmpty(); level++) {
@@ -103,28 +114,67 @@ public final class EquilibriumContinuation {
                     continue;
                 }
                 List<Crossing> found = new ArrayList<>();
-                Branch emerging = joinBothWays(crossing.y, direction, lambdaMin, lambdaMax, branches.size(), found);
-                // The switched branch starts on the branch point already reported on its parent.
-                List<SpecialPoint> own = emerging.specials().stream().filter(s -> !(s.type() == SpecialPointType.BRANCH_POINT
-                        && Math.abs(s.parameter() - crossing.y[n]) < 1e-4
-                        && maxDifference(s.state(), Arrays.copyOf(crossing.y, n)) < 1e-3)).toList();
-                branches.add(new Branch(emerging.id(), emerging.points(), own));
+                List<List<BranchPoint>> traced = new ArrayList<>(before);
+                branches.forEach(b -> traced.add(b.points()));
+                Branch emerging = joinBothWays(crossing.y, direction, lambdaMin, lambdaMax, branches.size(), found,
+                        traced);
+                if (emerging.points().size() > 1) {
+                    branches.add(emerging);
+                }
                 found.removeIf(c -> maxDifference(c.y, crossing.y) < 1e-3);
                 next.addAll(found);
             }
             pending = next;
         }
-        return branches;
+        return withoutRepeatedSpecials(branches);
+    }
+
+    /**
+     * Each special point listed once: a branch point lies on both branches through it, and a
+     * branch that passes through another branch's special point finds it again; the first
+     * branch to report it keeps it.
+     */
+    public static List<Branch> withoutRepeatedSpecials(List<Branch> branches) {
+        List<SpecialPoint> listed = new ArrayList<>();
+        List<Branch> out = new ArrayList<>();
+        for (Branch b : branches) {
+            List<SpecialPoint> own = new ArrayList<>();
+            for (SpecialPoint s : b.specials()) {
+                if (listed.stream().noneMatch(other -> samePoint(s, other))) {
+                    own.add(s);
+                    listed.add(s);
+                }
+            }
+            out.add(new Branch(b.id(), b.points(), own));
+        }
+        return out;
+    }
+
+    /**
+     * True when two special points are one: the same place, and the same kind (a fold found on a
+     * branch emerging from a branch point, at that point, counts as the branch point).
+     */
+    public static boolean samePoint(SpecialPoint a, SpecialPoint b) {
+        boolean compatible = a.type() == b.type() || a.type().isBranchPoint() && b.type().isBranchPoint()
+                || a.type() == SpecialPointType.SADDLE_NODE && b.type().isBranchPoint()
+                || b.type() == SpecialPointType.SADDLE_NODE && a.type().isBranchPoint();
+        return compatible && Math.abs(a.parameter() - b.parameter()) <= 1e-6 * (1 + Math.abs(a.parameter()))
+                && maxDifference(a.state(), b.state()) <= 1e-4 * (1 + PseudoArclength.maxAbs(a.state()));
     }
 
     private Branch joinBothWays(double[] y, double[] tangent, double lambdaMin, double lambdaMax, int id,
-            List<Crossing> crossings) {
+            List<Crossing> crossings, List<List<BranchPoint>> known) {
         List<BranchPoint> backward = new ArrayList<>();
         List<SpecialPoint> backwardSpecials = new ArrayList<>();
-        trace(y, Vectors.negate(tangent), lambdaMin, lambdaMax, backward, backwardSpecials, crossings);
         List<BranchPoint> forward = new ArrayList<>();
         List<SpecialPoint> forwardSpecials = new ArrayList<>();
-        trace(y, tangent, lambdaMin, lambdaMax, forward, forwardSpecials, crossings);
+        boolean closed = trace(y, tangent, lambdaMin, lambdaMax, forward, forwardSpecials, crossings, known);
+        if (!closed) {
+            List<List<BranchPoint>> knownAndForward = new ArrayList<>(known);
+            knownAndForward.add(forward);
+            trace(y, Vectors.negate(tangent), lambdaMin, lambdaMax, backward, backwardSpecials, crossings,
+                    knownAndForward);
+        }
         List<BranchPoint> points = new ArrayList<>();
         for (int i = backward.size() - 1; i >= 1; i--) {
             points.add(backward.get(i));
@@ -146,14 +196,8 @@ public final class EquilibriumContinuation {
     private static List<SpecialPoint> withoutFoldsAtBranchPoints(List<SpecialPoint> specials) {
         List<SpecialPoint> kept = new ArrayList<>();
         for (SpecialPoint s : specials) {
-            boolean atBranchPoint = false;
-            for (SpecialPoint other : specials) {
-                if (s.type() == SpecialPointType.SADDLE_NODE && other.type() == SpecialPointType.BRANCH_POINT
-                        && Math.abs(s.parameter() - other.parameter()) < 1e-6
-                        && maxDifference(s.state(), other.state()) < 1e-3) {
-                    atBranchPoint = true;
-                }
-            }
+            boolean atBranchPoint = s.type() == SpecialPointType.SADDLE_NODE && specials.stream()
+                    .anyMatch(other -> other.type().isBranchPoint() && samePoint(s, other));
             if (!atBranchPoint) {
                 kept.add(s);
             }
@@ -169,8 +213,12 @@ public final class EquilibriumContinuation {
         return d;
     }
 
-    private void trace(double[] start, double[] startTangent, double lambdaMin, double lambdaMax,
-            List<BranchPoint> points, List<SpecialPoint> specials, List<Crossing> crossings) {
+    /**
+     * Traces one way from {@code start} until the range edge, the point budget, a stall, or a
+     * stretch already traced; returns true if it stopped on its own earlier points (a closed curve).
+     */
+    private boolean trace(double[] start, double[] startTangent, double lambdaMin, double lambdaMax,
+            List<BranchPoint> points, List<SpecialPoint> specials, List<Crossing> crossings, List<List<BranchPoint>> known) {
         double[] y = start.clone();
         double[] t = startTangent.clone();
         Complex[] eigen = eigenvalues(y);
@@ -180,10 +228,12 @@ public final class EquilibriumContinuation {
             double[] predicted = Vectors.add(y, t, h);
             double[] next = arclength.correct(predicted, t);
             double[] nextTangent = next == null ? null : arclength.tangent(next, t);
-            if (next == null || nextTangent == null || Vectors.dot(t, nextTangent) < 0.9) {
+            // A corrector that lands farther than a step from its prediction has jumped to another branch.
+            if (next == null || nextTangent == null || Vectors.dot(t, nextTangent) < 0.9
+                    || SpecialPointLocator.distance(next, predicted) > h) {
                 h *= 0.5;
                 if (h < settings.minStep()) {
-                    return;
+                    return false;
                 }
                 continue;
             }
@@ -191,14 +241,71 @@ public final class EquilibriumContinuation {
             Complex[] nextEigen = eigenvalues(next);
             detect(y, t, eigen, next, nextTangent, nextEigen, specials, crossings);
             if (next[n] < lambdaMin || next[n] > lambdaMax) {
-                return;
+                addBoundaryPoint(y, next, next[n] < lambdaMin ? lambdaMin : lambdaMax, points);
+                return false;
             }
             points.add(point(next, nextEigen));
+            if (onParallelStretch(next, nextTangent, points, points.size() - 4)) {
+                return true;
+            }
+            if (known.stream().anyMatch(other -> onParallelStretch(next, nextTangent, other, other.size()))) {
+                return false;
+            }
             y = next;
             t = nextTangent;
             eigen = nextEigen;
             h = Math.min(settings.maxStep(), iterations <= 3 ? 1.5 * h : iterations >= 6 ? 0.7 * h : h);
         }
+        return false;
+    }
+
+    /** Ends a branch exactly on the edge of the parameter range, by correcting with the parameter fixed there. */
+    private void addBoundaryPoint(double[] inside, double[] outside, double bound, List<BranchPoint> points) {
+        double s = (bound - inside[n]) / (outside[n] - inside[n]);
+        double[] predicted = new double[n + 1];
+        for (int i = 0; i <= n; i++) {
+            predicted[i] = inside[i] + s * (outside[i] - inside[i]);
+        }
+        predicted[n] = bound;
+        double[] normal = new double[n + 1];
+        normal[n] = 1.0;
+        double[] edge = arclength.correct(predicted, normal);
+        if (edge != null && SpecialPointLocator.distance(edge, predicted) <= SpecialPointLocator.distance(inside, outside)) {
+            edge[n] = bound;
+            points.add(point(edge, eigenvalues(edge)));
+        }
+    }
+
+    /**
+     * True when {@code y} lies on the polyline {@code points} (its first {@code upTo} points)
+     * running parallel to it: the curve is closed or is being traced a second time, so tracing
+     * stops there. Branches that cross are not parallel where they meet.
+     */
+    private static boolean onParallelStretch(double[] y, double[] tangent, List<BranchPoint> points, int upTo) {
+        int m = y.length - 1;
+        for (int k = 0; k + 1 < upTo; k++) {
+            double[] a = full(points.get(k));
+            double[] b = full(points.get(k + 1));
+            double length = SpecialPointLocator.distance(a, b);
+            if (!(length > 0) || SpecialPointLocator.segmentDistance(y, a, b) > 0.25 * length) {
+                continue;
+            }
+            double along = 0;
+            for (int i = 0; i <= m; i++) {
+                along += (b[i] - a[i]) * tangent[i];
+            }
+            if (Math.abs(along) >= 0.95 * length) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    private static double[] full(BranchPoint p) {
+        double[] state = p.state();
+        double[] y = Arrays.copyOf(state, state.length + 1);
+        y[state.length] = p.parameter();
+        return y;
     }
 
     private void detect(double[] ya, double[] ta, Complex[] ea, double[] yb, double[] tb, Complex[] eb,
@@ -208,78 +315,32 @@ public final class EquilibriumContinuation {
                 double[] tangent = arclength.tangent(y, ta);
                 return tangent == null ? 0.0 : tangent[n];
             };
-            locate(SpecialPointType.SADDLE_NODE, ya, ta, yb, fold, specials);
+            add(locator.locate(SpecialPointType.SADDLE_NODE, ya, ta, yb, fold), specials);
         }
         ToDoubleFunction<double[]> branch = y -> arclength.borderedDeterminant(y, ta);
         if (Math.signum(branch.applyAsDouble(ya)) * Math.signum(branch.applyAsDouble(yb)) < 0) {
-            double[] at = locate(SpecialPointType.BRANCH_POINT, ya, ta, yb, branch, specials);
-            if (at != null) {
-                crossings.add(new Crossing(at, ta.clone()));
+            SpecialPointLocator.Located at = locator.locate(SpecialPointType.BRANCH_POINT, ya, ta, yb, branch);
+            if (add(at, specials)) {
+                crossings.add(new Crossing(at.y(), ta.clone()));
             }
         }
-        double ha = Spectra.criticalPairRealPart(ea, IMAGINARY_TOLERANCE);
-        double hb = Spectra.criticalPairRealPart(eb, IMAGINARY_TOLERANCE);
+        double ha = Spectra.criticalPairRealPart(ea, SpecialPointLocator.IMAGINARY_TOLERANCE);
+        double hb = Spectra.criticalPairRealPart(eb, SpecialPointLocator.IMAGINARY_TOLERANCE);
         if (!Double.isNaN(ha) && !Double.isNaN(hb) && Math.signum(ha) * Math.signum(hb) < 0) {
             ToDoubleFunction<double[]> hopf = y -> {
-                double value = Spectra.criticalPairRealPart(eigenvalues(y), IMAGINARY_TOLERANCE);
+                double value = Spectra.criticalPairRealPart(eigenvalues(y), SpecialPointLocator.IMAGINARY_TOLERANCE);
                 return Double.isNaN(value) ? 0.0 : value;
             };
-            locate(SpecialPointType.HOPF, ya, ta, yb, hopf, specials);
+            add(locator.locate(SpecialPointType.HOPF, ya, ta, yb, hopf), specials);
         }
     }
 
-    /** Illinois regula falsi on the arclength between a and b; returns the located point. */
-    private double[] locate(SpecialPointType type, double[] ya, double[] ta, double[] yb,
-            ToDoubleFunction<double[]> test, List<SpecialPoint> specials) {
-        double[] diff = new double[n + 1];
-        for (int i = 0; i <= n; i++) {
-            diff[i] = yb[i] - ya[i];
+    private static boolean add(SpecialPointLocator.Located located, List<SpecialPoint> specials) {
+        if (located == null) {
+            return false;
         }
-        double a = 0;
-        double b = Vectors.dot(diff, ta);
-        double fa = test.applyAsDouble(ya);
-        double fb = test.applyAsDouble(yb);
-        double[] best = fb == 0 ? yb : ya;
-        int side = 0;
-        for (int k = 0; k < 100 && fa != 0 && fb != 0; k++) {
-            double c = (a * fb - b * fa) / (fb - fa);
-            double[] yc = arclength.correct(Vectors.add(ya, ta, c), ta);
-            if (yc == null) {
-                // Exactly at a branch point the bordered corrector matrix is singular: step aside.
-                yc = arclength.correct(Vectors.add(ya, ta, c + 1e-9 * (b - a)), ta);
-            }
-            if (yc == null) {
-                break;
-            }
-            double fc = test.applyAsDouble(yc);
-            best = yc;
-            if (fc == 0) {
-                break;
-            }
-            if (fc * fb > 0) {
-                b = c;
-                fb = fc;
-                if (side == -1) {
-                    fa *= 0.5;
-                }
-                side = -1;
-            } else {
-                a = c;
-                fa = fc;
-                if (side == 1) {
-                    fb *= 0.5;
-                }
-                side = 1;
-            }
-            if (Math.abs(b - a) <= 1e-13 * (1 + Math.abs(b))) {
-                break;
-            }
-        }
-        Complex[] eigen = eigenvalues(best);
-        double frequency = type == SpecialPointType.HOPF
-                ? Spectra.criticalPairFrequency(eigen, IMAGINARY_TOLERANCE) : Double.NaN;
-        specials.add(new SpecialPoint(type, best[n], Arrays.copyOf(best, n), eigen, frequency));
-        return best;
+        specials.add(located.point());
+        return true;
     }
 
     /** Direction of the branch crossing at a branch point, orthogonal to the known tangent. */

@@ -4,8 +4,13 @@ package org.fatefield.circuits.analysis.continuation;
 public enum SpecialPointType {
     /** A fold: two steady states meet and vanish; the edge of a bistable range. */
     SADDLE_NODE("saddle-node (fold)"),
-    /** A simple branch point, where another branch crosses: a pitchfork in symmetric circuits. */
-    BRANCH_POINT("branch point (pitchfork)"),
+    /**
+     * A simple branch point whose branching equation has no quadratic term: a pitchfork, as where
+     * a symmetric circuit's symmetric branch meets the asymmetric ones.
+     */
+    PITCHFORK("pitchfork (branch point)"),
+    /** A simple branch point where two branches cross transversally (a transcritical crossing). */
+    BRANCH_POINT("branch point (transcritical)"),
     /** A complex pair of eigenvalues crosses the imaginary axis: oscillations are born. */
     HOPF("Hopf"),
     /** A fold of the fold curve in a two-parameter plane, where two folds meet. */
@@ -20,5 +25,10 @@ public enum SpecialPointType {
     /** The name written in tables and figures. */
     public String label() {
         return label;
+    }
+
+    /** True for the two kinds of branch point, where another branch of steady states crosses. */
+    public boolean isBranchPoint() {
+        return this == PITCHFORK || this == BRANCH_POINT;
     }
 }

@@ -45,7 +45,7 @@ class NormalFormsTest {
         List<Branch> branches = EquilibriumContinuation.of(pitchfork, SETTINGS)
                 .diagram(new double[] {0}, -1, -1, 1, true, 1);
         List<SpecialPoint> crossings = branches.get(0).specials().stream()
-                .filter(s -> s.type() == SpecialPointType.BRANCH_POINT).toList();
+                .filter(s -> s.type().isBranchPoint()).toList();
         assertEquals(1, crossings.size(), branches.get(0).specials().toString());
         assertEquals(0.0, crossings.get(0).parameter(), 1e-8);
         assertEquals(2, branches.size(), "the emerging branch is traced");

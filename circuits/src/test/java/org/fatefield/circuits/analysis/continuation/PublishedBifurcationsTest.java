@@ -47,7 +47,7 @@ class PublishedBifurcationsTest {
         List<Branch> branches = EquilibriumContinuation.of(system, ContinuationSettings.defaults())
                 .diagram(new double[] {0.68, 0.68}, 1.0, 1.0, 4.0, true, 1);
         SpecialPoint pitchfork = branches.get(0).specials().stream()
-                .filter(s -> s.type() == SpecialPointType.BRANCH_POINT).findFirst().orElseThrow();
+                .filter(s -> s.type().isBranchPoint()).findFirst().orElseThrow();
         assertEquals(2.0, pitchfork.parameter(), 1e-8);
         assertEquals(1.0, pitchfork.state()[0], 1e-6);
         assertTrue(branches.size() >= 2);
