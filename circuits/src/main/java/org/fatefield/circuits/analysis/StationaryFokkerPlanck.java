@@ -135,8 +135,9 @@ public final class StationaryFokkerPlanck {
                 out += q[k][j - k + band];
             }
             if (!(out > 0)) {
-                throw new IllegalStateException("grid cell " + k + " cannot reach the cells before it: the chain on"
-                        + " the grid is not irreducible (is the diffusion zero somewhere?)");
+                throw new IllegalArgumentException("the landscape cannot be solved on this grid: from grid cell " + k
+                        + " no probability flows back (the noise is too weak there for the grid spacing, as at a very"
+                        + " large system size, or the diffusion vanishes); lower --system-size or raise --grid");
             }
             for (int i = lo; i < k; i++) {
                 double toK = q[i][k - i + band] / out;

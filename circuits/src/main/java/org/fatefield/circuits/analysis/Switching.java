@@ -3,12 +3,14 @@ package org.fatefield.circuits.analysis;
 import org.apache.commons.rng.UniformRandomProvider;
 import org.fatefield.circuits.model.ReactionNetwork;
 import org.fatefield.circuits.random.RandomStreams;
-import org.fatefield.circuits.sim.LangevinStepper;
+import org.fatefield.circuits.sim.CircuitStepper;
 
 /**
  * How often noise flips a switch: mean first-passage times between attractors and commitment
- * probabilities, from independent chemical Langevin trajectories. A trajectory reaches an
- * attractor when it comes within {@code radius} (Euclidean, in concentrations) of it.
+ * probabilities, from independent trajectories of the chemical Langevin equation or of
+ * Gillespie's direct method ({@link SwitchingSettings.Method}). A trajectory reaches an
+ * attractor when, at one of its observation times (every {@link SwitchingSettings#step()}), it
+ * is within {@code radius} (Euclidean, in concentrations) of it.
  */
 public final class Switching {
 
@@ -30,18 +32,18 @@ public final class Switching {
     }
 
     /**
-     * Mean first-passage time from {@code from} to within {@code radius} of {@code to}.
-     *
-     * @param maxTime time limit per trajectory (h)
+     * Mean first-passage time from {@code from} to within {@code radius} of {@code to}, with
+     * trajectories limited to {@link SwitchingSettings#passageLimit()}.
      */
     public static FirstPassage meanFirstPassage(ReactionNetwork network, double[] params, double systemSize,
-            double[] from, double[] to, double radius, int trajectories, double step, double maxTime, long seed) {
-        LangevinStepper stepper = LangevinStepper.of(network, systemSize);
+            double[] from, double[] to, double radius, int trajectories, SwitchingSettings settings, long seed) {
+        CircuitStepper stepper = settings.method().stepper(network, systemSize);
         RandomStreams streams = RandomStreams.of(seed);
+        double step = settings.step();
         double sum = 0;
         double sumSq = 0;
         int arrived = 0;
-        long limit = Math.round(maxTime / step);
+        long limit = Math.round(settings.passageLimit() / step);
         for (int k = 0; k < trajectories; k++) {
             UniformRandomProvider rng = streams.stream(k);
             double[] x = from.clone();
@@ -67,14 +69,15 @@ public final class Switching {
 
     /**
      * Probability that a trajectory from {@code start} reaches {@code target} before
-     * {@code other} (trajectories reaching neither by {@code maxTime} count as half).
+     * {@code other} (trajectories reaching neither within {@link SwitchingSettings#commitmentLimit()}
+     * count as half).
      */
     public static double commitment(ReactionNetwork network, double[] params, double systemSize, double[] start,
-            double[] target, double[] other, double radius, int trajectories, double step, double maxTime, long seed) {
-        LangevinStepper stepper = LangevinStepper.of(network, systemSize);
+            double[] target, double[] other, double radius, int trajectories, SwitchingSettings settings, long seed) {
+        CircuitStepper stepper = settings.method().stepper(network, systemSize);
         RandomStreams streams = RandomStreams.of(seed);
         double hits = 0;
-        long limit = Math.round(maxTime / step);
+        long limit = Math.round(settings.commitmentLimit() / settings.step());
         for (int k = 0; k < trajectories; k++) {
             UniformRandomProvider rng = streams.stream(k);
             double[] x = start.clone();
@@ -88,7 +91,7 @@ public final class Switching {
                     outcome = 0;
                     break;
                 }
-                stepper.advance(x, params, step, rng);
+                stepper.advance(x, params, settings.step(), rng);
             }
             hits += outcome;
         }

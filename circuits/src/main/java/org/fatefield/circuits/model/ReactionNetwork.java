@@ -1,6 +1,7 @@
 package org.fatefield.circuits.model;
 
 import java.util.List;
+import java.util.stream.IntStream;
 
 /**
  * An intracellular circuit written as species, parameters and reactions.
@@ -67,14 +68,17 @@ public interface ReactionNetwork {
 
     /**
      * The parameters a name stands for: the parameter of that exact name, or else every
-     * {@code <species>.<name>} (the same rate in each gene, moved together). Empty if none.
+     * parameter whose name ends in {@code .<name>}, moved together: {@code degradation} is every
+     * {@code <gene>.degradation}, and in a Hill network {@code hill} is every
+     * {@code <target>.<source>.hill}. Empty if none.
      */
     default int[] parameterGroup(String name) {
         List<String> names = parameterNames();
         if (names.contains(name)) {
             return new int[] {names.indexOf(name)};
         }
-        return speciesNames().stream().mapToInt(s -> names.indexOf(s + "." + name)).filter(i -> i >= 0).toArray();
+        String suffix = "." + name;
+        return IntStream.range(0, names.size()).filter(i -> names.get(i).endsWith(suffix)).toArray();
     }
 
     /** Index of the named species; throws with the list of known names if there is none. */

@@ -1,5 +1,7 @@
 package org.fatefield.circuits.study;
 
+import org.fatefield.circuits.analysis.SwitchingSettings;
+
 /**
  * What {@code fatefield analyze} computes for one circuit.
  *
@@ -19,13 +21,25 @@ package org.fatefield.circuits.study;
  * @param trajectories   trajectories per landscape, per first-passage estimate and per commitment start
  * @param grid           cells per axis of the landscape grid
  * @param seed           seed of every stochastic analysis
+ * @param switching      how switching times and commitment are simulated
  */
 public record AnalysisPlan(String parameter, int[] indices, double min, double max, double at, String second,
         int[] secondIndices, double secondMin, double secondMax, int xSpecies, int ySpecies, double systemSize,
-        int trajectories, int grid, long seed) {
+        int trajectories, int grid, long seed, SwitchingSettings switching) {
+
+    /** A plan with the default switching settings. */
+    public AnalysisPlan(String parameter, int[] indices, double min, double max, double at, String second,
+            int[] secondIndices, double secondMin, double secondMax, int xSpecies, int ySpecies, double systemSize,
+            int trajectories, int grid, long seed) {
+        this(parameter, indices, min, max, at, second, secondIndices, secondMin, secondMax, xSpecies, ySpecies,
+                systemSize, trajectories, grid, seed, SwitchingSettings.defaults());
+    }
 
     /** Validates ranges and effort. */
     public AnalysisPlan {
+        if (switching == null) {
+            throw new IllegalArgumentException("switching settings are required; use SwitchingSettings.defaults()");
+        }
         if (!(max > min)) {
             throw new IllegalArgumentException("--range must have MAX > MIN, got " + min + ":" + max);
         }

@@ -3,12 +3,14 @@ package org.fatefield.circuits.study;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Locale;
 import org.fatefield.circuits.analysis.BasinMap;
 import org.fatefield.circuits.analysis.QuasiPotential;
 import org.fatefield.circuits.analysis.StationaryFokkerPlanck;
 import org.fatefield.circuits.analysis.SteadyState;
 import org.fatefield.circuits.analysis.SteadyStateFinder;
 import org.fatefield.circuits.analysis.Switching;
+import org.fatefield.circuits.analysis.SwitchingSettings;
 import org.fatefield.circuits.analysis.continuation.Branch;
 import org.fatefield.circuits.analysis.continuation.BranchPoint;
 import org.fatefield.circuits.analysis.continuation.ContinuationSettings;
@@ -67,10 +69,16 @@ public final class CircuitAnalysis {
     public AnalysisResult run() {
         double[] p = parametersAt(plan.at());
         List<SteadyState> states = SteadyStateFinder.of(network).find(p, lower, upper);
-        List<Branch> branches = diagram();
-        List<FoldCurve> folds = plan.hasSecond() ? foldCurves(branches) : List.of();
         List<SteadyState> stable = states.stream().filter(SteadyState::isStable).toList();
         double[] sizes = {plan.systemSize() / 8, plan.systemSize() / 4, plan.systemSize() / 2, plan.systemSize()};
+        if (stable.size() >= 2) {
+            // Refuse bad switching settings before any long computation.
+            int from = plan.switching().fromIndex(stable.size());
+            plan.switching().toIndex(stable.size());
+            requireAffordable(p, stable.get(from).state(), sizes);
+        }
+        List<Branch> branches = diagram();
+        List<FoldCurve> folds = plan.hasSecond() ? foldCurves(branches) : List.of();
         List<Switching.FirstPassage> passages = new ArrayList<>();
         if (!plan.hasPlane()) {
             // One species: no state plane for basins, landscapes and commitment maps.
@@ -97,9 +105,10 @@ public final class CircuitAnalysis {
         }
         double[][] commitment = new double[0][0];
         if (stable.size() >= 2) {
-            double[] a = stable.get(0).state();
-            double[] b = stable.get(stable.size() - 1).state();
-            double radius = 0.25 * distance(a, b);
+            SwitchingSettings switching = plan.switching();
+            double[] a = stable.get(switching.fromIndex(stable.size())).state();
+            double[] b = stable.get(switching.toIndex(stable.size())).state();
+            double radius = switching.arrivalFraction() * distance(a, b);
             passages = passages(p, stable, sizes);
             commitment = new double[COMMITMENT_GRID][COMMITMENT_GRID];
             for (int j = 0; j < COMMITMENT_GRID; j++) {
@@ -108,7 +117,7 @@ public final class CircuitAnalysis {
                     x[plan.xSpecies()] = corner[0] * i / (COMMITMENT_GRID - 1);
                     x[plan.ySpecies()] = corner[1] * j / (COMMITMENT_GRID - 1);
                     commitment[j][i] = Switching.commitment(network, p, plan.systemSize(), x, b, a, radius,
-                            plan.trajectories(), 0.01, 500, plan.seed() + j * COMMITMENT_GRID + i);
+                            plan.trajectories(), switching, plan.seed() + j * COMMITMENT_GRID + i);
                 }
             }
         }
@@ -116,17 +125,50 @@ public final class CircuitAnalysis {
                 commitment);
     }
 
-    /** Mean first-passage times from the first stable state to the last, at each system size. */
+    /** Mean first-passage times between the plan's two stable states, at each system size. */
     private List<Switching.FirstPassage> passages(double[] p, List<SteadyState> stable, double[] sizes) {
-        double[] a = stable.get(0).state();
-        double[] b = stable.get(stable.size() - 1).state();
-        double radius = 0.25 * distance(a, b);
+        SwitchingSettings switching = plan.switching();
+        double[] a = stable.get(switching.fromIndex(stable.size())).state();
+        double[] b = stable.get(switching.toIndex(stable.size())).state();
+        double radius = switching.arrivalFraction() * distance(a, b);
         List<Switching.FirstPassage> passages = new ArrayList<>();
         for (double omega : sizes) {
-            passages.add(Switching.meanFirstPassage(network, p, omega, a, b, radius, plan.trajectories(), 0.01,
-                    2000, plan.seed()));
+            passages.add(Switching.meanFirstPassage(network, p, omega, a, b, radius, plan.trajectories(), switching,
+                    plan.seed()));
         }
         return passages;
+    }
+
+    /** Most reactions the exact method may fire for the first-passage estimates before it is refused. */
+    static final double EXACT_EVENT_LIMIT = 2e9;
+
+    /**
+     * Refuses an exact-method switching estimate that would not finish: the reactions it could
+     * fire (total propensity at the start state times the time limit, every trajectory, every
+     * system size) must stay under {@link #EXACT_EVENT_LIMIT}.
+     */
+    private void requireAffordable(double[] p, double[] from, double[] sizes) {
+        if (plan.switching().method() != SwitchingSettings.Method.EXACT) {
+            return;
+        }
+        double[] propensity = new double[network.reactionCount()];
+        network.propensities(from, p, propensity);
+        double total = 0;
+        for (double a : propensity) {
+            total += Math.max(0, a);
+        }
+        double events = 0;
+        for (double omega : sizes) {
+            events += omega * total * plan.switching().passageLimit() * plan.trajectories();
+        }
+        if (events > EXACT_EVENT_LIMIT) {
+            throw new IllegalArgumentException(String.format(Locale.ROOT, "the exact switching method"
+                    + " could fire about %.2g reactions (%.3g per hour at system size %.3g, %s h per trajectory,"
+                    + " %d trajectories, 4 system sizes), more than %.0g; lower --system-size, --trajectories or"
+                    + " --switching-limit, or use --switching-method langevin", events,
+                    plan.systemSize() * total, plan.systemSize(), plan.switching().passageLimit(),
+                    plan.trajectories(), EXACT_EVENT_LIMIT));
+        }
     }
 
     /**

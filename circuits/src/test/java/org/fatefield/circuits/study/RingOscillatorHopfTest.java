@@ -75,6 +75,29 @@ class RingOscillatorHopfTest {
         assertEquals(2.0, amplitudes[1] / amplitudes[0], 0.16);
     }
 
+    /**
+     * The Hill coefficient shared by all three repressions, varied as one parameter: at a = 2 the
+     * symmetric state is x = 1 for every n, and g = -n/2, so the Hopf point is at n = 4 exactly.
+     */
+    @Test
+    void sharedHillCoefficientVariesAsOneParameter() {
+        HillNetwork ring = ring();
+        int[] hill = ring.parameterGroup("hill");
+        assertEquals(3, hill.length);
+        double[] base = ring.defaultParameters();
+        for (String gene : List.of("A", "B", "C")) {
+            base[ring.parameterIndex(gene + ".max_rate")] = 2.0;
+        }
+        AnalysisPlan plan = new AnalysisPlan("hill", hill, 2.0, 6.0, 3.0, null, new int[0], 0, 0, 0, 1, 100, 10, 20,
+                1);
+        List<SpecialPoint> all = new CircuitAnalysis(ring, base, plan).diagram().stream()
+                .flatMap(b -> b.specials().stream()).toList();
+        assertEquals(1, all.size(), all.toString());
+        assertEquals(SpecialPointType.HOPF, all.get(0).type());
+        assertEquals(4.0, all.get(0).parameter(), 1e-8);
+        assertEquals(Math.sqrt(3), all.get(0).frequency(), 1e-7);
+    }
+
     /** Re of the complex pair at the symmetric steady state, from the closed form. */
     private static double realPartOfCriticalPair(double a) {
         double x = new BrentSolver(1e-14).solve(200, s -> s * (1 + Math.pow(s, 4)) - a, 0.1, 3.0);

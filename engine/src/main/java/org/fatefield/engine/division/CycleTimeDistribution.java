@@ -10,8 +10,8 @@ import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
  * Distribution of the time from a cell's birth to its division, given by mean and coefficient
  * of variation.
  *
- * @param kind fixed, gamma or lognormal
- * @param mean mean cycle time (h), greater than 0
+ * @param kind fixed, gamma, lognormal, or none (cells never divide)
+ * @param mean mean cycle time (h), greater than 0; ignored when none
  * @param cv   coefficient of variation (standard deviation / mean), at least 0; ignored when fixed
  */
 public record CycleTimeDistribution(Kind kind, double mean, double cv) {
@@ -23,23 +23,40 @@ public record CycleTimeDistribution(Kind kind, double mean, double cv) {
         /** Gamma with shape 1 / cv^2 and scale mean cv^2. */
         GAMMA,
         /** Lognormal with sigma^2 = ln(1 + cv^2) and mu = ln(mean) - sigma^2 / 2. */
-        LOGNORMAL
+        LOGNORMAL,
+        /** No division: every cycle is infinitely long, a tissue of fixed cells. */
+        NONE
+    }
+
+    /** Cells that never divide. */
+    public static CycleTimeDistribution none() {
+        return new CycleTimeDistribution(Kind.NONE, Double.POSITIVE_INFINITY, 0);
+    }
+
+    /** True when cells divide at all. */
+    public boolean divides() {
+        return kind != Kind.NONE;
     }
 
     /** Validates mean and CV. */
     public CycleTimeDistribution {
-        if (!(mean > 0) || Double.isInfinite(mean)) {
+        if (kind == Kind.NONE) {
+            mean = Double.POSITIVE_INFINITY;
+            cv = 0;
+        } else if (!(mean > 0) || Double.isInfinite(mean)) {
             throw new IllegalArgumentException("mean cycle time must be finite and greater than 0, got " + mean);
         }
-        if (kind != Kind.FIXED && (!(cv > 0) || Double.isInfinite(cv))) {
+        if (kind != Kind.FIXED && kind != Kind.NONE && (!(cv > 0) || Double.isInfinite(cv))) {
             throw new IllegalArgumentException("cycle time cv must be finite and greater than 0 for "
                     + kind.name().toLowerCase(Locale.ROOT) + ", got " + cv);
         }
     }
 
-    /** Draws one cycle time (h) from {@code rng}. */
+    /** Draws one cycle time (h) from {@code rng}; infinite, drawing nothing, when cells never divide. */
     public double sample(UniformRandomProvider rng) {
         switch (kind) {
+            case NONE:
+                return Double.POSITIVE_INFINITY;
             case GAMMA: {
                 double shape = 1.0 / (cv * cv);
                 return AhrensDieterMarsagliaTsangGammaSampler.of(rng, shape, mean / shape).sample();

@@ -120,7 +120,8 @@ public final class Tissue extends SimState {
             long id = population.newId();
             EmbeddedStream.Detached birth = new EmbeddedStream.Detached(streams.seedWords(id));
             double cycle = growth.cycle().sample(birth);
-            double age = cycle * birth.nextDouble();
+            // Founders are spread over their cycle; cells that never divide all start at age 0.
+            double age = growth.cycle().divides() ? cycle * birth.nextDouble() : 0.0;
             Cell founder = new Cell(id, -1, 0, -age, cycle, circuit.initialState(), birth.streamWords(), point[0],
                     point[1], 1.0, growth.size().control().volume(1.0, age, cycle));
             if (!spec.extrinsic().isEmpty()) {

@@ -65,15 +65,20 @@ class GrowthOptionsTest {
         // the survivors are Binomial(N, that), checked against its 99% interval.
         int founders = 4000;
         double rate = 0.1;
-        GrowthSpec growth = GrowthSpec.of(founders, 2, 0, new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED,
-                1e6, 0), Partitioning.equal()).withAxis(GrowthSpec.DivisionAxis.RANDOM).withDeathRate(rate)
-                .withDilution(false);
+        GrowthSpec growth = GrowthSpec.of(founders, 2, 0, CycleTimeDistribution.none(), Partitioning.equal())
+                .withAxis(GrowthSpec.DivisionAxis.RANDOM).withDeathRate(rate).withDilution(false);
         Tissue tissue = new Tissue(spec(founders, growth, 5.0), 8);
         tissue.start();
         tissue.runToEnd();
         double survive = Math.pow(1 - rate * 0.01, 500);
         BinomialDistribution law = new BinomialDistribution(founders, survive);
         int alive = tissue.cells().size();
+        for (Cell c : tissue.cells()) {
+            // No division: every survivor is a founder of age 0 at the start, its volume unchanged.
+            assertEquals(0, c.generation());
+            assertEquals(0.0, c.birthTime(), 0.0);
+            assertEquals(1.0, c.volume(), 0.0);
+        }
         assertTrue(alive >= law.inverseCumulativeProbability(0.005) && alive <= law.inverseCumulativeProbability(0.995),
                 "survivors " + alive + " against mean " + founders * survive);
     }

@@ -9,6 +9,7 @@ import org.apache.commons.csv.CSVPrinter;
 import org.fatefield.circuits.analysis.QuasiPotential;
 import org.fatefield.circuits.analysis.SteadyState;
 import org.fatefield.circuits.analysis.Switching;
+import org.fatefield.circuits.analysis.SwitchingSettings;
 import org.fatefield.circuits.analysis.continuation.Branch;
 import org.fatefield.circuits.analysis.continuation.BranchPoint;
 import org.fatefield.circuits.analysis.continuation.FoldCurveContinuation.FoldCurve;
@@ -218,14 +219,17 @@ public final class AnalysisWriter {
     }
 
     private void firstPassages(AnalysisResult result) throws IOException {
+        SwitchingSettings switching = plan.switching();
         table("switching.csv", List.of("system_size", "mean_first_passage_h", "sd_h", "ci95_low_h", "ci95_high_h",
-                "arrived", "censored"), rows -> {
+                "arrived", "censored", "method", "step_h", "arrival_fraction", "limit_h"), rows -> {
                     for (int k = 0; k < result.passages().size(); k++) {
                         Switching.FirstPassage f = result.passages().get(k);
                         rows.add(List.of(RunTables.number(result.systemSizes()[k]), RunTables.number(f.mean()),
                                 RunTables.number(f.standardDeviation()), RunTables.number(f.low95()),
                                 RunTables.number(f.high95()), Integer.toString(f.arrived()),
-                                Integer.toString(f.censored())));
+                                Integer.toString(f.censored()), switching.method().word(),
+                                RunTables.number(switching.step()), RunTables.number(switching.arrivalFraction()),
+                                RunTables.number(switching.passageLimit())));
                     }
                 });
     }

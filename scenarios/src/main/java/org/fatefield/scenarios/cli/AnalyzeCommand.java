@@ -4,7 +4,9 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Locale;
 import java.util.concurrent.Callable;
+import org.fatefield.circuits.analysis.SwitchingSettings;
 import org.fatefield.circuits.model.ReactionNetwork;
 import org.fatefield.circuits.study.AnalysisPlan;
 import org.fatefield.circuits.study.AnalysisResult;
@@ -70,6 +72,36 @@ final class AnalyzeCommand implements Callable<Integer> {
             description = "cells per axis of the landscape grid (default: ${DEFAULT-VALUE})")
     private int grid;
 
+    @Option(names = "--switching-method", paramLabel = "METHOD", defaultValue = "langevin",
+            description = "simulation for switching times and commitment: langevin (chemical Langevin equation,"
+                    + " Euler-Maruyama) or exact (Gillespie's direct method in molecule counts; slower at large"
+                    + " system sizes) (default: ${DEFAULT-VALUE})")
+    private String switchingMethod;
+
+    @Option(names = "--switching-step", paramLabel = "HOURS", defaultValue = "0.01",
+            description = "Langevin time step, and for both methods how often a trajectory is checked for"
+                    + " arrival (default: ${DEFAULT-VALUE} h)")
+    private double switchingStep;
+
+    @Option(names = "--arrival", paramLabel = "FRACTION", defaultValue = "0.25",
+            description = "a trajectory has arrived at an attractor within this fraction of the distance between"
+                    + " the two attractors (default: ${DEFAULT-VALUE})")
+    private double arrival;
+
+    @Option(names = "--switching-limit", paramLabel = "HOURS", defaultValue = "2000",
+            description = "time limit of a first-passage trajectory; later ones are counted as censored"
+                    + " (default: ${DEFAULT-VALUE} h; commitment trajectories get a quarter of it)")
+    private double switchingLimit;
+
+    @Option(names = "--switch-from", paramLabel = "K",
+            description = "stable state switched from, numbered from 0 among the stable rows of steady-states.csv"
+                    + " (default: the first)")
+    private Integer switchFrom;
+
+    @Option(names = "--switch-to", paramLabel = "K",
+            description = "stable state switched to (default: the last)")
+    private Integer switchTo;
+
     @Mixin
     private SharedOptions.Seed seed;
 
@@ -104,14 +136,20 @@ final class AnalyzeCommand implements Callable<Integer> {
         try {
             RunFolder.checkUsable(folder, force.given());
             CircuitAnalysis analysis = new CircuitAnalysis(network, loaded.tissue().mapping().base(), plan);
-            AnalysisResult result = analysis.run();
+            AnalysisResult result;
+            try {
+                result = analysis.run();
+            } catch (IllegalArgumentException e) {
+                err.println("Cannot analyse " + loaded.name() + ": " + e.getMessage());
+                return FatefieldCommand.INVALID_INPUT;
+            }
             AnalysisWriter writer = new AnalysisWriter(RunFolder.open(folder), network, plan);
             writer.write(result, analysis);
             PrintWriter o = spec.commandLine().getOut();
-            o.printf("Analysed %s along %s in [%s, %s]: %d steady states at %s = %s, %d branches, %d special points.%n",
-                    loaded.name(), plan.parameter(), plan.min(), plan.max(), result.steadyStates().size(),
-                    plan.parameter(), plan.at(), result.branches().size(),
-                    result.branches().stream().mapToInt(b -> b.specials().size()).sum());
+            int specials = result.branches().stream().mapToInt(b -> b.specials().size()).sum();
+            o.printf("Analysed %s along %s in [%s, %s]: %s at %s = %s, %s, %s.%n", loaded.name(), plan.parameter(),
+                    plan.min(), plan.max(), count(result.steadyStates().size(), "steady state"), plan.parameter(),
+                    plan.at(), count(result.branches().size(), "branch"), count(specials, "special point"));
             o.printf("Results are in %s%n", folder.toAbsolutePath().normalize());
             o.flush();
             return 0;
@@ -119,6 +157,10 @@ final class AnalyzeCommand implements Callable<Integer> {
             err.println("Cannot write results: " + e.getMessage());
             return FatefieldCommand.OUTPUT_ERROR;
         }
+    }
+
+    private static String count(int n, String noun) {
+        return n + " " + (n == 1 ? noun : noun.endsWith("h") ? noun + "es" : noun + "s");
     }
 
     private AnalysisPlan plan(Scenario loaded) {
@@ -151,7 +193,21 @@ final class AnalyzeCommand implements Callable<Integer> {
         return new AnalysisPlan(name, indices, r[0], r[1], at != null ? at : 0.5 * (r[0] + r[1]), second,
                 secondIndices, r2[0], r2[1], x, y,
                 systemSize != null ? systemSize : loaded.tissue().circuit().systemSize(), trajectories, grid,
-                seed.orElse(loaded.seed()));
+                seed.orElse(loaded.seed()), switching());
+    }
+
+    private SwitchingSettings switching() {
+        SwitchingSettings.Method method = switch (switchingMethod.toLowerCase(Locale.ROOT)) {
+            case "langevin" -> SwitchingSettings.Method.LANGEVIN;
+            case "exact" -> SwitchingSettings.Method.EXACT;
+            default -> throw new IllegalArgumentException("--switching-method must be langevin or exact, got '"
+                    + switchingMethod + "'");
+        };
+        if (switchFrom != null && switchFrom < 0 || switchTo != null && switchTo < 0) {
+            throw new IllegalArgumentException("--switch-from and --switch-to number stable states from 0");
+        }
+        return new SwitchingSettings(method, switchingStep, arrival, switchingLimit, switchingLimit / 4,
+                switchFrom == null ? -1 : switchFrom, switchTo == null ? -1 : switchTo);
     }
 
     private static int[] indices(ReactionNetwork network, String name, String option) {

@@ -266,7 +266,7 @@ final class ScenarioCompiler {
         CycleTimeDistribution.Kind kind = CycleTimeDistribution.Kind.valueOf(
                 values.text(division, "division", "cycle").toUpperCase(Locale.ROOT));
         double cv = values.number(division, "division", "cycle_cv");
-        if (kind != CycleTimeDistribution.Kind.FIXED && !(cv > 0)) {
+        if (kind != CycleTimeDistribution.Kind.FIXED && kind != CycleTimeDistribution.Kind.NONE && !(cv > 0)) {
             values.fail(division, "division", "cycle_cv", "must be greater than 0 for a " + kind.name()
                     .toLowerCase(Locale.ROOT)
                     + " cycle (or set cycle = \"fixed\")");
@@ -295,7 +295,9 @@ final class ScenarioCompiler {
         return new GrowthSpec((int) tissue.getLong("founders", () -> 200L), values.number(tissue, "tissue",
                 "cell_radius"),
                 values.number(tissue, "tissue", "repulsion"),
-                new CycleTimeDistribution(kind, values.number(division, "division", "cycle_mean"), cv), partition,
+                kind == CycleTimeDistribution.Kind.NONE ? CycleTimeDistribution.none()
+                        : new CycleTimeDistribution(kind, values.number(division, "division", "cycle_mean"), cv),
+                partition,
                 GrowthSpec.DivisionAxis.valueOf(values.text(division, "division", "axis").toUpperCase(Locale.ROOT)),
                 values.number(division, "division", "death_rate"), dilution, values.number(tissue, "tissue",
                         "adhesion"),

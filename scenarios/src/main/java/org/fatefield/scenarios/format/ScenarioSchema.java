@@ -82,7 +82,8 @@ public final class ScenarioSchema {
                                     + " edges; walls at x = 0 and x = width only)")),
                     "the domain (a rectangle with walls) and its founder cells"),
             new Section("division", false, false, List.of(
-                    Key.choice("cycle", "gamma", List.of("fixed", "gamma", "lognormal"), "cycle-time distribution"),
+                    Key.choice("cycle", "gamma", List.of("fixed", "gamma", "lognormal", "none"),
+                            "cycle-time distribution; none: cells never divide (cycle_mean and cycle_cv are ignored)"),
                     Key.positive("cycle_mean", "h", "12", "mean time from birth to division"),
                     Key.nonNegative("cycle_cv", "", "0.15", "coefficient of variation of the cycle time (ignored when fixed)"),
                     Key.choice("partition", "binomial", List.of("binomial", "equal", "asymmetric", "volume"),

@@ -134,4 +134,32 @@ class AnalyzeCommandTest {
         assertTrue(!Files.exists(out.resolve("phase-portrait.png")) && !Files.exists(out.resolve("basins.csv")),
                 "no state-plane figures for one species");
     }
+
+    @Test
+    void exactSwitchingRunsAndAnUnaffordableOneIsRefusedBeforeAnythingIsWritten() throws IOException {
+        Path scenario = tmp.resolve("one-gene-switch.toml");
+        try (var in = AnalyzeCommandTest.class.getResourceAsStream("/one-gene-switch.toml")) {
+            Files.write(scenario, in.readAllBytes());
+        }
+        Path out = tmp.resolve("exact");
+        StringWriter err = new StringWriter();
+        int code = FatefieldCommand.execute(new PrintWriter(new StringWriter()), new PrintWriter(err), "analyze",
+                scenario.toString(), "--out", out.toString(), "--parameter", "vmax", "--range", "0.5:1.5", "--at",
+                "1.0", "--trajectories", "6", "--switching-method", "exact", "--switching-limit", "200");
+        assertEquals(0, code, err.toString());
+        List<CSVRecord> rows = csv(out.resolve("switching.csv"));
+        assertEquals(4, rows.size());
+        for (CSVRecord r : rows) {
+            assertEquals("exact", r.get("method"));
+            assertEquals(6, Integer.parseInt(r.get("arrived")) + Integer.parseInt(r.get("censored")));
+        }
+        Path refused = tmp.resolve("refused");
+        err = new StringWriter();
+        code = FatefieldCommand.execute(new PrintWriter(new StringWriter()), new PrintWriter(err), "analyze",
+                scenario.toString(), "--out", refused.toString(), "--parameter", "vmax", "--range", "0.5:1.5",
+                "--at", "1.0", "--switching-method", "exact", "--system-size", "1e9");
+        assertEquals(FatefieldCommand.INVALID_INPUT, code);
+        assertTrue(err.toString().contains("--switching-method langevin"), err.toString());
+        assertTrue(Files.notExists(refused));
+    }
 }
