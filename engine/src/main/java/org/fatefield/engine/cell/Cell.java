@@ -35,6 +35,8 @@ public final class Cell {
     private double volume;
     private int fate = -1;
     private double fateSince = Double.NaN;
+    /** Time this cell itself first entered the timed fate; a float fills the object's padding (no extra heap). */
+    private float firstEntry = Float.NaN;
     private final double birthX;
     private final double birthY;
     private double[] scores = NO_SCORES;
@@ -98,6 +100,7 @@ public final class Cell {
         out.writeDouble(volume);
         out.writeInt(fate);
         out.writeDouble(fateSince);
+        out.writeFloat(firstEntry);
         out.writeDouble(birthX);
         out.writeDouble(birthY);
         writeArray(out, scores);
@@ -118,6 +121,7 @@ public final class Cell {
         double volume = in.readDouble();
         int fate = in.readInt();
         double fateSince = in.readDouble();
+        float firstEntry = in.readFloat();
         double birthX = in.readDouble();
         double birthY = in.readDouble();
         double[] scores = readArray(in);
@@ -127,6 +131,7 @@ public final class Cell {
         cell.y = y;
         cell.fate = fate;
         cell.fateSince = fateSince;
+        cell.firstEntry = firstEntry;
         cell.scores = scores.length == 0 ? NO_SCORES : scores;
         return cell;
     }
@@ -145,6 +150,7 @@ public final class Cell {
         cell.y = y;
         cell.fate = fate;
         cell.fateSince = fateSince;
+        cell.firstEntry = firstEntry;
         cell.scores = scores.length == 0 ? NO_SCORES : scores.clone();
         return cell;
     }
@@ -267,6 +273,23 @@ public final class Cell {
     /** True once the cell should divide under {@code control} at time {@code now} (h). */
     public boolean readyToDivide(SizeControl control, double now) {
         return control.ready(birthVolume, volume, now - birthTime, cycleTime);
+    }
+
+    /**
+     * Time (h) at which this cell, in its own life, was first seen in the timed fate
+     * ({@link org.fatefield.engine.fate.FateClassifier#firstPassageFate()}); NaN if not yet.
+     * Kept in single precision (about 1e-3 h at 10^4 h).
+     */
+    public double firstEntry() {
+        // The shortest decimal of the float, so 12.34 reads back as 12.34 and not 12.340000152.
+        return Float.isNaN(firstEntry) ? Double.NaN : Double.parseDouble(Float.toString(firstEntry));
+    }
+
+    /** Notes that the cell is in the timed fate at {@code now}, if it had not been before. */
+    public void noteInFirstPassageFate(double now) {
+        if (Float.isNaN(firstEntry)) {
+            firstEntry = (float) now;
+        }
     }
 
     /** Records the cell's fate index at time {@code now}; notes when it last changed. */

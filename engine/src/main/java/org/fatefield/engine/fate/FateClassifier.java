@@ -12,6 +12,7 @@ public final class FateClassifier {
 
     private final List<FateRule> rules;
     private final List<String> names;
+    private final int firstPassage;
 
     /**
      * @param rules       rules in priority order
@@ -19,6 +20,11 @@ public final class FateClassifier {
      * @throws IllegalArgumentException if two fates share a name
      */
     public FateClassifier(List<FateRule> rules, String defaultName) {
+        this(rules, defaultName, -1);
+    }
+
+    private FateClassifier(List<FateRule> rules, String defaultName, int firstPassage) {
+        this.firstPassage = firstPassage;
         this.rules = List.copyOf(rules);
         List<String> all = new ArrayList<>();
         for (FateRule rule : rules) {
@@ -31,6 +37,30 @@ public final class FateClassifier {
             }
         }
         this.names = List.copyOf(all);
+    }
+
+    /**
+     * The same rules, with the first entry of each cell into fate {@code name} timed (every step
+     * of its own life: {@code first_passage_h} in the lineage table).
+     *
+     * @throws IllegalArgumentException if no fate has that name
+     */
+    public FateClassifier withFirstPassage(String name) {
+        int index = names.indexOf(name);
+        if (index < 0) {
+            throw new IllegalArgumentException("no fate is named '" + name + "'; fates are " + names);
+        }
+        return new FateClassifier(rules, names.get(names.size() - 1), index);
+    }
+
+    /** Index of the fate whose first entry is timed, or -1 if none is. */
+    public int firstPassageFate() {
+        return firstPassage;
+    }
+
+    /** True when {@code state} is in the timed fate (false when none is timed). */
+    public boolean inFirstPassageFate(double[] state) {
+        return firstPassage >= 0 && classify(state) == firstPassage;
     }
 
     /** Fate index of {@code state}. */

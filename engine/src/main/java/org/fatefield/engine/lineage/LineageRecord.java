@@ -16,8 +16,10 @@ package org.fatefield.engine.lineage;
  * @param deathTime      time it died (h), NaN if it did not
  * @param birthVolume    volume at birth, in mean newborn volumes
  * @param finalVolume    volume at division, death or the end of the run, in mean newborn volumes
+ * @param firstEntryTime time (h) this cell itself first entered the timed fate
+ *                       ({@code fates.first_passage}), NaN if it never did or none is timed
  */
 public record LineageRecord(long id, long parentId, int generation, double birthTime, double divisionTime,
         double birthX, double birthY, int fateAtDivision, int fateAtEnd, double commitmentTime, double deathTime,
-        double birthVolume, double finalVolume) {
+        double birthVolume, double finalVolume, double firstEntryTime) {
 }

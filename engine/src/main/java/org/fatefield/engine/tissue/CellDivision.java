@@ -53,7 +53,7 @@ final class CellDivision {
             Cell mother = population.get(i);
             lineage.accept(new LineageRecord(mother.id(), mother.parentId(), mother.generation(), mother.birthTime(),
                     now, mother.birthX(), mother.birthY(), spec.fates().classify(mother.liveState()), -1, Double.NaN,
-                    Double.NaN, mother.birthVolume(), mother.volume()));
+                    Double.NaN, mother.birthVolume(), mother.volume(), mother.firstEntry()));
             UniformRandomProvider rng = random.of(mother);
             double fraction = size.firstFraction(rng);
             growth.partition().split(mother.liveState(), mother.volume(), fraction, spec.circuit().systemSize(), rng,
@@ -84,6 +84,10 @@ final class CellDivision {
         Cell cell = new Cell(id, mother.id(), mother.generation() + 1, now, cycle, state.clone(), birth.streamWords(),
                 place[0], place[1], volume, volume);
         cell.setFate(mother.fate(), mother.fateSince());
+        if (spec.fates().inFirstPassageFate(cell.liveState())) {
+            // Born in the timed fate: its own first entry is its birth.
+            cell.noteInFirstPassageFate(now);
+        }
         if (!spec.extrinsic().isEmpty()) {
             cell.setScores(ExtrinsicNoise.daughterScores(spec.extrinsic(), mother.scores(), random.of(cell)));
         }

@@ -8,6 +8,7 @@ import org.fatefield.engine.cell.CellPopulation;
 import org.fatefield.engine.cell.CellRandom;
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.division.SizeControl;
+import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.engine.field.MorphogenField;
 import org.fatefield.engine.parallel.BlockParallel;
 import org.fatefield.engine.variability.ExtrinsicNoise;
@@ -77,6 +78,8 @@ final class CellLoop {
         boolean dilute = spec.growth().dilution();
         SizeControl size = spec.growth().size().control();
         List<ExtrinsicNoise> extrinsic = spec.extrinsic();
+        FateClassifier fates = spec.fates();
+        boolean timed = fates.firstPassageFate() >= 0;
         if (ready.length < cells.size()) {
             ready = new boolean[cells.size() + cells.size() / 4];
         }
@@ -100,6 +103,9 @@ final class CellLoop {
                 }
                 double[] state = cell.liveState();
                 circuit.advance(state, p, dt, random.of(cell));
+                if (timed && fates.inFirstPassageFate(state)) {
+                    cell.noteInFirstPassageFate(end);
+                }
                 for (int s = 0; s < state.length; s++) {
                     if (!Double.isFinite(state[s]) && cell.id() < failedCell[worker * PAD]) {
                         failedCell[worker * PAD] = cell.id();

@@ -127,6 +127,9 @@ public final class Tissue extends SimState {
             if (!spec.extrinsic().isEmpty()) {
                 founder.setScores(ExtrinsicNoise.founderScores(spec.extrinsic(), cellLoop.serialRandom().of(founder)));
             }
+            if (spec.fates().inFirstPassageFate(founder.liveState())) {
+                founder.noteInFirstPassageFate(0.0);
+            }
             population.add(founder);
             ancestry.add(id, -1);
         }
@@ -201,7 +204,7 @@ public final class Tissue extends SimState {
         for (Cell cell : dead) {
             lineage.accept(new LineageRecord(cell.id(), cell.parentId(), cell.generation(), cell.birthTime(),
                     Double.NaN, cell.birthX(), cell.birthY(), -1, spec.fates().classify(cell.liveState()),
-                    cell.fateSince(), now, cell.birthVolume(), cell.volume()));
+                    cell.fateSince(), now, cell.birthVolume(), cell.volume(), cell.firstEntry()));
         }
     }
 
@@ -311,7 +314,7 @@ public final class Tissue extends SimState {
         for (Cell cell : cellsById()) {
             lineage.accept(new LineageRecord(cell.id(), cell.parentId(), cell.generation(), cell.birthTime(),
                     Double.NaN, cell.birthX(), cell.birthY(), -1, cell.fate(), cell.fateSince(), Double.NaN,
-                    cell.birthVolume(), cell.volume()));
+                    cell.birthVolume(), cell.volume(), cell.firstEntry()));
         }
     }
 

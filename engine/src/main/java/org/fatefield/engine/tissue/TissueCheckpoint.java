@@ -14,10 +14,11 @@ import org.fatefield.engine.record.TimeSeries;
 final class TissueCheckpoint {
 
     /**
-     * "FFCKPT04": version 2 added cell volumes; 3 embedded random streams and a 4-byte ancestry;
-     * 4 dropped the cells' age and signal (derived from the clock and the field).
+     * "FFCKPT05": version 2 added cell volumes; 3 embedded random streams and a 4-byte ancestry;
+     * 4 dropped the cells' age and signal (derived from the clock and the field); 5 added each
+     * cell's first entry into the timed fate.
      */
-    private static final long MAGIC = 0x4646434b50543034L;
+    private static final long MAGIC = 0x4646434b50543035L;
 
     private TissueCheckpoint() {
     }

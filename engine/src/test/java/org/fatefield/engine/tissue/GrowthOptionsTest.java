@@ -166,4 +166,44 @@ class GrowthOptionsTest {
         double expected = 0.5 * Math.log((1 + rho * rho) / (1 - rho * rho));
         assertEquals(expected, z, 2.576 / Math.sqrt(pairs - 3), "sister correlation " + r);
     }
+
+    /**
+     * X' = 1 without noise and X = 0 in every founder at t = 0; equal halves of molecules and
+     * volume at division leave the concentration unchanged, so X = t in every cell. With the
+     * timed fate X >= 3, a cell alive before t = 3 first enters at t = 3 (noted at the end of the
+     * step that crosses, so within one 0.01 h step after it), and a daughter born later is born
+     * in the fate: its own first entry is its birth.
+     */
+    @Test
+    void firstEntryIntoTheTimedFateFollowsTheClosedForm() {
+        CustomNetwork clock = CustomNetwork.of(List.of("X"), List.of("k"), new double[] {1.0},
+                List.of(new CustomNetwork.ReactionDefinition("make", new int[] {1}, "k")));
+        FateClassifier fates = new FateClassifier(List.of(new FateRule("high", new double[] {3.0},
+                new double[] {Double.NaN})), "low").withFirstPassage("high");
+        GrowthSpec growth = GrowthSpec.of(100, 2, 0, new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 4, 0),
+                Partitioning.equal()).withDeathRate(0).withDilution(false);
+        TissueSpec spec = TissueSpec.of(new CircuitSetup(clock, NoiseMode.NONE, 100, new double[] {0.0}),
+                new ParameterMapping(clock.defaultParameters(), List.of()), MorphogenSpec.of(0, 0, 50, 0, List.of()),
+                new Domain.Rectangle(1000, 1000), growth, fates, new Timing(9.0, 0.01, 1.0));
+        Tissue tissue = new Tissue(spec, 4);
+        List<LineageRecord> records = new ArrayList<>();
+        tissue.setLineageSink(records::add);
+        tissue.start();
+        tissue.runToEnd();
+        int before = 0;
+        int after = 0;
+        for (LineageRecord r : records) {
+            double lifeEnd = Double.isFinite(r.divisionTime()) ? r.divisionTime() : 9.0;
+            if (r.birthTime() < 2.99 && lifeEnd > 3.02) {
+                assertEquals(3.005, r.firstEntryTime(), 0.005 + 1e-4, "cell " + r.id());
+                before++;
+            } else if (r.birthTime() > 3.01) {
+                assertEquals(r.birthTime(), r.firstEntryTime(), 1e-3, "cell " + r.id());
+                after++;
+            } else if (lifeEnd < 2.99) {
+                assertTrue(Double.isNaN(r.firstEntryTime()), "cell " + r.id() + " divided before t = 3");
+            }
+        }
+        assertTrue(before > 100 && after > 100, "cells checked: " + before + " before t = 3, " + after + " after");
+    }
 }

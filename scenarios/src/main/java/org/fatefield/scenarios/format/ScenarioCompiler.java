@@ -230,7 +230,20 @@ final class ScenarioCompiler {
                 }
             }
         }
-        return problems.isEmpty() ? new FateClassifier(list, defaultName) : null;
+        if (!problems.isEmpty()) {
+            return null;
+        }
+        FateClassifier classifier = new FateClassifier(list, defaultName);
+        String timed = values.text(table, "fates", "first_passage");
+        if (timed.isEmpty()) {
+            return classifier;
+        }
+        if (!classifier.fateNames().contains(timed)) {
+            values.fail(table, "fates", "first_passage", "names no fate; fates are "
+                    + String.join(", ", classifier.fateNames()));
+            return null;
+        }
+        return classifier.withFirstPassage(timed);
     }
 
     private double[] bounds(TomlTable rule, String key, String path, List<String> genes) {

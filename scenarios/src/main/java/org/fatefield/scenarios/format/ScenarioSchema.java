@@ -198,7 +198,10 @@ public final class ScenarioSchema {
                     "cell-to-cell (extrinsic) variability of a circuit parameter, inherited at division; repeat for"
                             + " several parameters"),
             new Section("fates", false, true, List.of(
-                    Key.of("default", KeyType.TEXT, "", "\"progenitor\"", "fate of a cell that matches no rule")),
+                    Key.of("default", KeyType.TEXT, "", "\"progenitor\"", "fate of a cell that matches no rule"),
+                    Key.of("first_passage", KeyType.TEXT, "", "\"\"", "a fate whose first entry by each cell, in"
+                            + " its own life, is timed at every step (first_entry_time_h in lineage.csv, first_passage"
+                            + " in metrics.json); empty for none")),
                     "how a cell's state is read as a fate"),
             new Section("fates.rule", true, true, List.of(
                     Key.of("name", KeyType.TEXT, "", null, "fate name used in outputs"),

@@ -21,8 +21,10 @@ import org.fatefield.engine.tissue.Tissue;
  * @param profile   fate fractions along x
  * @param lineage   lineage statistics
  * @param predicted boundary predicted from the single-cell analysis
+ * @param firstPassage time to first enter the timed fate, or null if no fate is timed
  */
-public record RunMetrics(FateProfile profile, LineageStatistics lineage, PredictedBoundary predicted) {
+public record RunMetrics(FateProfile profile, LineageStatistics lineage, PredictedBoundary predicted,
+        FirstPassageSummary firstPassage) {
 
 
     /** Computes the metrics of {@code tissue} at its end. */
@@ -30,7 +32,12 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
         int fates = tissue.spec().fates().fateCount();
         return new RunMetrics(FateProfile.of(tissue),
                 LineageStatistics.of(tissue.cells(), tissue.ancestry(), fates),
-                PredictedBoundary.of(tissue.spec(), tissue.controlField()));
+                PredictedBoundary.of(tissue.spec(), tissue.controlField()), null);
+    }
+
+    /** With the first-passage summary {@code value}. */
+    public RunMetrics withFirstPassage(FirstPassageSummary value) {
+        return new RunMetrics(profile, lineage, predicted, value);
     }
 
     /** Writes the three tables and the JSON summary into {@code folder}; returns their names. */
@@ -104,6 +111,9 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
         JsonObject related = new JsonObject();
         lineage.sameFate().forEach((d, v) -> related.addProperty(Integer.toString(d), JsonFiles.finite(v)));
         root.add("same_fate_by_lineage_distance", related);
+        if (firstPassage != null) {
+            root.add("first_passage", firstPassage.json());
+        }
         return JsonFiles.text(root);
     }
 

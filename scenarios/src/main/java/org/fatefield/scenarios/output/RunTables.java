@@ -40,7 +40,7 @@ public final class RunTables {
     /** Columns of {@code lineage.csv}. */
     public static final List<String> LINEAGE_HEADER = List.of("id", "parent_id", "generation", "birth_time_h",
             "division_time_h", "birth_x_um", "birth_y_um", "fate_at_division", "fate_at_end", "commitment_time_h",
-            "death_time_h", "birth_volume", "final_volume");
+            "death_time_h", "birth_volume", "final_volume", "first_entry_time_h");
 
     private RunTables() {
     }
@@ -74,7 +74,7 @@ public final class RunTables {
         return List.of(Long.toString(r.id()), Long.toString(r.parentId()), Integer.toString(r.generation()),
                 number(r.birthTime()), number(r.divisionTime()), number(r.birthX()), number(r.birthY()),
                 fateName(r.fateAtDivision(), fates), fateName(r.fateAtEnd(), fates), number(r.commitmentTime()),
-                number(r.deathTime()), number(r.birthVolume()), number(r.finalVolume()));
+                number(r.deathTime()), number(r.birthVolume()), number(r.finalVolume()), number(r.firstEntryTime()));
     }
 
     private static String fateName(int fate, List<String> fates) {

@@ -114,7 +114,13 @@ public final class ScenarioRunner {
         files.add(RunLayout.TIMESERIES);
         folder.writeText(RunLayout.CELLS, w -> RunTables.writeCells(tissue, w));
         files.add(RunLayout.CELLS);
-        files.addAll(RunMetrics.of(tissue).write(folder, tissue.series().fateNames(), seed,
+        RunMetrics metrics = RunMetrics.of(tissue);
+        int timed = tissue.spec().fates().firstPassageFate();
+        if (timed >= 0) {
+            metrics = metrics.withFirstPassage(FirstPassageSummary.read(out.resolve(RunLayout.LINEAGE),
+                    tissue.spec().fates().fateNames().get(timed), tissue.time()));
+        }
+        files.addAll(metrics.write(folder, tissue.series().fateNames(), seed,
                 scenario.tissue().growth().partition().mode().name().toLowerCase(Locale.ROOT)));
         String title = scenario.name() + ", seed " + seed;
         var proportions = FateProportionChart.create(tissue.series(), "Fate proportions: " + title);
