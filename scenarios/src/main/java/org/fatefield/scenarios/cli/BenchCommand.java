@@ -115,8 +115,8 @@ final class BenchCommand implements Callable<Integer> {
             out.printf("Single cell: Langevin step, built-in switch %.4g /s, equivalent custom circuit %.4g /s,"
                     + " custom/built-in %.2f%n", r.builtInRate(), r.customRate(), r.customRatio());
             out.printf("Gillespie direct method: %.4g events/s on one core%n", r.ssaEventsPerSecond());
-            out.printf("Continuation of the switch over %s with branch switching: %.1f ms, %d special points%n",
-                    c.label(), r.continuationMillis(), r.specialPoints());
+            out.printf("Continuation of the switch over %s with branch switching: %.1f ms, %d special point%s%n",
+                    c.label(), r.continuationMillis(), r.specialPoints(), r.specialPoints() == 1 ? "" : "s");
         }
         out.flush();
         return 0;

@@ -103,10 +103,7 @@ class AnalyzeCommandTest {
     void aOneSpeciesCircuitGetsItsSteadyStatesFoldAndSwitchingWithoutPlaneFigures() throws IOException {
         // dX/dt = b + v h(X) - X with h(X) = X^4 / (K^4 + X^4), b = 0.02, K = 0.5. A fold has f = 0 and
         // f' = 0: v = 1 / h'(X) and b + h(X) / h'(X) = X, one equation in X, solved here by Brent's method.
-        Path scenario = tmp.resolve("one-gene-switch.toml");
-        try (var in = AnalyzeCommandTest.class.getResourceAsStream("/one-gene-switch.toml")) {
-            Files.write(scenario, in.readAllBytes());
-        }
+        Path scenario = oneGeneScenario();
         Path out = tmp.resolve("one-gene");
         StringWriter err = new StringWriter();
         int code = FatefieldCommand.execute(new PrintWriter(new StringWriter()), new PrintWriter(err), "analyze",
@@ -137,10 +134,7 @@ class AnalyzeCommandTest {
 
     @Test
     void exactSwitchingRunsAndAnUnaffordableOneIsRefusedBeforeAnythingIsWritten() throws IOException {
-        Path scenario = tmp.resolve("one-gene-switch.toml");
-        try (var in = AnalyzeCommandTest.class.getResourceAsStream("/one-gene-switch.toml")) {
-            Files.write(scenario, in.readAllBytes());
-        }
+        Path scenario = oneGeneScenario();
         Path out = tmp.resolve("exact");
         StringWriter err = new StringWriter();
         int code = FatefieldCommand.execute(new PrintWriter(new StringWriter()), new PrintWriter(err), "analyze",
@@ -161,5 +155,13 @@ class AnalyzeCommandTest {
         assertEquals(FatefieldCommand.INVALID_INPUT, code);
         assertTrue(err.toString().contains("--switching-method langevin"), err.toString());
         assertTrue(Files.notExists(refused));
+    }
+
+    private Path oneGeneScenario() throws IOException {
+        Path scenario = tmp.resolve("one-gene-switch.toml");
+        try (var in = AnalyzeCommandTest.class.getResourceAsStream("/one-gene-switch.toml")) {
+            Files.write(scenario, in.readAllBytes());
+        }
+        return scenario;
     }
 }
