@@ -22,21 +22,26 @@ import org.fatefield.engine.tissue.TissueSpec;
  * @param criticalValues control-parameter values of the circuit's folds and branch points
  * @param kinds          what each critical value is, e.g. "saddle-node (fold)" or "supercritical pitchfork (branch point)"
  * @param positions      positions along x (µm) where the local control parameter crosses them (NaN if it does not)
+ * @param fateCalls      where a stable steady state enters each fate's rule ({@link FateCallBoundary})
+ * @param fateCallPositions positions along x (µm) where the local control parameter crosses those (NaN if it does not)
  * @param undefined      why there is no prediction (no coupling, or no steady state to continue), or
  *                       empty when the lists above are the prediction
  */
-public record PredictedBoundary(double[] criticalValues, String[] kinds, double[] positions, String undefined) {
+public record PredictedBoundary(double[] criticalValues, String[] kinds, double[] positions,
+        List<FateCallBoundary> fateCalls, double[] fateCallPositions, String undefined) {
 
     /** Copies the arrays. */
     public PredictedBoundary {
         criticalValues = criticalValues.clone();
         kinds = kinds.clone();
         positions = positions.clone();
+        fateCalls = List.copyOf(fateCalls);
+        fateCallPositions = fateCallPositions.clone();
     }
 
     /** No prediction, for the reason given. */
     public static PredictedBoundary undefined(String reason) {
-        return new PredictedBoundary(new double[0], new String[0], new double[0], reason);
+        return new PredictedBoundary(new double[0], new String[0], new double[0], List.of(), new double[0], reason);
     }
 
     /**
@@ -69,7 +74,7 @@ public record PredictedBoundary(double[] criticalValues, String[] kinds, double[
         List<Branch> branches;
         try {
             branches = EquilibriumContinuation.of(system,
-                    ContinuationSettings.defaults().withMaxStep(Math.max(1e-3, (hi - lo) / 40)))
+                    ContinuationSettings.defaults().withMaxStep(Math.max(1e-4, (hi - lo) / 400)))
                     .diagram(spec.circuit().initialState(), lo, lo, hi, true, 2);
         } catch (IllegalArgumentException | IllegalStateException e) {
             return undefined("the circuit's steady states could not be continued over the control range ["
@@ -89,16 +94,25 @@ public record PredictedBoundary(double[] criticalValues, String[] kinds, double[
         String[] kinds = critical.stream().map(SpecialPoint::description).toArray(String[]::new);
         double[] positions = new double[values.length];
         for (int k = 0; k < values.length; k++) {
-            positions[k] = Double.NaN;
-            for (int i = 0; i + 1 < control.length; i++) {
-                double a = control[i] - values[k];
-                double b = control[i + 1] - values[k];
-                if (a * b <= 0 && a != b) {
-                    positions[k] = (i + 0.5 + a / (a - b)) * field.spacing();
-                    break;
-                }
+            positions[k] = position(control, values[k], field.spacing());
+        }
+        List<FateCallBoundary> calls = FateCallBoundary.of(branches, spec.fates());
+        double[] callPositions = new double[calls.size()];
+        for (int k = 0; k < calls.size(); k++) {
+            callPositions[k] = position(control, calls.get(k).controlValue(), field.spacing());
+        }
+        return new PredictedBoundary(values, kinds, positions, calls, callPositions, "");
+    }
+
+    /** Where along x the column-averaged control first crosses {@code value} (NaN if it does not). */
+    private static double position(double[] control, double value, double spacing) {
+        for (int i = 0; i + 1 < control.length; i++) {
+            double a = control[i] - value;
+            double b = control[i + 1] - value;
+            if (a * b <= 0 && a != b) {
+                return (i + 0.5 + a / (a - b)) * spacing;
             }
         }
-        return new PredictedBoundary(values, kinds, positions, "");
+        return Double.NaN;
     }
 }

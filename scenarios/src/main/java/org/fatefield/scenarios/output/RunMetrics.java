@@ -105,6 +105,15 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
             predicted.add(p);
         }
         root.add("predicted_boundaries", predicted);
+        JsonArray fateCalls = new JsonArray();
+        for (int k = 0; k < this.predicted.fateCalls().size(); k++) {
+            JsonObject p = new JsonObject();
+            p.addProperty("fate", fateNames.get(this.predicted.fateCalls().get(k).fate()));
+            p.addProperty("control_value", this.predicted.fateCalls().get(k).controlValue());
+            p.addProperty("position_um", JsonFiles.finite(this.predicted.fateCallPositions()[k]));
+            fateCalls.add(p);
+        }
+        root.add("predicted_fate_call_boundaries", fateCalls);
         root.addProperty("predicted_boundaries_undefined", this.predicted.undefined().isEmpty() ? null
                 : this.predicted.undefined());
         root.addProperty("sister_fate_agreement", JsonFiles.finite(lineage.sisterAgreement()));

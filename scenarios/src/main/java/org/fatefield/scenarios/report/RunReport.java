@@ -83,6 +83,19 @@ public final class RunReport {
                     p.has("kind") ? p.get("kind").getAsString() : "", text(p.get("position_um"))));
         }
         page.table(List.of("critical control value", "bifurcation", "predicted position (µm)"), predicted);
+        List<List<String>> calls = new ArrayList<>();
+        JsonElement fateCalls = metrics.get("predicted_fate_call_boundaries");
+        if (fateCalls != null && fateCalls.isJsonArray()) {
+            for (JsonElement e : fateCalls.getAsJsonArray()) {
+                JsonObject p = e.getAsJsonObject();
+                calls.add(List.of(p.get("fate").getAsString(), text(p.get("control_value")), text(p.get("position_um"))));
+            }
+        }
+        if (!calls.isEmpty()) {
+            page.paragraph("Where a stable steady state first satisfies each fate's rule (the fate-call boundary;"
+                    + " it can lie inside the bistable range when a rule asks for more than being on a branch):");
+            page.table(List.of("fate", "control value", "predicted position (µm)"), calls);
+        }
         JsonElement undefined = metrics.get("predicted_boundaries_undefined");
         if (undefined != null && !undefined.isJsonNull()) {
             page.paragraph("No boundary is predicted: " + undefined.getAsString() + ".");
