@@ -12,7 +12,8 @@ package org.fatefield.engine.lineage;
  * @param birthY         position at birth (µm)
  * @param fateAtDivision fate index when it divided, -1 if it did not
  * @param fateAtEnd      fate index at the end of the run, -1 if it divided
- * @param commitmentTime time it last entered its final fate (to the recording interval), NaN if unknown
+ * @param commitmentTime time its lineage last entered the cell's final fate (to the recording
+ *                       interval; before its birth if it was born into the fate), NaN if unknown
  * @param deathTime      time it died (h), NaN if it did not
  * @param birthVolume    volume at birth, in mean newborn volumes
  * @param finalVolume    volume at division, death or the end of the run, in mean newborn volumes

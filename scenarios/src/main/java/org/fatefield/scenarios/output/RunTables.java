@@ -40,7 +40,7 @@ public final class RunTables {
     /** Columns of {@code lineage.csv}. */
     public static final List<String> LINEAGE_HEADER = List.of("id", "parent_id", "generation", "birth_time_h",
             "division_time_h", "birth_x_um", "birth_y_um", "fate_at_division", "fate_at_end", "commitment_time_h",
-            "death_time_h", "birth_volume", "final_volume", "first_entry_time_h");
+            "lineage_commitment_time_h", "death_time_h", "birth_volume", "final_volume", "first_entry_time_h");
 
     private RunTables() {
     }
@@ -73,8 +73,16 @@ public final class RunTables {
     public static List<String> lineageRow(LineageRecord r, List<String> fates) {
         return List.of(Long.toString(r.id()), Long.toString(r.parentId()), Integer.toString(r.generation()),
                 number(r.birthTime()), number(r.divisionTime()), number(r.birthX()), number(r.birthY()),
-                fateName(r.fateAtDivision(), fates), fateName(r.fateAtEnd(), fates), number(r.commitmentTime()),
-                number(r.deathTime()), number(r.birthVolume()), number(r.finalVolume()), number(r.firstEntryTime()));
+                fateName(r.fateAtDivision(), fates), fateName(r.fateAtEnd(), fates), number(ownCommitment(r)),
+                number(r.commitmentTime()), number(r.deathTime()), number(r.birthVolume()), number(r.finalVolume()), number(r.firstEntryTime()));
+    }
+
+    /**
+     * When this cell itself entered its final fate: the lineage's entry if that came during the
+     * cell's life, else its birth (it was born into the fate its mother had).
+     */
+    private static double ownCommitment(LineageRecord r) {
+        return Double.isNaN(r.commitmentTime()) ? Double.NaN : Math.max(r.commitmentTime(), r.birthTime());
     }
 
     private static String fateName(int fate, List<String> fates) {

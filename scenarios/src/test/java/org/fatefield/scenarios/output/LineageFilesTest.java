@@ -19,7 +19,7 @@ class LineageFilesTest {
         try (LineageFiles files = LineageFiles.start(dir, fates)) {
             files.accept(new LineageRecord(0, -1, 0, -2.5, 3.0, 10, 20, 0, -1, Double.NaN, Double.NaN, 1, 2, Double.NaN));
             files.accept(new LineageRecord(1, 0, 1, 3.0, Double.NaN, 11, 21, -1, 1, 4.5, Double.NaN, 1, 1.5, 4.0));
-            files.accept(new LineageRecord(2, 0, 1, 3.0, Double.NaN, 9, 19, -1, 2, Double.NaN, 6.0, 1, 1.2, Double.NaN));
+            files.accept(new LineageRecord(2, 0, 1, 3.0, Double.NaN, 9, 19, -1, 2, 1.5, 6.0, 1, 1.2, Double.NaN));
         }
         List<CSVRecord> rows = RunTables.records(dir.resolve(RunLayout.LINEAGE));
         assertEquals(3, rows.size());
@@ -28,6 +28,10 @@ class LineageFilesTest {
         assertEquals("", rows.get(0).get("fate_at_end"));
         assertEquals("say \"hi\"", rows.get(1).get("fate_at_end"));
         assertEquals("4.5", rows.get(1).get("commitment_time_h"));
+        assertEquals("4.5", rows.get(1).get("lineage_commitment_time_h"));
+        // Cell 2 was born at 3 h into the fate its lineage entered at 1.5 h: its own entry is its birth.
+        assertEquals("3", rows.get(2).get("commitment_time_h"));
+        assertEquals("1.5", rows.get(2).get("lineage_commitment_time_h"));
         assertEquals("6", rows.get(2).get("death_time_h"));
         StringWriter trees = new StringWriter();
         LineageFiles.writeTrees(dir.resolve(RunLayout.LINEAGE), 8.0, trees);
