@@ -1,5 +1,6 @@
 package org.fatefield.engine.metrics;
 
+import java.util.Arrays;
 import java.util.List;
 import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.tissue.Tissue;
@@ -63,13 +64,12 @@ public record FateProfile(double[] centres, int[] counts, double[][] fractions) 
     }
 
     /**
-     * Where fate {@code f}'s fraction crosses {@code level}, by linear interpolation between bin
-     * centres (empty bins skipped). With several crossings (noise), the mean of the first and the
-     * last; NaN if there is none.
+     * Every position where fate {@code f}'s fraction crosses {@code level}, by linear
+     * interpolation between the centres of consecutive non-empty bins, in order along x.
      */
-    public double crossing(int f, double level) {
-        double first = Double.NaN;
-        double last = Double.NaN;
+    public double[] crossings(int f, double level) {
+        double[] found = new double[centres.length];
+        int n = 0;
         int previous = -1;
         for (int b = 0; b < centres.length; b++) {
             double v = fractions[f][b];
@@ -80,24 +80,30 @@ public record FateProfile(double[] centres, int[] counts, double[][] fractions) 
                 double u = fractions[f][previous];
                 if ((u - level) * (v - level) < 0 || (v == level && u != level)) {
                     double t = (level - u) / (v - u);
-                    double x = centres[previous] + t * (centres[b] - centres[previous]);
-                    if (Double.isNaN(first)) {
-                        first = x;
-                    }
-                    last = x;
+                    found[n++] = centres[previous] + t * (centres[b] - centres[previous]);
                 }
             }
             previous = b;
         }
-        return Double.isNaN(first) ? Double.NaN : 0.5 * (first + last);
+        return Arrays.copyOf(found, n);
     }
 
-    /** Boundary of fate {@code f}: where its fraction crosses 1/2. */
+    /**
+     * Where fate {@code f}'s fraction crosses {@code level} if it does so exactly once, else NaN:
+     * a fraction that crosses several times (a fate mixed with others, salt and pepper) has no
+     * single crossing to report ({@link MixedZone} describes such fates).
+     */
+    public double crossing(int f, double level) {
+        double[] all = crossings(f, level);
+        return all.length == 1 ? all[0] : Double.NaN;
+    }
+
+    /** Boundary of fate {@code f}: where its fraction crosses 1/2, if it crosses once. */
     public double boundary(int f) {
         return crossing(f, 0.5);
     }
 
-    /** Width of fate {@code f}'s boundary: distance between its 10% and 90% crossings. */
+    /** Width of fate {@code f}'s boundary: distance between its single 10% and 90% crossings, else NaN. */
     public double width(int f) {
         return Math.abs(crossing(f, 0.9) - crossing(f, 0.1));
     }

@@ -9,6 +9,7 @@ import java.util.Map;
 import org.apache.commons.csv.CSVPrinter;
 import org.fatefield.engine.metrics.FateProfile;
 import org.fatefield.engine.metrics.LineageStatistics;
+import org.fatefield.engine.metrics.MixedZone;
 import org.fatefield.engine.metrics.PredictedBoundary;
 import org.fatefield.engine.tissue.Tissue;
 
@@ -21,23 +22,25 @@ import org.fatefield.engine.tissue.Tissue;
  * @param profile   fate fractions along x
  * @param lineage   lineage statistics
  * @param predicted boundary predicted from the single-cell analysis
+ * @param mixed     committed-against-default boundary and the zone where committed fates mix
  * @param firstPassage time to first enter the timed fate, or null if no fate is timed
  */
 public record RunMetrics(FateProfile profile, LineageStatistics lineage, PredictedBoundary predicted,
-        FirstPassageSummary firstPassage) {
+        MixedZone mixed, FirstPassageSummary firstPassage) {
 
 
     /** Computes the metrics of {@code tissue} at its end. */
     public static RunMetrics of(Tissue tissue) {
         int fates = tissue.spec().fates().fateCount();
-        return new RunMetrics(FateProfile.of(tissue),
-                LineageStatistics.of(tissue.cells(), tissue.ancestry(), fates),
-                PredictedBoundary.of(tissue.spec(), tissue.controlField()), null);
+        FateProfile profile = FateProfile.of(tissue);
+        return new RunMetrics(profile, LineageStatistics.of(tissue.cells(), tissue.ancestry(), fates),
+                PredictedBoundary.of(tissue.spec(), tissue.controlField()),
+                MixedZone.of(tissue.cells(), fates, profile, tissue.spec().width()), null);
     }
 
     /** With the first-passage summary {@code value}. */
     public RunMetrics withFirstPassage(FirstPassageSummary value) {
-        return new RunMetrics(profile, lineage, predicted, value);
+        return new RunMetrics(profile, lineage, predicted, mixed, value);
     }
 
     /** Writes the three tables and the JSON summary into {@code folder}; returns their names. */
@@ -93,9 +96,26 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
             JsonObject b = new JsonObject();
             b.addProperty("position_um", JsonFiles.finite(profile.boundary(f)));
             b.addProperty("width_10_90_um", JsonFiles.finite(profile.width(f)));
+            b.addProperty("crossings_of_one_half", profile.crossings(f, 0.5).length);
             boundaries.add(fateNames.get(f), b);
         }
         root.add("boundaries", boundaries);
+        root.addProperty("committed_boundary_um", JsonFiles.finite(mixed.committedBoundary()));
+        JsonObject zone = new JsonObject();
+        zone.addProperty("start_um", JsonFiles.finite(mixed.start()));
+        zone.addProperty("end_um", JsonFiles.finite(mixed.end()));
+        zone.addProperty("committed_cells", mixed.committedInZone());
+        JsonObject shares = new JsonObject();
+        for (int f = 0; f + 1 < fateNames.size() && mixed.committedInZone() > 0; f++) {
+            JsonObject share = new JsonObject();
+            double[] ci = mixed.shareInterval(f);
+            share.addProperty("share", mixed.share(f));
+            share.addProperty("ci95_low", ci[0]);
+            share.addProperty("ci95_high", ci[1]);
+            shares.add(fateNames.get(f), share);
+        }
+        zone.add("shares", shares);
+        root.add("mixed_zone", zone);
         JsonArray predicted = new JsonArray();
         for (int k = 0; k < this.predicted.criticalValues().length; k++) {
             JsonObject p = new JsonObject();

@@ -4,6 +4,8 @@ import com.google.gson.JsonElement;
 import com.google.gson.JsonObject;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -73,9 +75,30 @@ public final class RunReport {
         List<List<String>> rows = new ArrayList<>();
         for (String fate : fates) {
             JsonObject b = metrics.getAsJsonObject("boundaries").getAsJsonObject(fate);
-            rows.add(List.of(fate, text(b.get("position_um")), text(b.get("width_10_90_um"))));
+            JsonElement crossings = b.get("crossings_of_one_half");
+            String position = text(b.get("position_um"));
+            if ("–".equals(position) && crossings != null && crossings.getAsInt() > 1) {
+                position = "not defined: the fraction crosses 1/2 " + crossings.getAsInt()
+                        + " times (a mixed fate; see below)";
+            }
+            rows.add(List.of(fate, position, text(b.get("width_10_90_um"))));
         }
-        page.table(List.of("fate", "boundary (µm, fraction crosses 1/2)", "width 10-90% (µm)"), rows);
+        page.table(List.of("fate", "boundary (µm, fraction crosses 1/2 once)", "width 10-90% (µm)"), rows);
+        page.paragraph("Committed fates against the default (best step fit): "
+                + text(metrics.get("committed_boundary_um")) + " µm.");
+        JsonElement zone = metrics.get("mixed_zone");
+        if (zone != null && zone.isJsonObject() && zone.getAsJsonObject().get("committed_cells").getAsLong() > 0) {
+            JsonObject z = zone.getAsJsonObject();
+            List<List<String>> shares = new ArrayList<>();
+            for (Map.Entry<String, JsonElement> e : z.getAsJsonObject("shares").entrySet()) {
+                JsonObject share = e.getValue().getAsJsonObject();
+                shares.add(List.of(e.getKey(), text(share.get("share")),
+                        text(share.get("ci95_low")) + " to " + text(share.get("ci95_high"))));
+            }
+            page.paragraph("Committed fates mix from " + text(z.get("start_um")) + " to " + text(z.get("end_um"))
+                    + " µm (" + z.get("committed_cells").getAsLong() + " committed cells):");
+            page.table(List.of("fate", "share of committed cells", "95% interval (Wilson)"), shares);
+        }
         List<List<String>> predicted = new ArrayList<>();
         for (JsonElement e : metrics.getAsJsonArray("predicted_boundaries")) {
             JsonObject p = e.getAsJsonObject();
@@ -170,7 +193,19 @@ public final class RunReport {
         return out.toByteArray();
     }
 
+    /** A JSON value for reading: numbers to 4 significant digits, "–" for none. */
     private static String text(JsonElement e) {
-        return e == null || e.isJsonNull() ? "–" : e.isJsonPrimitive() ? e.getAsString() : e.toString();
+        if (e == null || e.isJsonNull()) {
+            return "–";
+        }
+        if (e.isJsonPrimitive() && e.getAsJsonPrimitive().isNumber()) {
+            double v = e.getAsDouble();
+            if (v == Math.rint(v) && Math.abs(v) < 1e6) {
+                return Long.toString((long) v);
+            }
+            return new BigDecimal(v).round(new MathContext(4)).stripTrailingZeros()
+                    .toPlainString();
+        }
+        return e.isJsonPrimitive() ? e.getAsString() : e.toString();
     }
 }
