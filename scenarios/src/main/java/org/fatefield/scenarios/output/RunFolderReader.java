@@ -122,6 +122,21 @@ public final class RunFolderReader {
         return predicted.stream().mapToDouble(Double::doubleValue).toArray();
     }
 
+    /** Predicted fate-call boundary positions (µm) listed in {@code metrics} (none in older run folders). */
+    public static double[] predictedFateCalls(JsonObject metrics) {
+        List<Double> out = new ArrayList<>();
+        JsonElement calls = metrics.get("predicted_fate_call_boundaries");
+        if (calls != null && calls.isJsonArray()) {
+            for (JsonElement e : calls.getAsJsonArray()) {
+                JsonElement p = e.getAsJsonObject().get("position_um");
+                if (p != null && !p.isJsonNull()) {
+                    out.add(p.getAsDouble());
+                }
+            }
+        }
+        return out.stream().mapToDouble(Double::doubleValue).toArray();
+    }
+
     private double parse(CSVRecord row, String column) throws IOException {
         try {
             return Double.parseDouble(row.get(column));

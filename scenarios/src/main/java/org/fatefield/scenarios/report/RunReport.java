@@ -152,7 +152,7 @@ public final class RunReport {
                 .get("position_um");
         double simulated = sim == null || sim.isJsonNull() ? Double.NaN : sim.getAsDouble();
         return png(ProfileChart.create(fates, profile.x(), profile.fractions(), simulated,
-                RunFolderReader.predictedBoundaries(metrics)));
+                RunFolderReader.predictedBoundaries(metrics), RunFolderReader.predictedFateCalls(metrics)));
     }
 
     /**

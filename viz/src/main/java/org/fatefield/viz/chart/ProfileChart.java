@@ -2,6 +2,7 @@ package org.fatefield.viz.chart;
 
 import java.awt.BasicStroke;
 import java.awt.Color;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import org.fatefield.viz.palette.FatePalette;
@@ -26,10 +27,11 @@ public final class ProfileChart {
      * @param x         bin centres (µm)
      * @param fractions {@code fractions[f][b]}
      * @param simulated simulated boundary of the default fate (NaN for none)
-     * @param predicted predicted boundaries (µm)
+     * @param predicted predicted boundaries where the switch becomes bistable (µm)
+     * @param fateCalls predicted positions where a stable state first meets a fate rule (µm)
      */
     public static JFreeChart create(List<String> fates, double[] x, double[][] fractions, double simulated,
-            double[] predicted) {
+            double[] predicted, double[] fateCalls) {
         XYSeriesCollection data = new XYSeriesCollection();
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
         for (int f = 0; f < fates.size(); f++) {
@@ -58,9 +60,19 @@ public final class ProfileChart {
         int row = 0;
         for (double p : predicted) {
             if (Double.isFinite(p)) {
-                plot.addDomainMarker(marker(p, "predicted", new BasicStroke(1.8f, BasicStroke.CAP_BUTT,
+                plot.addDomainMarker(marker(p, "bistable from", new BasicStroke(1.8f, BasicStroke.CAP_BUTT,
                         BasicStroke.JOIN_MITER, 10f, new float[] {6f, 4f}, 0f), ChartStyle.UNSTABLE, row++));
             }
+        }
+        double previous = Double.NaN;
+        for (double p : Arrays.stream(fateCalls).filter(Double::isFinite).sorted().toArray()) {
+            // Fates whose rules are met at the same place share one line.
+            if (Double.isFinite(previous) && Math.abs(p - previous) < 0.5) {
+                continue;
+            }
+            previous = p;
+            plot.addDomainMarker(marker(p, "fate rule met", new BasicStroke(1.8f, BasicStroke.CAP_BUTT,
+                    BasicStroke.JOIN_MITER, 10f, new float[] {2f, 3f}, 0f), ChartStyle.UNSTABLE, row++));
         }
         return ChartStyle.chart("Fate profile along the gradient", plot, true);
     }
