@@ -4,15 +4,18 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.fatefield.engine.record.TimeSeries;
 import org.fatefield.engine.tissue.Tissue;
+import org.fatefield.engine.tissue.WorkEstimate;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.output.Progress;
 import org.fatefield.scenarios.output.RunLayout;
 import org.fatefield.scenarios.output.RunRequest;
 import org.fatefield.scenarios.output.ScenarioRunner;
+import org.fatefield.scenarios.output.Snapshots;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -52,11 +55,19 @@ final class RunCommand implements Callable<Integer> {
             + " simulated time into frames/, and tissue.gif at the end")
     private Double framesEvery;
 
+    @Option(names = "--snapshots", description = "also write, at every record time, a table of every cell (position,"
+            + " volume, molecules, control value, fate) and of every field's grid into snapshots/ (long format; the"
+            + " size is estimated first, and over 2 GB needs --yes)")
+    private boolean snapshots;
+
     @Option(names = "--resume", description = "continue the run from the checkpoint in --out (same scenario and seed)")
     private boolean resume;
 
     @Option(names = "--quiet", description = "print nothing but errors")
     private boolean quiet;
+
+    /** Estimated snapshot size above which --yes is needed. */
+    private static final double SNAPSHOT_CONFIRM_BYTES = 2e9;
 
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
@@ -97,9 +108,23 @@ final class RunCommand implements Callable<Integer> {
                 }
                 frameSteps = Math.max(1, Math.round(framesEvery / loaded.tissue().timing().step()));
             }
+            if (snapshots) {
+                double bytes = Snapshots.estimatedBytes(loaded.tissue(), WorkEstimate.of(loaded.tissue()).finalCells());
+                if (bytes > SNAPSHOT_CONFIRM_BYTES && !confirm.given()) {
+                    err.printf(Locale.ROOT, "--snapshots would write about %.1f GB; nothing was run. Add --yes to write"
+                            + " them anyway, or record less often (run.record_every).%n", bytes / 1e9);
+                    return FatefieldCommand.INVALID_INPUT;
+                }
+                if (!quiet) {
+                    outWriter.printf(Locale.ROOT, "Snapshots: about %.0f MB into %s/%n", bytes / 1e6,
+                            RunLayout.SNAPSHOTS);
+                    outWriter.flush();
+                }
+            }
             Tissue tissue = ScenarioRunner.run(RunRequest.of(loaded, folder).withSeed(runSeed)
                     .withThreads(threads.resolveFor(loaded)).withForce(force.given()).withProgress(progress)
-                    .withCheckpointSteps(every).withResume(resume).withFrameSteps(frameSteps));
+                    .withCheckpointSteps(every).withResume(resume).withFrameSteps(frameSteps)
+                    .withSnapshots(snapshots));
             if (!quiet) {
                 TimeSeries.Row last = tissue.series().last();
                 List<String> fates = tissue.series().fateNames();

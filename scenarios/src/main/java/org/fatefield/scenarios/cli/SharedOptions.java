@@ -142,6 +142,11 @@ final class SharedOptions {
          * Checks the work {@code scenario} asks for; prints why and returns false if the run must not
          * start.
          */
+        /** True when --yes was given. */
+        boolean given() {
+            return yes;
+        }
+
         boolean allows(CommandSpec spec, Scenario scenario) {
             WorkEstimate estimate = WorkEstimate.of(scenario.tissue());
             PrintWriter err = spec.commandLine().getErr();

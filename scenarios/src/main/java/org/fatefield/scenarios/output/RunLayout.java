@@ -38,6 +38,8 @@ public final class RunLayout {
     public static final String ANIMATION = "tissue.gif";
     /** Folder of PNG frames. */
     public static final String FRAMES = "frames";
+    /** Folder of the per-record-time cell and field tables. */
+    public static final String SNAPSHOTS = "snapshots";
     /** Copy of the scenario that was run. */
     public static final String SCENARIO_COPY = "scenario.toml";
     /** Provenance, written last: its presence marks a finished run. */

@@ -18,9 +18,10 @@ import org.fatefield.scenarios.format.Scenario;
  * @param checkpointSteps steps between checkpoints, 0 for none
  * @param resume          continue from the folder's checkpoint
  * @param frameSteps      steps between PNG frames, 0 for none
+ * @param snapshots       write the cell and field tables at every record time ({@code snapshots/})
  */
 public record RunRequest(Scenario scenario, Path out, long seed, int threads, boolean force, Progress progress,
-        long checkpointSteps, boolean resume, long frameSteps) {
+        long checkpointSteps, boolean resume, long frameSteps, boolean snapshots) {
 
     /** Validates. */
     public RunRequest {
@@ -41,41 +42,53 @@ public record RunRequest(Scenario scenario, Path out, long seed, int threads, bo
 
     /** A run of {@code scenario} into {@code out} with its own seed, one thread, no extras, silent. */
     public static RunRequest of(Scenario scenario, Path out) {
-        return new RunRequest(scenario, out, scenario.seed(), 1, false, Progress.silent(), 0, false, 0);
+        return new RunRequest(scenario, out, scenario.seed(), 1, false, Progress.silent(), 0, false, 0, false);
     }
 
     /** With master seed {@code value}. */
     public RunRequest withSeed(long value) {
-        return new RunRequest(scenario, out, value, threads, force, progress, checkpointSteps, resume, frameSteps);
+        return new RunRequest(scenario, out, value, threads,
+                force, progress, checkpointSteps, resume, frameSteps, snapshots);
     }
 
     /** Stepped on {@code value} threads. */
     public RunRequest withThreads(int value) {
-        return new RunRequest(scenario, out, seed, value, force, progress, checkpointSteps, resume, frameSteps);
+        return new RunRequest(scenario, out, seed,
+                value, force, progress, checkpointSteps, resume, frameSteps, snapshots);
     }
 
     /** Allowed (or not) to overwrite the run files of a folder that holds files. */
     public RunRequest withForce(boolean value) {
-        return new RunRequest(scenario, out, seed, threads, value, progress, checkpointSteps, resume, frameSteps);
+        return new RunRequest(scenario, out, seed, threads,
+                value, progress, checkpointSteps, resume, frameSteps, snapshots);
     }
 
     /** Reporting progress to {@code value}. */
     public RunRequest withProgress(Progress value) {
-        return new RunRequest(scenario, out, seed, threads, force, value, checkpointSteps, resume, frameSteps);
+        return new RunRequest(scenario, out, seed, threads,
+                force, value, checkpointSteps, resume, frameSteps, snapshots);
     }
 
     /** Checkpointing every {@code steps} steps (0: never). */
     public RunRequest withCheckpointSteps(long steps) {
-        return new RunRequest(scenario, out, seed, threads, force, progress, steps, resume, frameSteps);
+        return new RunRequest(scenario, out, seed, threads, force, progress, steps, resume, frameSteps, snapshots);
     }
 
     /** Continuing (or not) from the folder's checkpoint. */
     public RunRequest withResume(boolean value) {
-        return new RunRequest(scenario, out, seed, threads, force, progress, checkpointSteps, value, frameSteps);
+        return new RunRequest(scenario, out, seed, threads,
+                force, progress, checkpointSteps, value, frameSteps, snapshots);
     }
 
     /** Writing a frame every {@code steps} steps (0: never). */
     public RunRequest withFrameSteps(long steps) {
-        return new RunRequest(scenario, out, seed, threads, force, progress, checkpointSteps, resume, steps);
+        return new RunRequest(scenario, out, seed, threads,
+                force, progress, checkpointSteps, resume, steps, snapshots);
+    }
+
+    /** Writing (or not) the cell and field tables at every record time. */
+    public RunRequest withSnapshots(boolean value) {
+        return new RunRequest(scenario, out, seed, threads,
+                force, progress, checkpointSteps, resume, frameSteps, value);
     }
 }

@@ -77,6 +77,14 @@ public final class ScenarioRunner {
             }
             tissue.addObserver(TissueObserver.every(request.frameSteps(), unchecked(frames::write)));
         }
+        if (request.snapshots()) {
+            Snapshots snapshots = new Snapshots(out);
+            if (saved == null) {
+                snapshots.write(tissue);
+            }
+            tissue.addObserver(TissueObserver.every(scenario.tissue().timing().stepsPerRecord(),
+                    unchecked(snapshots::write)));
+        }
         if (request.checkpointSteps() > 0) {
             tissue.addObserver(TissueObserver.every(request.checkpointSteps(), unchecked(t -> {
                 if (!t.finished()) {
@@ -101,6 +109,9 @@ public final class ScenarioRunner {
         List<String> files = new ArrayList<>();
         if (request.frameSteps() > 0) {
             files.addAll(frames.finish(folder));
+        }
+        if (request.snapshots()) {
+            files.add(RunLayout.SNAPSHOTS + "/");
         }
         files.add(RunLayout.LINEAGE);
         scenario.copyInto(RunLayout.SCENARIO_COPY, (name, text) -> {

@@ -124,13 +124,14 @@ class RunCommandTest {
         Files.writeString(scenario, new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8)
                 .replace("founders = 120", "founders = 400").replace("duration = 48.0", "duration = 30.0"));
         Path straight = tmp.resolve("straight");
-        assertEquals(0, fatefield("run", scenario.toString(), "--out", straight.toString(), "--seed", "3", "--quiet").code());
+        assertEquals(0, fatefield("run", scenario.toString(), "--out", straight.toString(), "--seed", "3", "--quiet",
+                "--snapshots").code());
 
         Path killed = tmp.resolve("killed");
         Process process = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
                 "-cp", System.getProperty("java.class.path"), "-Djava.awt.headless=true",
                 FatefieldCommand.class.getName(), "run", scenario.toString(), "--out", killed.toString(), "--seed", "3",
-                "--quiet", "--threads", "1", "--checkpoint-every", "1").redirectErrorStream(true).start();
+                "--quiet", "--threads", "1", "--checkpoint-every", "1", "--snapshots").redirectErrorStream(true).start();
         Path checkpoint = killed.resolve("checkpoint.bin");
         long deadline = System.nanoTime() + 60_000_000_000L;
         while (!Files.exists(checkpoint) && process.isAlive() && System.nanoTime() < deadline) {
@@ -145,11 +146,24 @@ class RunCommandTest {
         Files.move(killed.resolve(".lineage.csv.partial"), killed.resolve("lineage.csv"));
 
         Outcome resumed = fatefield("run", scenario.toString(), "--out", killed.toString(), "--seed", "3", "--quiet",
-                "--resume");
+                "--resume", "--snapshots");
         assertEquals(0, resumed.code(), resumed.err());
         for (String file : List.of("timeseries.csv", "cells.csv", "lineage.csv", "lineage.nwk", "profile.csv")) {
             assertArrayEquals(Files.readAllBytes(straight.resolve(file)), Files.readAllBytes(killed.resolve(file)), file);
         }
+        // Snapshots: one cell and one field table per record time (30 h every 0.5 h: 61), the same after the kill.
+        List<String> names;
+        try (var list = Files.list(straight.resolve("snapshots"))) {
+            names = list.map(p -> p.getFileName().toString()).sorted().toList();
+        }
+        assertEquals(122, names.size(), names.toString());
+        for (String name : names) {
+            assertArrayEquals(Files.readAllBytes(straight.resolve("snapshots").resolve(name)),
+                    Files.readAllBytes(killed.resolve("snapshots").resolve(name)), name);
+        }
+        List<String> lastCells = Files.readAllLines(straight.resolve("snapshots").resolve(names.get(60)));
+        assertEquals(Files.readAllLines(straight.resolve("cells.csv")).size(), lastCells.size(),
+                "the last cell table has every live cell, like cells.csv");
         assertFalse(Files.exists(checkpoint), "a finished run keeps no checkpoint");
         Outcome nothing = fatefield("run", scenario.toString(), "--out", tmp.resolve("empty").toString(), "--resume");
         assertEquals(FatefieldCommand.OUTPUT_ERROR, nothing.code());
