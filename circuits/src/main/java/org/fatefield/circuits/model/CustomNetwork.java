@@ -72,12 +72,14 @@ public final class CustomNetwork implements ReactionNetwork {
     private final int[][] jacobianSpecies;
     private final CompiledExpression[][] jacobianTerms;
     private final List<Node> trees;
+    private final List<String> reactionNames;
 
     private CustomNetwork(List<String> species, List<String> parameterNames, double[] defaults,
             List<ReactionDefinition> reactions) {
         this.species = List.copyOf(species);
         this.parameterNames = List.copyOf(parameterNames);
         this.defaults = defaults.clone();
+        this.reactionNames = reactions.stream().map(ReactionDefinition::name).toList();
         int m = reactions.size();
         this.stoichiometry = new int[m][];
         this.rates = new CompiledExpression[m];
@@ -173,6 +175,11 @@ public final class CustomNetwork implements ReactionNetwork {
     @Override
     public double[] defaultParameters() {
         return defaults.clone();
+    }
+
+    @Override
+    public String reactionName(int r) {
+        return "reaction '" + reactionNames.get(r) + "'";
     }
 
     @Override

@@ -81,6 +81,11 @@ public interface ReactionNetwork {
         return IntStream.range(0, names.size()).filter(i -> names.get(i).endsWith(suffix)).toArray();
     }
 
+    /** A name for reaction {@code r} that a modeler recognises, for messages ("reaction 3" unless a circuit knows better). */
+    default String reactionName(int r) {
+        return "reaction " + (r + 1);
+    }
+
     /** Index of the named species; throws with the list of known names if there is none. */
     default int speciesIndex(String name) {
         int index = speciesNames().indexOf(name);

@@ -90,6 +90,11 @@ public final class SelfActivatingSwitch implements ReactionNetwork {
     }
 
     @Override
+    public String reactionName(int r) {
+        return (r % 2 == 0 ? "production of " : "loss of ") + species.get(r / 2);
+    }
+
+    @Override
     public int reactionCount() {
         return 4;
     }

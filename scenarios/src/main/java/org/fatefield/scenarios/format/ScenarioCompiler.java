@@ -26,6 +26,7 @@ import org.fatefield.engine.domain.Domain;
 import org.fatefield.engine.tissue.CircuitSetup;
 import org.fatefield.engine.tissue.GrowthSpec;
 import org.fatefield.engine.tissue.NoiseMode;
+import org.fatefield.engine.tissue.RateCheck;
 import org.fatefield.engine.tissue.Timing;
 import org.fatefield.engine.tissue.TissueSpec;
 import org.fatefield.engine.variability.ExtrinsicNoise;
@@ -106,6 +107,13 @@ final class ScenarioCompiler {
             TissueSpec spec = new TissueSpec(circuit, mapping, morphogen,
                     Domain.of(values.text(tissue, "tissue", "shape"), width, height), growth, fates,
                     new Timing(duration, step, recordEvery), extrinsic(circuit), others);
+            for (String rate : RateCheck.problems(spec)) {
+                problems.add(new Problem(circuitDocument.label(), 0, 0, "circuit", null, rate
+                        + ": fix the rate law, the parameter values or the coupling's range"));
+            }
+            if (!problems.isEmpty()) {
+                return null;
+            }
             String name = scenario.contains("name") ? scenario.getString("name") : fallbackName;
             String description = scenario.contains("description") ? scenario.getString("description") : "";
             long seed = run.contains("seed") ? run.getLong("seed") : 1L;

@@ -168,4 +168,22 @@ class ScenarioReaderTest {
         assertEquals(1.0, p[names.indexOf("Lum.degradation")], 0.0);
         assertEquals(2.5, p[names.indexOf("Ark.degradation")], 0.0);
     }
+
+    /**
+     * A coupling that drives the repressible production below zero (-50 + 0.2 at saturation,
+     * minus the rest) and the same with no coupling problem: the first is refused naming the
+     * reaction, the parameter value and why; nothing is clamped silently.
+     */
+    @Test
+    void negativeRatesAreRefusedBeforeARun() {
+        String negative = demo().replace("base = 0.2\ngain = 1.8", "base = 0.2\ngain = -50.0");
+        assertTrue(!negative.equals(demo()), "the demo's coupling block changed; update this test");
+        List<Problem> found = problems(negative);
+        assertEquals(1, found.size(), found.toString());
+        String message = found.get(0).message();
+        assertTrue(message.contains("production of Lum is negative") && message.contains("repression = -49.8"),
+                message);
+        List<Problem> finite = problems(demo().replace("repression_hill = 4", "repression_hill = 4\nbasal = -1.0"));
+        assertTrue(!finite.isEmpty(), "a negative basal rate is refused too");
+    }
 }
