@@ -4,8 +4,10 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
+import org.fatefield.circuits.analysis.Spectra;
 import org.fatefield.circuits.model.ReactionNetwork;
 import org.fatefield.engine.coupling.SignalCoupling;
+import org.hipparchus.complex.Complex;
 
 /**
  * Checks before a run that every reaction rate is a finite number of at least 0 where the run
@@ -13,7 +15,12 @@ import org.fatefield.engine.coupling.SignalCoupling;
  * coupled parameters at each end of their coupling's range (all combinations, for up to four
  * couplings). A negative rate would otherwise be clamped to zero by the exact methods and
  * followed backwards by the others, silently; a non-finite one would stop the run only after
- * it had started.
+ * it had started. For the fixed-step methods it also checks the step against the circuit's
+ * fastest rate there (the largest eigenvalue modulus of its Jacobian): Euler-Maruyama
+ * (Langevin) is unstable on a linear decay when rate x step exceeds 2 and already wrong by
+ * a factor of two at 1, so 1 is the limit; the deterministic RK4 steps are refused above 2
+ * (their stability limit on real decays is 2.79; Hairer, Norsett &amp; Wanner 1993, Solving
+ * Ordinary Differential Equations I, §IV.2).
  */
 public final class RateCheck {
 
@@ -53,8 +60,15 @@ public final class RateCheck {
                     if (problem != null) {
                         problems.add(String.format(Locale.ROOT, "the rate of %s %s at %s %s%s", network.reactionName(r),
                                 problem, stateNames[s], Arrays.toString(states[s]),
-                                where.length() == 0 ? "" : " with " + where + " (an end of the coupling's range)"));
+                                where.length() == 0 ? "" : " with " + where + " (an end of the coupling's range)")
+                                + "; fix the rate law, the parameter values or the coupling's range");
                     }
+                }
+            }
+            if (problems.isEmpty()) {
+                String step = stepProblem(spec, initial, p, where.toString());
+                if (step != null) {
+                    problems.add(step);
                 }
             }
             if (!problems.isEmpty()) {
@@ -62,5 +76,30 @@ public final class RateCheck {
             }
         }
         return problems;
+    }
+
+    private static String stepProblem(TissueSpec spec, double[] x, double[] p, String where) {
+        NoiseMode mode = spec.circuit().noise();
+        double limit = mode == NoiseMode.LANGEVIN ? 1.0 : mode == NoiseMode.NONE ? 2.0 : Double.NaN;
+        if (Double.isNaN(limit)) {
+            return null;
+        }
+        ReactionNetwork network = spec.circuit().network();
+        int n = network.speciesCount();
+        double[][] jac = new double[n][n];
+        network.jacobian(x, p, jac);
+        double fastest = 0;
+        for (Complex lambda : Spectra.eigenvalues(jac)) {
+            fastest = Math.max(fastest, lambda.norm());
+        }
+        double dt = spec.timing().step();
+        if (!(fastest * dt <= limit)) {
+            return String.format(Locale.ROOT, "run.step = %.6g h is too long for the circuit: its fastest rate at the"
+                    + " initial state%s is %.6g per hour, so rate x step = %.3g, above the %s method's limit of %.0f"
+                    + " (the cells' molecule numbers would be wrong, not just noisy); set run.step to at most %.3g h",
+                    dt, where.isEmpty() ? "" : " with " + where, fastest, fastest * dt, mode.word(), limit,
+                    limit / fastest);
+        }
+        return null;
     }
 }

@@ -99,7 +99,7 @@ final class ScenarioCompiler {
         fieldNames.add(morphogen == null ? "morphogen" : morphogen.name());
         others.forEach(o -> fieldNames.add(o.name()));
         ParameterMapping mapping = mapping(circuit, fieldNames);
-        GrowthSpec growth = growth(tissue, circuit);
+        GrowthSpec growth = growth(tissue, circuit, step);
         if (!problems.isEmpty()) {
             return null;
         }
@@ -108,8 +108,7 @@ final class ScenarioCompiler {
                     Domain.of(values.text(tissue, "tissue", "shape"), width, height), growth, fates,
                     new Timing(duration, step, recordEvery), extrinsic(circuit), others);
             for (String rate : RateCheck.problems(spec)) {
-                problems.add(new Problem(circuitDocument.label(), 0, 0, "circuit", null, rate
-                        + ": fix the rate law, the parameter values or the coupling's range"));
+                problems.add(new Problem(circuitDocument.label(), 0, 0, "circuit", null, rate));
             }
             if (!problems.isEmpty()) {
                 return null;
@@ -282,8 +281,15 @@ final class ScenarioCompiler {
         return ok ? out : null;
     }
 
-    private GrowthSpec growth(TomlTable tissue, CircuitSetup circuit) {
+    private GrowthSpec growth(TomlTable tissue, CircuitSetup circuit, double step) {
         TomlTable division = toml.getTableOrEmpty("division");
+        double deathRate = values.number(division, "division", "death_rate");
+        if (deathRate * step > 1) {
+            values.fail(division, "division", "death_rate", String.format(Locale.ROOT, "is a rate per hour; times"
+                    + " run.step (%.6g h) it gives a cell's chance of dying in one step, here %.3g, more than 1; keep"
+                    + " death_rate below 1 / run.step = %.6g per hour", step, deathRate * step, 1 / step));
+            return null;
+        }
         CycleTimeDistribution.Kind kind = CycleTimeDistribution.Kind.valueOf(
                 values.text(division, "division", "cycle").toUpperCase(Locale.ROOT));
         double cv = values.number(division, "division", "cycle_cv");

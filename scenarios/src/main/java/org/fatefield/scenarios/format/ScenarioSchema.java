@@ -107,7 +107,8 @@ public final class ScenarioSchema {
                                     + " or none"),
                     Key.choice("axis", "random", List.of("random", "x", "y"),
                             "direction along which the daughters are placed: random, x (the gradient axis) or y"),
-                    Key.nonNegative("death_rate", "1/h", "0", "probability per hour that a cell dies and is removed"),
+                    Key.nonNegative("death_rate", "1/h", "0", "rate per hour at which a cell dies and is removed (a"
+                            + " hazard: its chance of dying in one step is death_rate * run.step, at most 1)"),
                     Key.of("dilution", KeyType.BOOLEAN, "", "false",
                             "true: concentrations dilute as cells grow (then degradation is the chemical loss only;"
                                     + " langevin and none only); false: degradation includes dilution")),

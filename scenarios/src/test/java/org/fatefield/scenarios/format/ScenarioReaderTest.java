@@ -186,4 +186,20 @@ class ScenarioReaderTest {
         List<Problem> finite = problems(demo().replace("repression_hill = 4", "repression_hill = 4\nbasal = -1.0"));
         assertTrue(!finite.isEmpty(), "a negative basal rate is refused too");
     }
+
+    /**
+     * A degradation of 200 per hour with steps of 0.01 h: rate x step = 2, where Euler-Maruyama
+     * on a linear decay is at its stability limit (common practice: keep it well below 1); and a
+     * death rate whose chance per step exceeds 1.
+     */
+    @Test
+    void stepsTooLongForTheCircuitAndImpossibleDeathRatesAreRefused() {
+        List<Problem> fast = problems(demo().replace("degradation = 1.0", "degradation = 200.0"));
+        assertEquals(1, fast.size(), fast.toString());
+        assertTrue(fast.get(0).message().contains("rate x step = 2.00") && fast.get(0).message().contains("0.00500 h"),
+                fast.get(0).message());
+        List<Problem> death = problems(demo().replace("[division]\n", "[division]\ndeath_rate = 1000.0\n"));
+        assertEquals(1, death.size(), death.toString());
+        assertTrue(death.get(0).message().contains("below 1 / run.step = 100"), death.get(0).message());
+    }
 }
