@@ -20,8 +20,12 @@ import org.fatefield.engine.field.MorphogenSpec;
  * @param cellSteps    expected cell-steps over the run
  * @param fieldUpdates expected grid-square updates of all fields over the run
  * @param packing      founders' total area over the domain's area (above 1 they overlap)
+ * @param reactionEvents with circuit.noise = "exact": reactions Gillespie's method will fire, at
+ *                     the initial state's total rate (molecules per hour per cell) over the
+ *                     cell-hours of the run; 0 for the other methods
  */
-public record WorkEstimate(double steps, double finalCells, double cellSteps, double fieldUpdates, double packing) {
+public record WorkEstimate(double steps, double finalCells, double cellSteps, double fieldUpdates, double packing,
+        double reactionEvents) {
 
     /** Most time steps of one run. */
     public static final double MAX_STEPS = 1e9;
@@ -33,6 +37,10 @@ public record WorkEstimate(double steps, double finalCells, double cellSteps, do
     public static final double LONG_FIELD_UPDATES = 1e13;
     /** Founders may cover at most this many times the domain's area. */
     public static final double MAX_PACKING = 4;
+    /** Reaction events above which an exact-method run needs confirming: about a day at 1.4e7 per second. */
+    public static final double LONG_EVENTS = 1e12;
+    /** Reaction events above which an exact-method run is refused: years. */
+    public static final double MAX_EVENTS = 1e15;
     /** Approximate heap per live cell (bytes), as the benchmark measures it. */
     private static final double BYTES_PER_CELL = 256;
 
@@ -58,7 +66,23 @@ public record WorkEstimate(double steps, double finalCells, double cellSteps, do
             fieldUpdates += squares * perStep * steps;
         }
         double founderArea = founders * Math.PI * growth.cellRadius() * growth.cellRadius();
-        return new WorkEstimate(steps, finalCells, cellSteps, fieldUpdates, founderArea / (spec.width() * spec.height()));
+        return new WorkEstimate(steps, finalCells, cellSteps, fieldUpdates, founderArea / (spec.width() * spec.height()),
+                events(spec, cellSteps * timing.step()));
+    }
+
+    /** Exact-method reaction events over {@code cellHours}, at the initial state's total rate. */
+    private static double events(TissueSpec spec, double cellHours) {
+        CircuitSetup circuit = spec.circuit();
+        if (circuit.noise() != NoiseMode.EXACT) {
+            return 0;
+        }
+        double[] propensity = new double[circuit.network().reactionCount()];
+        circuit.network().propensities(circuit.initialState(), spec.mapping().base(), propensity);
+        double total = 0;
+        for (double a : propensity) {
+            total += Math.max(0, a);
+        }
+        return circuit.systemSize() * total * cellHours;
     }
 
     /** What makes the run impossible here (each with the number and the limit); empty if nothing. */
@@ -72,6 +96,11 @@ public record WorkEstimate(double steps, double finalCells, double cellSteps, do
             out.add(String.format(Locale.ROOT, "about %.3g cells at the end (%s of heap) is more than %.0e;"
                     + " raise division.cycle_mean, add division.death_rate or shorten run.duration", finalCells,
                     bytes(finalCells * BYTES_PER_CELL), MAX_CELLS));
+        }
+        if (!(reactionEvents <= MAX_EVENTS)) {
+            out.add(String.format(Locale.ROOT, "about %.3g reactions for Gillespie's exact method (circuit.noise ="
+                    + " \"exact\"), more than %.0e; lower circuit.system_size or use circuit.noise = \"tau_leap\" or"
+                    + " \"langevin\"", reactionEvents, MAX_EVENTS));
         }
         if (!(packing <= MAX_PACKING)) {
             out.add(String.format(Locale.ROOT, "the founders cover %.3g times the tissue's area (at most %.0f);"
@@ -88,6 +117,10 @@ public record WorkEstimate(double steps, double finalCells, double cellSteps, do
             out.add(String.format(Locale.ROOT, "about %.3g cell-steps (hours to years at 1e7 per second)",
                     cellSteps));
         }
+        if (reactionEvents > LONG_EVENTS && reactionEvents <= MAX_EVENTS) {
+            out.add(String.format(Locale.ROOT, "about %.3g reactions for Gillespie's exact method (about %.0f h at"
+                    + " 1.4e7 per second)", reactionEvents, reactionEvents / 1.4e7 / 3600));
+        }
         if (!(fieldUpdates <= LONG_FIELD_UPDATES)) {
             out.add(String.format(Locale.ROOT, "about %.3g field grid updates (the explicit scheme sub-steps"
                     + " below its stability limit; morphogen.solver = \"adi\" takes one step per step)",
@@ -100,7 +133,9 @@ public record WorkEstimate(double steps, double finalCells, double cellSteps, do
     public String summary() {
         return String.format(Locale.ROOT, "%.3g steps, about %.3g cells at the end, %.3g cell-steps, %.3g field"
                 + " updates, about %s of heap", steps, finalCells, cellSteps, fieldUpdates,
-                bytes(finalCells * BYTES_PER_CELL));
+                bytes(finalCells * BYTES_PER_CELL))
+                + (reactionEvents > 0 ? String.format(Locale.ROOT, ", about %.3g exact reactions (%.2g h at 1.4e7"
+                        + " per second)", reactionEvents, reactionEvents / 1.4e7 / 3600) : "");
     }
 
     private static String bytes(double b) {

@@ -56,4 +56,24 @@ class WorkEstimateTest {
         assertTrue(fast.impossible().isEmpty());
         assertTrue(fast.lengthy().get(0).contains("field grid updates"), fast.lengthy().toString());
     }
+
+    /**
+     * Exact method: one reaction of rate k X at X = 1 with k = 2 and 100 molecules per unit is
+     * 200 events per cell-hour; 100 cells that never divide, for 20 h: 4e5 events.
+     */
+    @Test
+    void exactMethodEventsAreTheTotalRateTimesTheCellHours() {
+        CustomNetwork birth = CustomNetwork.of(List.of("X"), List.of("k"), new double[] {2},
+                List.of(new CustomNetwork.ReactionDefinition("make", new int[] {1}, "k * X")));
+        TissueSpec spec = TissueSpec.of(new CircuitSetup(birth, NoiseMode.EXACT, 100, new double[] {1.0}),
+                new ParameterMapping(birth.defaultParameters(), List.of()),
+                MorphogenSpec.of(0, 0, 10, 0, List.of()), new Domain.Rectangle(200, 100),
+                GrowthSpec.of(100, 2, 0, CycleTimeDistribution.none(), Partitioning.equal()),
+                new FateClassifier(List.of(new FateRule("high", new double[] {0.5}, new double[] {Double.NaN})), "low"),
+                new Timing(20, 0.01, 1));
+        WorkEstimate e = WorkEstimate.of(spec);
+        assertEquals(4e5, e.reactionEvents(), 1e-6);
+        assertTrue(e.impossible().isEmpty() && e.lengthy().isEmpty());
+        assertEquals(0.0, WorkEstimate.of(spec(100, 10, 0, 20, 3600)).reactionEvents(), 0.0);
+    }
 }
