@@ -3,6 +3,7 @@ package org.fatefield.scenarios.cli;
 import java.io.PrintWriter;
 import java.util.List;
 import java.util.concurrent.Callable;
+import org.fatefield.engine.metrics.FateReach;
 import org.fatefield.engine.tissue.WorkEstimate;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
@@ -42,6 +43,9 @@ final class ValidateCommand implements Callable<Integer> {
                 }
                 for (String m : estimate.lengthy()) {
                     out.println("  very long (run needs --yes): " + m);
+                }
+                for (String m : FateReach.unmet(scenario.tissue())) {
+                    out.println("  note: " + m);
                 }
             } catch (ScenarioException e) {
                 err.println(e.getMessage());

@@ -8,6 +8,7 @@ import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.division.CellSize;
 import org.fatefield.engine.division.PartitionMode;
 import org.fatefield.engine.division.SizeControl;
+import org.fatefield.engine.metrics.FateReach;
 import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.scenarios.builtin.BuiltinScenarios;
 import org.junit.jupiter.api.Test;
@@ -201,5 +202,23 @@ class ScenarioReaderTest {
         List<Problem> death = problems(demo().replace("[division]\n", "[division]\ndeath_rate = 1000.0\n"));
         assertEquals(1, death.size(), death.toString());
         assertTrue(death.get(0).message().contains("below 1 / run.step = 100"), death.get(0).message());
+    }
+
+    /**
+     * A photocyte rule asking for Lum at 6 can never be met by a steady state: production is at
+     * most basal + self-activation + the largest repressible rate (0.05 + 0.2 + 2.0 with the
+     * coupling's top repression of 2.0) over a degradation of 1, so Lum stays below 2.25. The
+     * demo's own rule (Lum at 0.6) is met.
+     */
+    @Test
+    void aFateNoSteadyStateCanMeetIsNoted() throws ScenarioException {
+        String text = demo().replace("above = { Lum = 0.6 }", "above = { Lum = 6.0 }");
+        assertTrue(!text.equals(demo()), "the demo's photocyte rule changed; update this test");
+        Scenario unmet = ScenarioReader.parse("test", "test.toml", text.getBytes(StandardCharsets.UTF_8));
+        List<String> notes = FateReach.unmet(unmet.tissue());
+        assertEquals(1, notes.size(), notes.toString());
+        assertTrue(notes.get(0).contains("'photocyte'"), notes.get(0));
+        Scenario demo = ScenarioReader.parse("demo", "demo", demo().getBytes(StandardCharsets.UTF_8));
+        assertEquals(List.of(), FateReach.unmet(demo.tissue()));
     }
 }
