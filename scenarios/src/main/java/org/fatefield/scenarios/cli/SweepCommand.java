@@ -9,6 +9,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.fatefield.engine.tissue.WorkEstimate;
 import org.fatefield.scenarios.format.Overrides;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
@@ -74,8 +75,18 @@ final class SweepCommand implements Runnable {
                     for (int k = 0; k < values.length; k++) {
                         variant = variant.with(sweep.parameters().get(k).key(), values[k]);
                     }
-                    ScenarioReader.parse("variant of " + sweep.scenarioLabel(), "variant", baseBytes, baseFolder,
-                            variant);
+                    Scenario planned = ScenarioReader.parse("variant of " + sweep.scenarioLabel(), "variant", baseBytes,
+                            baseFolder, variant);
+                    WorkEstimate work = WorkEstimate.of(planned.tissue());
+                    if (!work.impossible().isEmpty()) {
+                        err.println("Cannot plan the sweep: the point " + String.join(", ", variant.describe()) + " asks for "
+                                + work.summary() + ": " + String.join("; ", work.impossible()));
+                        return FatefieldCommand.INVALID_INPUT;
+                    }
+                    if (!work.lengthy().isEmpty()) {
+                        err.println("Note: the point " + String.join(", ", variant.describe()) + " is very long: "
+                                + String.join("; ", work.lengthy()));
+                    }
                 }
                 RunFolder.checkUsable(out, false, false);
                 RunFolder folder = RunFolder.open(out);

@@ -1,6 +1,8 @@
 package org.fatefield.scenarios.sweep;
 
 import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -11,6 +13,7 @@ import java.util.Map;
 import java.util.Set;
 import org.fatefield.circuits.random.RandomStreams;
 import org.fatefield.scenarios.builtin.BuiltinScenarios;
+import org.fatefield.scenarios.cli.FatefieldCommand;
 import org.fatefield.scenarios.cli.FatefieldCommandAccess;
 import org.fatefield.scenarios.format.Overrides;
 import org.fatefield.scenarios.format.ScenarioException;
@@ -239,5 +242,22 @@ class SweepTest {
         assertTrue(Files.exists(folder.resolve("circuits").resolve("switch.toml")), "the include is in the sweep folder");
         assertEquals(0, FatefieldCommandAccess.run("sweep", "run", folder.toString(), "--workers", "1"));
         assertEquals(0, FatefieldCommandAccess.run("sweep", "collect", folder.toString()), "every run finished");
+    }
+
+    /** A point asking for 1e11 time steps (run.duration 1e9 h in 0.01 h steps) stops the whole plan, naming it. */
+    @Test
+    void aSweepWithAnImpossiblePointIsNotPlanned() throws Exception {
+        sweepFile("grid", 1, 1);
+        Path file = tmp.resolve("long.toml");
+        Files.writeString(file, "[sweep]\nscenario = \"base.toml\"\ndesign = \"grid\"\nreplicates = 1\n\n"
+                + "[[parameter]]\nkey = \"run.duration\"\nvalues = [6.0, 1e9]\n");
+        Path folder = tmp.resolve("long-sweep");
+        StringWriter err = new StringWriter();
+        int code = FatefieldCommand.execute(new PrintWriter(new StringWriter()), new PrintWriter(err), "sweep", "plan",
+                file.toString(), "--out", folder.toString());
+        assertEquals(1, code, "exit code 1, bad input: " + err);
+        assertTrue(err.toString().contains("run.duration = 1") && err.toString().contains("time steps"),
+                err.toString());
+        assertTrue(Files.notExists(folder), "nothing is written");
     }
 }
