@@ -128,8 +128,10 @@ public final class ScenarioSchema {
                             "langevin: chemical Langevin equation (Euler-Maruyama); none: deterministic rate equations"
                                     + " (RK4); exact: Gillespie's direct method in molecule counts; tau-leap:"
                                     + " tau-leaping with Cao-Gillespie-Petzold step selection"),
-                    Key.positive("system_size", "molecules per unit concentration", "100",
-                            "converts concentrations to molecule numbers in a newborn cell; sets the noise level"),
+                    new Key("system_size", KeyType.NUMBER, "molecules per unit concentration", "100", 1.0, false, 1e9,
+                            List.of(), "converts concentrations to molecule numbers in a newborn cell; sets the noise"
+                                    + " level. Below 1 a unit of concentration is less than one molecule (counts round"
+                                    + " to nothing); above 1e9 intrinsic noise is negligible: use noise = \"none\""),
                     Key.of("initial", KeyType.NUMBERS, "", "0.3 for each species",
                             "concentrations of every founder cell, one per gene or species")),
                     "the circuit every cell carries"),

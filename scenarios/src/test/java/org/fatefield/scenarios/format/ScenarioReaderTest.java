@@ -221,4 +221,14 @@ class ScenarioReaderTest {
         Scenario demo = ScenarioReader.parse("demo", "demo", demo().getBytes(StandardCharsets.UTF_8));
         assertEquals(List.of(), FateReach.unmet(demo.tissue()));
     }
+
+    /** System sizes where counts round to nothing or noise is below rounding are refused, naming the key. */
+    @Test
+    void systemSizesOutsideOneToABillionAreRefused() {
+        for (String size : new String[] {"1e-300", "0.5", "1e12", "1e308"}) {
+            List<Problem> found = problems(demo().replace("system_size = 100.0", "system_size = " + size));
+            assertEquals(1, found.size(), size + ": " + found);
+            assertEquals("circuit.system_size", found.get(0).keyPath(), size);
+        }
+    }
 }
