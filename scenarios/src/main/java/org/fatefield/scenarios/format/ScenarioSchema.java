@@ -195,7 +195,9 @@ public final class ScenarioSchema {
             new Section("extrinsic", true, false, List.of(
                     Key.of("parameter", KeyType.TEXT, "", null,
                             "parameter that varies from cell to cell (a kinetic key for every gene, or <gene>.<key>)"),
-                    Key.nonNegative("cv", "", null, "coefficient of variation of the lognormal factor (mean 1)"),
+                    new Key("cv", KeyType.NUMBER, "", null, 0.0, false, 5.0, List.of(), "coefficient of variation of"
+                            + " the lognormal factor (mean 1); at 5 the factor's median is already 0.2 and one cell in"
+                            + " twenty gets more than 4 times the mean"),
                     new Key("inheritance", KeyType.NUMBER, "", "0.9", 0.0, false, 1.0, List.of(),
                             "mother-daughter correlation of the factor's log-score (sisters correlate as its square)")),
                     "cell-to-cell (extrinsic) variability of a circuit parameter, inherited at division; repeat for"

@@ -222,6 +222,15 @@ class ScenarioReaderTest {
         assertEquals(List.of(), FateReach.unmet(demo.tissue()));
     }
 
+    /** An extrinsic CV of 1e308 (a factor of 0 in almost every cell) is refused, naming the key. */
+    @Test
+    void anAbsurdExtrinsicSpreadIsRefused() {
+        String text = demo() + "\n[[extrinsic]]\nparameter = \"degradation\"\ncv = 1e308\n";
+        List<Problem> found = problems(text);
+        assertEquals(1, found.size(), found.toString());
+        assertTrue(found.get(0).keyPath().endsWith("cv"), found.toString());
+    }
+
     /** System sizes where counts round to nothing or noise is below rounding are refused, naming the key. */
     @Test
     void systemSizesOutsideOneToABillionAreRefused() {
