@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
+import java.util.function.Consumer;
 import org.fatefield.circuits.analysis.BasinMap;
 import org.fatefield.circuits.analysis.QuasiPotential;
 import org.fatefield.circuits.analysis.StationaryFokkerPlanck;
@@ -67,6 +68,15 @@ public final class CircuitAnalysis {
 
     /** Runs everything. */
     public AnalysisResult run() {
+        return run(stage -> { });
+    }
+
+    /**
+     * Runs everything, telling {@code progress} the name of each stage as it begins (steady
+     * states, continuation, ..., commitment), so a long analysis is not silent.
+     */
+    public AnalysisResult run(Consumer<String> progress) {
+        progress.accept("steady states");
         double[] p = parametersAt(plan.at());
         List<SteadyState> states = SteadyStateFinder.of(network).find(p, lower, upper);
         List<SteadyState> stable = states.stream().filter(SteadyState::isStable).toList();
@@ -77,21 +87,28 @@ public final class CircuitAnalysis {
             plan.switching().toIndex(stable.size());
             requireAffordable(p, stable.get(from).state(), sizes);
         }
+        progress.accept("continuation along " + plan.parameter());
         List<Branch> branches = diagram();
+        if (plan.hasSecond()) {
+            progress.accept("fold curves in the plane of " + plan.parameter() + " and " + plan.second());
+        }
         List<FoldCurve> folds = plan.hasSecond() ? foldCurves(branches) : List.of();
         List<Switching.FirstPassage> passages = new ArrayList<>();
         if (!plan.hasPlane()) {
             // One species: no state plane for basins, landscapes and commitment maps.
             if (stable.size() >= 2) {
+                progress.accept(switchingStage());
                 passages = passages(p, stable, sizes);
             }
             return new AnalysisResult(states, branches, folds, null, null, List.of(), new double[0], passages, sizes,
                     new double[0][0]);
         }
         double[] corner = {upper[plan.xSpecies()], upper[plan.ySpecies()]};
+        progress.accept("basins of attraction");
         BasinMap basins = BasinMap.compute(network, p, new double[network.speciesCount()], stable, plan.xSpecies(),
                 plan.ySpecies(), new double[2], corner, GRID);
         double[] start = stable.isEmpty() ? states.get(0).state() : stable.get(0).state();
+        progress.accept("landscape, and along " + plan.parameter() + " (" + LANDSCAPE_SLICES + " values)");
         QuasiPotential landscape = landscape(p, stable.isEmpty() ? List.of(start)
                 : stable.stream().map(SteadyState::state).toList(), corner, plan.seed());
         double[] values = new double[LANDSCAPE_SLICES];
@@ -109,7 +126,9 @@ public final class CircuitAnalysis {
             double[] a = stable.get(switching.fromIndex(stable.size())).state();
             double[] b = stable.get(switching.toIndex(stable.size())).state();
             double radius = switching.arrivalFraction() * distance(a, b);
+            progress.accept(switchingStage());
             passages = passages(p, stable, sizes);
+            progress.accept("commitment probabilities (" + COMMITMENT_GRID * COMMITMENT_GRID + " starts)");
             commitment = new double[COMMITMENT_GRID][COMMITMENT_GRID];
             for (int j = 0; j < COMMITMENT_GRID; j++) {
                 for (int i = 0; i < COMMITMENT_GRID; i++) {
@@ -123,6 +142,11 @@ public final class CircuitAnalysis {
         }
         return new AnalysisResult(states, branches, folds, basins, landscape, slices, values, passages, sizes,
                 commitment);
+    }
+
+    private String switchingStage() {
+        return "switching times (" + plan.switching().method().word() + ", " + plan.trajectories()
+                + " trajectories at 4 system sizes)";
     }
 
     /** Mean first-passage times between the plan's two stable states, at each system size. */

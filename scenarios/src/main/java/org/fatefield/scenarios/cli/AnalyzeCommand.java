@@ -138,7 +138,11 @@ final class AnalyzeCommand implements Callable<Integer> {
             CircuitAnalysis analysis = new CircuitAnalysis(network, loaded.tissue().mapping().base(), plan);
             AnalysisResult result;
             try {
-                result = analysis.run();
+                long start = System.nanoTime();
+                result = analysis.run(stage -> {
+                    err.printf(Locale.ROOT, "analyze: %s (%.1f s)%n", stage, (System.nanoTime() - start) / 1e9);
+                    err.flush();
+                });
             } catch (IllegalArgumentException e) {
                 err.println("Cannot analyse " + loaded.name() + ": " + e.getMessage());
                 return FatefieldCommand.INVALID_INPUT;
