@@ -36,6 +36,20 @@ public final class RobustnessAnalysis {
     /** Runs the analysis. */
     public static List<Sensitivity> run(TissueSpec spec, List<Perturbation> perturbations, double fraction,
             int replicates, long seed, int threads) {
+        return run(spec, perturbations, fraction, replicates, seed, threads, (done, total) -> { });
+    }
+
+    /** Told after each tissue of the analysis: how many are done of how many. */
+    public interface Progress {
+        /** {@code done} of {@code total} tissues have been run. */
+        void tissuesDone(int done, int total);
+    }
+
+    /** Runs the analysis, telling {@code progress} after each tissue. */
+    public static List<Sensitivity> run(TissueSpec spec, List<Perturbation> perturbations, double fraction,
+            int replicates, long seed, int threads, Progress progress) {
+        int total = 2 * replicates * perturbations.size();
+        int done = 0;
         List<String> fates = spec.fates().fateNames();
         List<Sensitivity> out = new ArrayList<>();
         for (Perturbation p : perturbations) {
@@ -43,7 +57,9 @@ public final class RobustnessAnalysis {
             double[][] down = new double[replicates][];
             for (int r = 0; r < replicates; r++) {
                 up[r] = metrics(p.apply(spec, 1 + fraction), seed + r, threads);
+                progress.tissuesDone(++done, total);
                 down[r] = metrics(p.apply(spec, 1 - fraction), seed + r, threads);
+                progress.tissuesDone(++done, total);
             }
             for (int m = 0; m < 3 * fates.size(); m++) {
                 String name = (m < fates.size() ? "boundary_" + fates.get(m) + "_um"

@@ -5,6 +5,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.apache.commons.csv.CSVPrinter;
 import org.fatefield.scenarios.format.Scenario;
@@ -77,8 +78,13 @@ final class RobustnessCommand implements Callable<Integer> {
             Path out = this.out.path();
             RunFolder.checkUsable(out, false, false);
             int workers = threads.resolveFor(loaded);
+            long start = System.nanoTime();
             List<RobustnessAnalysis.Sensitivity> result = RobustnessAnalysis.run(loaded.tissue(), perturbations,
-                    fraction, replicates, loaded.seed(), workers);
+                    fraction, replicates, loaded.seed(), workers, (done, total) -> {
+                        err.printf(Locale.ROOT, "robustness: %d/%d tissues done (%.1f s)%n", done, total,
+                                (System.nanoTime() - start) / 1e9);
+                        err.flush();
+                    });
             RunFolder folder = RunFolder.open(out);
             folder.writeText("robustness.csv", w -> {
                 CSVPrinter printer = RunTables.printer(w);
