@@ -59,13 +59,14 @@ final class RobustnessCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        SharedOptions.require(spec, fraction > 0 && fraction < 1, "--fraction", fraction,
+                "must be greater than 0 and less than 1 (0.1 perturbs each value by 10%)");
+        SharedOptions.require(spec, replicates >= 2, "--replicates", replicates,
+                "must be at least 2 (a spread needs two seed pairs)");
+        SharedOptions.require(spec, List.of("all", "tissue").contains(only), "--only", only, "must be all or tissue");
         PrintWriter err = spec.commandLine().getErr();
         Scenario loaded = ScenarioArgument.loadOrReport(scenario, spec.commandLine().getErr());
         if (loaded == null) {
-            return FatefieldCommand.INVALID_INPUT;
-        }
-        if (!(fraction > 0 && fraction < 1) || replicates < 2 || !List.of("all", "tissue").contains(only)) {
-            err.println("--fraction must be in (0, 1), --replicates at least 2, --only all or tissue");
             return FatefieldCommand.INVALID_INPUT;
         }
         List<Perturbation> perturbations = Perturbation.all(loaded.tissue());
