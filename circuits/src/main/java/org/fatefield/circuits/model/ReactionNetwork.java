@@ -81,6 +81,20 @@ public interface ReactionNetwork {
         return IntStream.range(0, names.size()).filter(i -> names.get(i).endsWith(suffix)).toArray();
     }
 
+    /**
+     * Sum of the reaction rates at {@code x} (negative rates counted as 0, as the exact methods
+     * clamp them): the event rate of Gillespie's method per unit system size.
+     */
+    default double totalRate(double[] x, double[] p) {
+        double[] propensity = new double[reactionCount()];
+        propensities(x, p, propensity);
+        double total = 0;
+        for (double a : propensity) {
+            total += Math.max(0, a);
+        }
+        return total;
+    }
+
     /** A name for reaction {@code r} that a modeler recognises, for messages ("reaction 3" unless a circuit knows better). */
     default String reactionName(int r) {
         return "reaction " + (r + 1);

@@ -175,12 +175,7 @@ public final class CircuitAnalysis {
         if (plan.switching().method() != SwitchingSettings.Method.EXACT) {
             return;
         }
-        double[] propensity = new double[network.reactionCount()];
-        network.propensities(from, p, propensity);
-        double total = 0;
-        for (double a : propensity) {
-            total += Math.max(0, a);
-        }
+        double total = network.totalRate(from, p);
         double events = 0;
         for (double omega : sizes) {
             events += omega * total * plan.switching().passageLimit() * plan.trajectories();

@@ -76,13 +76,8 @@ public record WorkEstimate(double steps, double finalCells, double cellSteps, do
         if (circuit.noise() != NoiseMode.EXACT) {
             return 0;
         }
-        double[] propensity = new double[circuit.network().reactionCount()];
-        circuit.network().propensities(circuit.initialState(), spec.mapping().base(), propensity);
-        double total = 0;
-        for (double a : propensity) {
-            total += Math.max(0, a);
-        }
-        return circuit.systemSize() * total * cellHours;
+        return circuit.systemSize() * circuit.network().totalRate(circuit.initialState(), spec.mapping().base())
+                * cellHours;
     }
 
     /** What makes the run impossible here (each with the number and the limit); empty if nothing. */

@@ -125,18 +125,8 @@ public final class RunTables {
      */
     public static void writeCells(Tissue tissue, Writer out) throws IOException {
         TissueSpec spec = tissue.spec();
-        List<String> species = spec.circuit().network().speciesNames();
-        double omega = spec.circuit().systemSize();
         List<String> header = new ArrayList<>(List.of("id", "parent_id", "generation", "x_um", "y_um"));
-        for (String s : species) {
-            header.add(s + "_molecules");
-        }
-        for (String s : species) {
-            header.add(s + "_concentration");
-        }
-        header.add("morphogen");
-        header.add("control_" + controlName(spec));
-        header.add("fate");
+        header.addAll(cellStateHeader(spec));
         List<String> fateNames = spec.fates().fateNames();
         CSVPrinter printer = printer(out);
         printer.printRecord(header);
@@ -147,20 +137,41 @@ public final class RunTables {
             values.add(Integer.toString(cell.generation()));
             values.add(number(cell.x()));
             values.add(number(cell.y()));
-            for (int i = 0; i < species.size(); i++) {
-                values.add(Long.toString(Math.round(cell.concentration(i) * omega)));
-            }
-            for (int i = 0; i < species.size(); i++) {
-                // Full precision: the shortest decimal that reads back as the same double.
-                values.add(Double.toString(cell.concentration(i)));
-            }
-            double signal = tissue.signalAt(cell);
-            values.add(number(signal));
-            values.add(number(spec.mapping().controlAt(signal)));
-            values.add(fateNames.get(cell.fate()));
+            addCellState(tissue, cell, fateNames.get(cell.fate()), values);
             printer.printRecord(values);
         }
         printer.flush();
+    }
+
+    /**
+     * Columns of a cell's state shared by {@code cells.csv} and the snapshots: each species'
+     * molecules, then concentrations, the morphogen at the cell, the control parameter, the fate.
+     */
+    static List<String> cellStateHeader(TissueSpec spec) {
+        List<String> species = spec.circuit().network().speciesNames();
+        List<String> header = new ArrayList<>();
+        species.forEach(s -> header.add(s + "_molecules"));
+        species.forEach(s -> header.add(s + "_concentration"));
+        header.addAll(List.of("morphogen", "control_" + controlName(spec), "fate"));
+        return header;
+    }
+
+    /** Appends the {@link #cellStateHeader} values of {@code cell}, with fate named {@code fate}. */
+    static void addCellState(Tissue tissue, Cell cell, String fate, List<String> values) {
+        TissueSpec spec = tissue.spec();
+        int species = spec.circuit().network().speciesCount();
+        double omega = spec.circuit().systemSize();
+        for (int i = 0; i < species; i++) {
+            values.add(Long.toString(Math.round(cell.concentration(i) * omega)));
+        }
+        for (int i = 0; i < species; i++) {
+            // Full precision: the shortest decimal that reads back as the same double.
+            values.add(Double.toString(cell.concentration(i)));
+        }
+        double signal = tissue.signalAt(cell);
+        values.add(number(signal));
+        values.add(number(spec.mapping().controlAt(signal)));
+        values.add(fate);
     }
 
     /** Name of the control parameter (the first coupled one), or "none". */

@@ -60,12 +60,8 @@ public final class Snapshots {
 
     private static void cells(Tissue tissue, Writer out) throws IOException {
         TissueSpec spec = tissue.spec();
-        List<String> species = spec.circuit().network().speciesNames();
-        double omega = spec.circuit().systemSize();
         List<String> header = new ArrayList<>(List.of("time_h", "id", "parent_id", "x_um", "y_um", "volume"));
-        species.forEach(s -> header.add(s + "_molecules"));
-        species.forEach(s -> header.add(s + "_concentration"));
-        header.addAll(List.of("morphogen", "control_" + RunTables.controlName(spec), "fate"));
+        header.addAll(RunTables.cellStateHeader(spec));
         List<String> fates = spec.fates().fateNames();
         String time = RunTables.number(tissue.time());
         CSVPrinter printer = RunTables.printer(out);
@@ -73,17 +69,8 @@ public final class Snapshots {
         for (Cell cell : tissue.cellsById()) {
             List<String> row = new ArrayList<>(List.of(time, Long.toString(cell.id()), Long.toString(cell.parentId()),
                     RunTables.number(cell.x()), RunTables.number(cell.y()), RunTables.number(cell.volume())));
-            for (int i = 0; i < species.size(); i++) {
-                row.add(Long.toString(Math.round(cell.concentration(i) * omega)));
-            }
-            for (int i = 0; i < species.size(); i++) {
-                row.add(Double.toString(cell.concentration(i)));
-            }
-            double signal = tissue.signalAt(cell);
-            row.add(RunTables.number(signal));
-            row.add(RunTables.number(spec.mapping().controlAt(signal)));
             // A cell born since the last classification takes its fate from its state now.
-            row.add(fates.get(spec.fates().classify(cell.liveState())));
+            RunTables.addCellState(tissue, cell, fates.get(spec.fates().classify(cell.liveState())), row);
             printer.printRecord(row);
         }
         printer.flush();
