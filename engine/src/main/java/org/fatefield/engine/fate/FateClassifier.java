@@ -13,6 +13,10 @@ public final class FateClassifier {
     private final List<FateRule> rules;
     private final List<String> names;
     private final int firstPassage;
+    private final int predictionCells;
+
+    /** Single cells simulated per position for the noise-based predicted profile, unless set. */
+    public static final int DEFAULT_PREDICTION_CELLS = 200;
 
     /**
      * @param rules       rules in priority order
@@ -20,11 +24,15 @@ public final class FateClassifier {
      * @throws IllegalArgumentException if two fates share a name
      */
     public FateClassifier(List<FateRule> rules, String defaultName) {
-        this(rules, defaultName, -1);
+        this(rules, defaultName, -1, DEFAULT_PREDICTION_CELLS);
     }
 
-    private FateClassifier(List<FateRule> rules, String defaultName, int firstPassage) {
+    private FateClassifier(List<FateRule> rules, String defaultName, int firstPassage, int predictionCells) {
+        if (predictionCells < 0) {
+            throw new IllegalArgumentException("prediction cells must be at least 0, got " + predictionCells);
+        }
         this.firstPassage = firstPassage;
+        this.predictionCells = predictionCells;
         this.rules = List.copyOf(rules);
         List<String> all = new ArrayList<>();
         for (FateRule rule : rules) {
@@ -50,7 +58,20 @@ public final class FateClassifier {
         if (index < 0) {
             throw new IllegalArgumentException("no fate is named '" + name + "'; fates are " + names);
         }
-        return new FateClassifier(rules, names.get(names.size() - 1), index);
+        return new FateClassifier(rules, names.get(names.size() - 1), index, predictionCells);
+    }
+
+    /**
+     * The same rules, with {@code cells} single cells simulated per position for the noise-based
+     * predicted fate profile ({@code SingleCellProfile}); 0 for none.
+     */
+    public FateClassifier withPredictionCells(int cells) {
+        return new FateClassifier(rules, names.get(names.size() - 1), firstPassage, cells);
+    }
+
+    /** Single cells simulated per position for the noise-based predicted profile (0: none). */
+    public int predictionCells() {
+        return predictionCells;
     }
 
     /** Index of the fate whose first entry is timed, or -1 if none is. */

@@ -1,5 +1,6 @@
 package org.fatefield.engine.field;
 
+import java.util.ArrayList;
 import java.util.List;
 
 /**
@@ -18,10 +19,13 @@ import java.util.List;
  * @param leftWall    condition at x = 0
  * @param exchange    secretion and uptake by cells
  * @param profile     a fixed profile along x that replaces the dynamics, or null
+ * @param amplitudeCv tissue-to-tissue variability of production: each tissue multiplies its
+ *                    sources and left-wall value by one lognormal factor of mean 1 and this
+ *                    coefficient of variation ({@link AmplitudeVariability}); 0 for none
  */
 public record MorphogenSpec(String name, double diffusion, double decay, double gridSpacing, double initial,
         List<SourceRegion> sources, Solver solver, WallCondition leftWall, CellExchange exchange,
-        PiecewiseLinear profile) {
+        PiecewiseLinear profile, double amplitudeCv) {
 
     /**
      * The left wall: no flux, a fixed concentration (a source held at a value), or an inflow.
@@ -89,37 +93,57 @@ public record MorphogenSpec(String name, double diffusion, double decay, double 
     public static MorphogenSpec of(double diffusion, double decay, double gridSpacing, double initial,
             List<SourceRegion> sources) {
         return new MorphogenSpec("morphogen", diffusion, decay, gridSpacing, initial, sources, Solver.EXPLICIT,
-                WallCondition.NO_FLUX, CellExchange.OFF, null);
+                WallCondition.NO_FLUX, CellExchange.OFF, null, 0.0);
     }
 
     /** With time stepping by {@code value}. */
     public MorphogenSpec withSolver(Solver value) {
         return new MorphogenSpec(name, diffusion, decay, gridSpacing, initial, sources, value, leftWall, exchange,
-                profile);
+                profile, amplitudeCv);
     }
 
     /** With the name {@code value}. */
     public MorphogenSpec withName(String value) {
         return new MorphogenSpec(value, diffusion, decay, gridSpacing, initial, sources, solver, leftWall, exchange,
-                profile);
+                profile, amplitudeCv);
     }
 
     /** With the condition {@code value} at x = 0. */
     public MorphogenSpec withLeftWall(WallCondition value) {
         return new MorphogenSpec(name, diffusion, decay, gridSpacing, initial, sources, solver, value, exchange,
-                profile);
+                profile, amplitudeCv);
     }
 
     /** With cells exchanging the field by {@code value}. */
     public MorphogenSpec withExchange(CellExchange value) {
         return new MorphogenSpec(name, diffusion, decay, gridSpacing, initial, sources, solver, leftWall, value,
-                profile);
+                profile, amplitudeCv);
     }
 
     /** With the grid spacing {@code value} (µm). */
     public MorphogenSpec withGridSpacing(double value) {
         return new MorphogenSpec(name, diffusion, decay, value, initial, sources, solver, leftWall, exchange,
-                profile);
+                profile, amplitudeCv);
+    }
+
+    /** With tissue-to-tissue production variability of coefficient of variation {@code value}. */
+    public MorphogenSpec withAmplitudeCv(double value) {
+        return new MorphogenSpec(name, diffusion, decay, gridSpacing, initial, sources, solver, leftWall, exchange,
+                profile, value);
+    }
+
+    /**
+     * With every source rate and the left-wall value (held concentration or inflow) multiplied
+     * by {@code factor}: the same field made {@code factor} times stronger. Secretion by cells and
+     * a fixed profile are left as they are.
+     */
+    public MorphogenSpec withProductionScaled(double factor) {
+        List<SourceRegion> scaled = new ArrayList<>();
+        for (SourceRegion s : sources) {
+            scaled.add(new SourceRegion(s.x0(), s.y0(), s.x1(), s.y1(), s.rate() * factor, s.amplitude()));
+        }
+        return new MorphogenSpec(name, diffusion, decay, gridSpacing, initial, scaled, solver,
+                new WallCondition(leftWall.kind(), leftWall.value() * factor), exchange, profile, amplitudeCv);
     }
 
     /** How the field is advanced in time. */
@@ -142,6 +166,14 @@ public record MorphogenSpec(String name, double diffusion, double decay, double 
             throw new IllegalArgumentException("grid spacing must be finite and greater than 0, got " + gridSpacing);
         }
         sources = List.copyOf(sources);
+        if (!(amplitudeCv >= 0) || amplitudeCv > AmplitudeVariability.MAX_CV) {
+            throw new IllegalArgumentException("amplitude cv must be from 0 to " + AmplitudeVariability.MAX_CV
+                    + ", got " + amplitudeCv);
+        }
+        if (amplitudeCv > 0 && profile != null) {
+            throw new IllegalArgumentException("field '" + name + "' has a fixed profile, which amplitude"
+                    + " variability does not change; remove amplitude_cv or the profile");
+        }
     }
 
     /** Decay length sqrt(D / k) (µm) of the steady gradient, infinite without decay. */

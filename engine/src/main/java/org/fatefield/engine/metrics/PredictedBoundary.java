@@ -24,11 +24,16 @@ import org.fatefield.engine.tissue.TissueSpec;
  * @param positions      positions along x (µm) where the local control parameter crosses them (NaN if it does not)
  * @param fateCalls      where a stable steady state enters each fate's rule ({@link FateCallBoundary})
  * @param fateCallPositions positions along x (µm) where the local control parameter crosses those (NaN if it does not)
+ * @param positionErrors         predicted positional error (µm) of each of {@code positions} from the
+ *                               control field's tissue-to-tissue amplitude variability ({@link PositionalError}),
+ *                               NaN without variability
+ * @param fateCallPositionErrors the same for each of {@code fateCallPositions}
  * @param undefined      why there is no prediction (no coupling, or no steady state to continue), or
  *                       empty when the lists above are the prediction
  */
 public record PredictedBoundary(double[] criticalValues, String[] kinds, double[] positions,
-        List<FateCallBoundary> fateCalls, double[] fateCallPositions, String undefined) {
+        List<FateCallBoundary> fateCalls, double[] fateCallPositions, double[] positionErrors,
+        double[] fateCallPositionErrors, String undefined) {
 
     /** Copies the arrays. */
     public PredictedBoundary {
@@ -37,11 +42,14 @@ public record PredictedBoundary(double[] criticalValues, String[] kinds, double[
         positions = positions.clone();
         fateCalls = List.copyOf(fateCalls);
         fateCallPositions = fateCallPositions.clone();
+        positionErrors = positionErrors.clone();
+        fateCallPositionErrors = fateCallPositionErrors.clone();
     }
 
     /** No prediction, for the reason given. */
     public static PredictedBoundary undefined(String reason) {
-        return new PredictedBoundary(new double[0], new String[0], new double[0], List.of(), new double[0], reason);
+        return new PredictedBoundary(new double[0], new String[0], new double[0], List.of(), new double[0], new double[0],
+                new double[0], reason);
     }
 
     /**
@@ -55,6 +63,7 @@ public record PredictedBoundary(double[] criticalValues, String[] kinds, double[
         }
         SignalCoupling coupling = spec.mapping().couplings().get(0);
         double[] control = new double[field.columns()];
+        double[] level = new double[field.columns()];
         double lo = Double.POSITIVE_INFINITY;
         double hi = Double.NEGATIVE_INFINITY;
         for (int i = 0; i < field.columns(); i++) {
@@ -62,7 +71,8 @@ public record PredictedBoundary(double[] criticalValues, String[] kinds, double[
             for (int j = 0; j < field.rows(); j++) {
                 sum += field.value(i, j);
             }
-            control[i] = spec.mapping().controlAt(sum / field.rows());
+            level[i] = sum / field.rows();
+            control[i] = spec.mapping().controlAt(level[i]);
             lo = Math.min(lo, control[i]);
             hi = Math.max(hi, control[i]);
         }
@@ -92,16 +102,21 @@ public record PredictedBoundary(double[] criticalValues, String[] kinds, double[
         critical.sort(Comparator.comparingDouble(SpecialPoint::parameter));
         double[] values = critical.stream().mapToDouble(SpecialPoint::parameter).toArray();
         String[] kinds = critical.stream().map(SpecialPoint::description).toArray(String[]::new);
+        double cv = field.spec().amplitudeCv();
         double[] positions = new double[values.length];
+        double[] errors = new double[values.length];
         for (int k = 0; k < values.length; k++) {
             positions[k] = position(control, values[k], field.spacing());
+            errors[k] = PositionalError.predicted(level, field.spacing(), positions[k], cv);
         }
         List<FateCallBoundary> calls = FateCallBoundary.of(branches, spec.fates());
         double[] callPositions = new double[calls.size()];
+        double[] callErrors = new double[calls.size()];
         for (int k = 0; k < calls.size(); k++) {
             callPositions[k] = position(control, calls.get(k).controlValue(), field.spacing());
+            callErrors[k] = PositionalError.predicted(level, field.spacing(), callPositions[k], cv);
         }
-        return new PredictedBoundary(values, kinds, positions, calls, callPositions, "");
+        return new PredictedBoundary(values, kinds, positions, calls, callPositions, errors, callErrors, "");
     }
 
     /** Where along x the column-averaged control first crosses {@code value} (NaN if it does not). */

@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.List;
 import org.fatefield.engine.coupling.ParameterMapping;
 import org.fatefield.engine.field.MorphogenSpec;
-import org.fatefield.engine.field.SourceRegion;
 import org.fatefield.engine.tissue.CircuitSetup;
 import org.fatefield.engine.tissue.TissueSpec;
 
@@ -45,7 +44,7 @@ public record Perturbation(String name, int parameter) {
                     spec.width(), spec.height());
         }
         return switch (name) {
-            case AMPLITUDE -> with(spec, spec.circuit(), spec.mapping(), scaled(spec.morphogen(), factor), spec.width(),
+            case AMPLITUDE -> with(spec, spec.circuit(), spec.mapping(), spec.morphogen().withProductionScaled(factor), spec.width(),
                     spec.height());
             case SIZE -> with(spec, spec.circuit(), spec.mapping(), spec.morphogen(), spec.width() * factor,
                     spec.height() * factor);
@@ -53,16 +52,6 @@ public record Perturbation(String name, int parameter) {
                     spec.circuit().systemSize() / factor, spec.circuit().initialState()), spec.mapping(),
                     spec.morphogen(), spec.width(), spec.height());
         };
-    }
-
-    private static MorphogenSpec scaled(MorphogenSpec m, double factor) {
-        List<SourceRegion> sources = new ArrayList<>();
-        for (SourceRegion s : m.sources()) {
-            sources.add(new SourceRegion(s.x0(), s.y0(), s.x1(), s.y1(), s.rate() * factor, s.amplitude()));
-        }
-        return new MorphogenSpec(m.name(), m.diffusion(), m.decay(), m.gridSpacing(), m.initial(), sources, m.solver(),
-                new MorphogenSpec.WallCondition(m.leftWall().kind(), m.leftWall().value() * factor), m.exchange(),
-                m.profile() == null ? null : m.profile());
     }
 
     private static TissueSpec with(TissueSpec spec, CircuitSetup circuit, ParameterMapping mapping,

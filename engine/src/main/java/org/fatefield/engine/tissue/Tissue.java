@@ -14,6 +14,7 @@ import org.fatefield.circuits.random.RandomStreams;
 import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.cell.CellRandom;
 import org.fatefield.engine.cell.CellPopulation;
+import org.fatefield.engine.field.AmplitudeVariability;
 import org.fatefield.engine.field.MorphogenField;
 import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.lineage.Ancestry;
@@ -64,6 +65,7 @@ public final class Tissue extends SimState {
     /** Which cells the last cell loop found ready to divide, by population index. */
     private boolean[] ready = new boolean[0];
     private long steps;
+    private double[] amplitudeFactors;
     private double blockSide;
     private LineageSink lineage = LineageSink.NONE;
     private Ancestry ancestry;
@@ -95,8 +97,12 @@ public final class Tissue extends SimState {
         population = new CellPopulation();
         List<MorphogenSpec> specs = spec.fields();
         fields = new MorphogenField[specs.size()];
+        amplitudeFactors = new double[fields.length];
         for (int f = 0; f < fields.length; f++) {
-            fields[f] = new MorphogenField(specs.get(f), spec.width(), spec.height(), spec.domain().periodicY());
+            amplitudeFactors[f] = AmplitudeVariability.factor(specs.get(f).amplitudeCv(),
+                    streams.stream(PLACEMENT_STREAM - 1 - f));
+            fields[f] = new MorphogenField(specs.get(f).withProductionScaled(amplitudeFactors[f]), spec.width(),
+                    spec.height(), spec.domain().periodicY());
         }
         field = fields[0];
         series = new TimeSeries(spec.fates().fateNames());
@@ -391,6 +397,11 @@ public final class Tissue extends SimState {
     /** The level of the control field (the one the first coupling reads) at {@code cell} now. */
     public double signalAt(Cell cell) {
         return controlField().sample(cell.x(), cell.y());
+    }
+
+    /** The factor this tissue drew for field {@code f}'s production (1 without amplitude variability). */
+    public double amplitudeFactor(int f) {
+        return amplitudeFactors[f];
     }
 
     /** The field the control parameter (the first coupling) reads. */

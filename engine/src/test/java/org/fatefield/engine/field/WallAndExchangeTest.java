@@ -24,7 +24,7 @@ class WallAndExchangeTest {
     private static final double L = 60;
 
     private static MorphogenField relaxed(WallCondition wall, Solver solver) {
-        MorphogenSpec spec = new MorphogenSpec("m", D, K, 0.5, 0, List.of(), solver, wall, CellExchange.OFF, null);
+        MorphogenSpec spec = new MorphogenSpec("m", D, K, 0.5, 0, List.of(), solver, wall, CellExchange.OFF, null, 0.0);
         MorphogenField field = new MorphogenField(spec, L, 0.5, false);
         double dt = solver == Solver.ADI ? 0.05 : 0.001;
         for (int i = 0; i < Math.round(40 / dt); i++) {
@@ -63,7 +63,7 @@ class WallAndExchangeTest {
         // Without diffusion, a square receiving amount q per hour (per unit area) and losing k c
         // settles at q / k exactly; uptake u adds to the loss: q / (k + u).
         MorphogenSpec spec = new MorphogenSpec("m", 0, K, 10, 0, List.of(), Solver.EXPLICIT, WallCondition.NO_FLUX,
-                new CellExchange(CellExchange.ALL, 50, 0.5), null);
+                new CellExchange(CellExchange.ALL, 50, 0.5), null, 0.0);
         MorphogenField field = new MorphogenField(spec, 30, 10, false);
         double[] amount = new double[3];
         double[] uptake = new double[3];

@@ -41,7 +41,7 @@ class RobustnessAnalysisTest {
                 MorphogenSpec.Solver.ADI,
                 new MorphogenSpec.WallCondition(MorphogenSpec.WallKind.FIXED_VALUE, 8.0),
                         MorphogenSpec.CellExchange.OFF,
-                null);
+                null, 0.0);
         TissueSpec spec = TissueSpec.of(new CircuitSetup(gene, NoiseMode.NONE, 1e4, new double[] {0.05}),
                 new ParameterMapping(gene.defaultParameters(),
                         List.of(SignalCoupling.of("s", new int[] {1}, new CouplingLaw.Linear(0.0, 2.0)))), field,

@@ -1,25 +1,16 @@
 package org.fatefield.scenarios.cli;
 
-import com.google.gson.JsonObject;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.List;
 import java.util.concurrent.Callable;
-import org.apache.commons.csv.CSVPrinter;
-import org.fatefield.engine.metrics.FateProfile;
-import org.fatefield.engine.metrics.SampleSummary;
-import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.scenarios.format.Scenario;
-import org.fatefield.scenarios.output.JsonFiles;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.output.RunFolderReader;
 import org.fatefield.scenarios.output.RunLayout;
-import org.fatefield.scenarios.output.RunMetrics;
+import org.fatefield.scenarios.output.ReplicateSet;
 import org.fatefield.scenarios.output.RunRequest;
-import org.fatefield.scenarios.output.RunTables;
 import org.fatefield.scenarios.output.ScenarioRunner;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -32,7 +23,9 @@ import picocli.CommandLine;
         description = {"Run a scenario on consecutive seeds and measure how precise its pattern is.",
             "Each replicate tissue gets its own run folder (seed-<N>); replicates.csv lists every run's boundary"
                     + " positions and widths, replicates.json their means and standard deviations (the positional"
-                    + " error). Runs already finished (with run.json) are kept, so an interrupted set resumes."})
+                    + " error) beside the predicted fate-call boundary and, with morphogen amplitude_cv, the"
+                    + " positional error the gradient predicts. Runs already finished (with run.json) are kept,"
+                    + " so an interrupted set resumes."})
 final class ReplicatesCommand implements Callable<Integer> {
 
     @Parameters(index = "0", paramLabel = "SCENARIO", description = "a scenario file, or a built-in name (demo)")
@@ -73,9 +66,7 @@ final class ReplicatesCommand implements Callable<Integer> {
         long first = seed.orElse(loaded.seed());
         int workers = threads.resolveFor(loaded);
         Path out = this.out.path();
-        List<String> fates = loaded.tissue().fates().fateNames();
-        double[][] boundaries = new double[fates.size()][runs];
-        double[][] widths = new double[fates.size()][runs];
+        ReplicateSet set = new ReplicateSet(loaded.tissue().fates().fateNames());
         try {
             Files.createDirectories(out);
             for (int r = 0; r < runs; r++) {
@@ -83,46 +74,13 @@ final class ReplicatesCommand implements Callable<Integer> {
                 Path folder = out.resolve(RunLayout.replicateFolder(s));
                 RunFolderReader done = RunFolderReader.of(folder);
                 if (!done.finished()) {
-                    Tissue tissue = ScenarioRunner.run(RunRequest.of(loaded, folder).withSeed(s).withThreads(workers)
-                            .withForce(true));
-                    measure(RunMetrics.of(tissue).profile(), r, boundaries, widths);
-                } else {
-                    measure(done.fateProfile(fates, loaded.tissue().width()), r, boundaries, widths);
+                    ScenarioRunner.run(RunRequest.of(loaded, folder).withSeed(s).withThreads(workers).withForce(true));
                 }
+                set.add(s, done.metrics());
                 err.printf("replicate %d/%d (seed %d) done%n", r + 1, runs, s);
                 err.flush();
             }
-            RunFolder set = RunFolder.open(out);
-            set.writeText(RunLayout.REPLICATES_TABLE, w -> {
-                CSVPrinter printer = RunTables.printer(w);
-                List<String> header = new ArrayList<>(List.of("seed"));
-                for (String f : fates) {
-                    header.add("boundary_" + f + "_um");
-                    header.add("width_" + f + "_um");
-                }
-                printer.printRecord(header);
-                for (int r = 0; r < runs; r++) {
-                    List<String> row = new ArrayList<>(List.of(Long.toString(first + r)));
-                    for (int f = 0; f < fates.size(); f++) {
-                        row.add(RunTables.number(boundaries[f][r]));
-                        row.add(RunTables.number(widths[f][r]));
-                    }
-                    printer.printRecord(row);
-                }
-                printer.flush();
-            });
-            JsonObject summary = new JsonObject();
-            summary.addProperty("runs", runs);
-            summary.addProperty("first_seed", first);
-            for (int f = 0; f < fates.size(); f++) {
-                SampleSummary stats = SampleSummary.of(boundaries[f]);
-                JsonObject fate = new JsonObject();
-                fate.addProperty("runs_with_boundary", stats.count());
-                fate.addProperty("mean_boundary_um", JsonFiles.finite(stats.mean()));
-                fate.addProperty("positional_error_sd_um", JsonFiles.finite(stats.sd()));
-                summary.add(fates.get(f), fate);
-            }
-            set.writeText(RunLayout.REPLICATES_SUMMARY, w -> w.write(JsonFiles.text(summary)));
+            set.write(RunFolder.open(out));
             PrintWriter o = spec.commandLine().getOut();
             o.printf("%d replicates of %s; results are in %s%n", runs, loaded.name(), out.toAbsolutePath().normalize());
             o.flush();
@@ -130,13 +88,6 @@ final class ReplicatesCommand implements Callable<Integer> {
         } catch (IOException e) {
             err.println("Cannot write results: " + e.getMessage());
             return FatefieldCommand.OUTPUT_ERROR;
-        }
-    }
-
-    private static void measure(FateProfile profile, int r, double[][] boundaries, double[][] widths) {
-        for (int f = 0; f < boundaries.length; f++) {
-            boundaries[f][r] = profile.boundary(f);
-            widths[f][r] = profile.width(f);
         }
     }
 

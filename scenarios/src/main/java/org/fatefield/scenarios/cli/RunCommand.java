@@ -15,6 +15,7 @@ import org.fatefield.scenarios.output.Progress;
 import org.fatefield.scenarios.output.RunLayout;
 import org.fatefield.scenarios.output.RunRequest;
 import org.fatefield.scenarios.output.ScenarioRunner;
+import org.fatefield.scenarios.output.SnapshotFormat;
 import org.fatefield.scenarios.output.Snapshots;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -59,6 +60,10 @@ final class RunCommand implements Callable<Integer> {
             + " volume, molecules, control value, fate) and of every field's grid into snapshots/ (long format; the"
             + " size is estimated first, and over 2 GB needs --yes)")
     private boolean snapshots;
+
+    @Option(names = "--vtk", description = "with --snapshots, also write each field at every record time as VTK"
+            + " image data (snapshots/<field>-<step>.vti, XML, readable by 3-D viewers)")
+    private boolean vtk;
 
     @Option(names = "--resume", description = "continue the run from the checkpoint in --out (same scenario and seed)")
     private boolean resume;
@@ -108,6 +113,10 @@ final class RunCommand implements Callable<Integer> {
                 }
                 frameSteps = Math.max(1, Math.round(framesEvery / loaded.tissue().timing().step()));
             }
+            if (vtk && !snapshots) {
+                err.println("--vtk adds VTK files to the snapshots; give --snapshots as well");
+                return FatefieldCommand.INVALID_INPUT;
+            }
             if (snapshots) {
                 double bytes = Snapshots.estimatedBytes(loaded.tissue(), WorkEstimate.of(loaded.tissue()).finalCells());
                 if (bytes > SNAPSHOT_CONFIRM_BYTES && !confirm.given()) {
@@ -124,7 +133,8 @@ final class RunCommand implements Callable<Integer> {
             Tissue tissue = ScenarioRunner.run(RunRequest.of(loaded, folder).withSeed(runSeed)
                     .withThreads(threads.resolveFor(loaded)).withForce(force.given()).withProgress(progress)
                     .withCheckpointSteps(every).withResume(resume).withFrameSteps(frameSteps)
-                    .withSnapshots(snapshots));
+                    .withSnapshots(!snapshots ? SnapshotFormat.NONE : vtk ? SnapshotFormat.TABLES_AND_VTK
+                            : SnapshotFormat.TABLES));
             if (!quiet) {
                 TimeSeries.Row last = tissue.series().last();
                 List<String> fates = tissue.series().fateNames();

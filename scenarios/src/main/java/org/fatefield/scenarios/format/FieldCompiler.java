@@ -105,6 +105,11 @@ final class FieldCompiler {
         if (table.contains("profile") && profile == null) {
             return null;
         }
+        if (profile != null && values.number(table, section, "amplitude_cv") > 0) {
+            values.problem(table, "amplitude_cv", path + ".amplitude_cv", null,
+                    "cannot vary a fixed profile (it is measured data); remove amplitude_cv or profile");
+            return null;
+        }
         String name = table.contains("name") ? table.getString("name") : section.equals("morphogen") ? "morphogen" : null;
         if (name == null) {
             values.problem(table, "diffusion", path + ".name", null, "every [[field]] needs a name");
@@ -115,7 +120,8 @@ final class FieldCompiler {
                 MorphogenSpec.Solver.valueOf(values.text(table, section, "solver").toUpperCase(Locale.ROOT)),
                 new MorphogenSpec.WallCondition(kind, values.number(table, section, "left_value")),
                 new MorphogenSpec.CellExchange(secreting, values.number(table, section, "secretion_rate"),
-                        values.number(table, section, "uptake")), profile);
+                        values.number(table, section, "uptake")), profile,
+                values.number(table, section, "amplitude_cv"));
     }
 
     /** A measured profile: CSV with columns x_um and value, x increasing; null after reporting. */

@@ -240,7 +240,8 @@ final class ScenarioCompiler {
         if (!problems.isEmpty()) {
             return null;
         }
-        FateClassifier classifier = new FateClassifier(list, defaultName);
+        FateClassifier classifier = new FateClassifier(list, defaultName)
+                .withPredictionCells((int) values.number(table, "fates", "predicted_cells"));
         String timed = values.text(table, "fates", "first_passage");
         if (timed.isEmpty()) {
             return classifier;

@@ -52,7 +52,12 @@ public final class ScenarioSchema {
             Key.nonNegative("uptake", "1/h", "0", "first-order uptake by cells, over the area each cell covers"),
             Key.of("profile", KeyType.TEXT, "", "none",
                     "a CSV file (columns x_um, value) in this scenario's folder: a measured profile along x, fixed in"
-                            + " time, that replaces the dynamics"));
+                            + " time, that replaces the dynamics"),
+            new Key("amplitude_cv", KeyType.NUMBER, "", "0", 0.0, false, 5.0, List.of(),
+                    "tissue-to-tissue (embryo-to-embryo) variability of production: each tissue multiplies its"
+                            + " sources and left_value by one lognormal factor of mean 1 and this coefficient of"
+                            + " variation, drawn from its seed (replicates differ); sets the boundary's positional"
+                            + " error. Not with a fixed profile"));
 
     private static final List<Section> SECTIONS = List.of(
             new Section("scenario", false, false, List.of(
@@ -85,7 +90,9 @@ public final class ScenarioSchema {
                     Key.choice("cycle", "gamma", List.of("fixed", "gamma", "lognormal", "none"),
                             "cycle-time distribution; none: cells never divide (cycle_mean and cycle_cv are ignored)"),
                     Key.positive("cycle_mean", "h", "12", "mean time from birth to division"),
-                    Key.nonNegative("cycle_cv", "", "0.15", "coefficient of variation of the cycle time (ignored when fixed)"),
+                    new Key("cycle_cv", KeyType.NUMBER, "", "0.15", 0.0, false, 2.0, List.of(),
+                            "coefficient of variation of the cycle time (ignored when fixed); at most 2: beyond,"
+                                    + " most cycles are a tiny fraction of the mean while a few last many means"),
                     Key.choice("partition", "binomial", List.of("binomial", "equal", "asymmetric", "volume"),
                             "how molecules are shared at division: binomial (each molecule to either daughter with"
                                     + " probability 1/2), equal (both daughters keep the mother's concentrations: no"
@@ -206,7 +213,10 @@ public final class ScenarioSchema {
                     Key.of("default", KeyType.TEXT, "", "\"progenitor\"", "fate of a cell that matches no rule"),
                     Key.of("first_passage", KeyType.TEXT, "", "\"\"", "a fate whose first entry by each cell, in"
                             + " its own life, is timed at every step (first_entry_time_h in lineage.csv, first_passage"
-                            + " in metrics.json); empty for none")),
+                            + " in metrics.json); empty for none"),
+                    Key.integer("predicted_cells", "200", 0, 100000, "single cells simulated at each position along"
+                            + " the gradient for the noise-based predicted fate profile (predicted_fraction_<fate> in"
+                            + " profile.csv, predicted_profile in metrics.json); 0 for none")),
                     "how a cell's state is read as a fate"),
             new Section("fates.rule", true, true, List.of(
                     Key.of("name", KeyType.TEXT, "", null, "fate name used in outputs"),

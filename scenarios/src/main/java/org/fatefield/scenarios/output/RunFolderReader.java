@@ -18,8 +18,11 @@ import org.fatefield.engine.metrics.FateProfile;
  */
 public final class RunFolderReader {
 
-    /** A run's fate profile along the gradient: bin centres and {@code fractions[f][b]} per fate. */
-    public record Profile(double[] x, double[][] fractions) {
+    /**
+     * A run's fate profile along the gradient: bin centres, {@code fractions[f][b]} per fate, and
+     * the noise-based prediction {@code predicted[f][b]} (null when the run has none).
+     */
+    public record Profile(double[] x, double[][] fractions, double[][] predicted) {
     }
 
     private final Path run;
@@ -77,13 +80,18 @@ public final class RunFolderReader {
         List<CSVRecord> records = RunTables.records(run.resolve(RunLayout.PROFILE));
         double[] x = new double[records.size()];
         double[][] fractions = new double[fates.size()][records.size()];
+        boolean hasPrediction = !records.isEmpty() && records.get(0).isMapped("predicted_fraction_" + fates.get(0));
+        double[][] predicted = hasPrediction ? new double[fates.size()][records.size()] : null;
         for (int b = 0; b < records.size(); b++) {
             x[b] = parse(records.get(b), "x_um");
             for (int f = 0; f < fates.size(); f++) {
                 fractions[f][b] = parse(records.get(b), "fraction_" + fates.get(f));
+                if (hasPrediction) {
+                    predicted[f][b] = parse(records.get(b), "predicted_fraction_" + fates.get(f));
+                }
             }
         }
-        return new Profile(x, fractions);
+        return new Profile(x, fractions, predicted);
     }
 
     /**

@@ -4,6 +4,8 @@ import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
 import java.io.IOException;
 import java.util.ArrayList;
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.apache.commons.csv.CSVPrinter;
@@ -11,6 +13,7 @@ import org.fatefield.engine.metrics.FateProfile;
 import org.fatefield.engine.metrics.LineageStatistics;
 import org.fatefield.engine.metrics.MixedZone;
 import org.fatefield.engine.metrics.PredictedBoundary;
+import org.fatefield.engine.metrics.SingleCellProfile;
 import org.fatefield.engine.tissue.Tissue;
 
 /**
@@ -24,23 +27,41 @@ import org.fatefield.engine.tissue.Tissue;
  * @param predicted boundary predicted from the single-cell analysis
  * @param mixed     committed-against-default boundary and the zone where committed fates mix
  * @param firstPassage time to first enter the timed fate, or null if no fate is timed
+ * @param single       the noise-based fate profile predicted from single cells
+ * @param amplitudes   the production factor this tissue drew for each field with amplitude
+ *                     variability, by field name (empty without)
  */
 public record RunMetrics(FateProfile profile, LineageStatistics lineage, PredictedBoundary predicted,
-        MixedZone mixed, FirstPassageSummary firstPassage) {
+        MixedZone mixed, SingleCellProfile single, FirstPassageSummary firstPassage,
+        Map<String, double[]> amplitudes) {
+
+    /** Copies the factors. */
+    public RunMetrics {
+        amplitudes = Collections.unmodifiableMap(new LinkedHashMap<>(amplitudes));
+    }
 
 
     /** Computes the metrics of {@code tissue} at its end. */
     public static RunMetrics of(Tissue tissue) {
         int fates = tissue.spec().fates().fateCount();
         FateProfile profile = FateProfile.of(tissue);
+        Map<String, double[]> amplitudes = new LinkedHashMap<>();
+        for (int f = 0; f < tissue.fields().size(); f++) {
+            double cv = tissue.fields().get(f).spec().amplitudeCv();
+            if (cv > 0) {
+                amplitudes.put(tissue.fields().get(f).spec().name(), new double[] {cv, tissue.amplitudeFactor(f)});
+            }
+        }
         return new RunMetrics(profile, LineageStatistics.of(tissue.cells(), tissue.ancestry(), fates),
                 PredictedBoundary.of(tissue.spec(), tissue.controlField()),
-                MixedZone.of(tissue.cells(), fates, profile, tissue.spec().width()), null);
+                MixedZone.of(tissue.cells(), fates, profile, tissue.spec().width()),
+                SingleCellProfile.of(tissue.spec(), tissue.fields(), profile.centres(), tissue.seed(), tissue.threads()),
+                null, amplitudes);
     }
 
     /** With the first-passage summary {@code value}. */
     public RunMetrics withFirstPassage(FirstPassageSummary value) {
-        return new RunMetrics(profile, lineage, predicted, mixed, value);
+        return new RunMetrics(profile, lineage, predicted, mixed, single, value, amplitudes);
     }
 
     /** Writes the three tables and the JSON summary into {@code folder}; returns their names. */
@@ -49,12 +70,18 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
             CSVPrinter printer = RunTables.printer(w);
             List<String> header = new ArrayList<>(List.of("x_um", "cells"));
             fateNames.forEach(f -> header.add("fraction_" + f));
+            if (single.defined()) {
+                fateNames.forEach(f -> header.add("predicted_fraction_" + f));
+            }
             printer.printRecord(header);
             for (int b = 0; b < profile.centres().length; b++) {
                 List<String> row = new ArrayList<>(List.of(RunTables.number(profile.centres()[b]),
                         Integer.toString(profile.counts()[b])));
                 for (int f = 0; f < fateNames.size(); f++) {
                     row.add(RunTables.number(profile.fractions()[f][b]));
+                }
+                for (int f = 0; single.defined() && f < fateNames.size(); f++) {
+                    row.add(RunTables.number(single.fractions()[f][b]));
                 }
                 printer.printRecord(row);
             }
@@ -84,6 +111,26 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
         });
         folder.writeText(RunLayout.METRICS, w -> w.write(json(fateNames, seed, partition)));
         return List.of(RunLayout.PROFILE, RunLayout.RELATEDNESS, RunLayout.CLONES, RunLayout.METRICS);
+    }
+
+    /** The noise-based predicted profile's summary: its boundaries and its distance to the simulated profile. */
+    private JsonObject singleCellJson(List<String> fateNames) {
+        JsonObject out = new JsonObject();
+        out.addProperty("undefined", single.defined() ? (String) null : single.undefined());
+        if (!single.defined()) {
+            return out;
+        }
+        out.addProperty("cells_per_position", single.cellsPerPosition());
+        out.addProperty("committed_boundary_um", JsonFiles.finite(single.committedBoundary()));
+        JsonObject fates = new JsonObject();
+        for (int f = 0; f < fateNames.size(); f++) {
+            JsonObject one = new JsonObject();
+            one.addProperty("position_um", JsonFiles.finite(single.boundary(f)));
+            one.addProperty("rms_difference_to_simulated", JsonFiles.finite(single.rmsDifference(profile, f)));
+            fates.add(fateNames.get(f), one);
+        }
+        out.add("fates", fates);
+        return out;
     }
 
     /** The summary as JSON. */
@@ -122,6 +169,7 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
             p.addProperty("critical_control_value", this.predicted.criticalValues()[k]);
             p.addProperty("kind", this.predicted.kinds()[k]);
             p.addProperty("position_um", JsonFiles.finite(this.predicted.positions()[k]));
+            p.addProperty("predicted_positional_error_um", JsonFiles.finite(this.predicted.positionErrors()[k]));
             predicted.add(p);
         }
         root.add("predicted_boundaries", predicted);
@@ -131,9 +179,12 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
             p.addProperty("fate", fateNames.get(this.predicted.fateCalls().get(k).fate()));
             p.addProperty("control_value", this.predicted.fateCalls().get(k).controlValue());
             p.addProperty("position_um", JsonFiles.finite(this.predicted.fateCallPositions()[k]));
+            p.addProperty("predicted_positional_error_um",
+                    JsonFiles.finite(this.predicted.fateCallPositionErrors()[k]));
             fateCalls.add(p);
         }
         root.add("predicted_fate_call_boundaries", fateCalls);
+        root.add("predicted_profile", singleCellJson(fateNames));
         root.addProperty("predicted_boundaries_undefined", this.predicted.undefined().isEmpty() ? null
                 : this.predicted.undefined());
         root.addProperty("sister_fate_agreement", JsonFiles.finite(lineage.sisterAgreement()));
@@ -143,6 +194,14 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
         if (firstPassage != null) {
             root.add("first_passage", firstPassage.json());
         }
+        JsonObject amplitude = new JsonObject();
+        amplitudes.forEach((field, cvAndFactor) -> {
+            JsonObject a = new JsonObject();
+            a.addProperty("amplitude_cv", cvAndFactor[0]);
+            a.addProperty("factor", cvAndFactor[1]);
+            amplitude.add(field, a);
+        });
+        root.add("tissue_amplitude", amplitude);
         return JsonFiles.text(root);
     }
 

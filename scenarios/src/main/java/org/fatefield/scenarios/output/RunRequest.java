@@ -18,16 +18,17 @@ import org.fatefield.scenarios.format.Scenario;
  * @param checkpointSteps steps between checkpoints, 0 for none
  * @param resume          continue from the folder's checkpoint
  * @param frameSteps      steps between PNG frames, 0 for none
- * @param snapshots       write the cell and field tables at every record time ({@code snapshots/})
+ * @param snapshots       what to write at every record time into {@code snapshots/}
  */
 public record RunRequest(Scenario scenario, Path out, long seed, int threads, boolean force, Progress progress,
-        long checkpointSteps, boolean resume, long frameSteps, boolean snapshots) {
+        long checkpointSteps, boolean resume, long frameSteps, SnapshotFormat snapshots) {
 
     /** Validates. */
     public RunRequest {
         Objects.requireNonNull(scenario, "scenario");
         Objects.requireNonNull(out, "out");
         Objects.requireNonNull(progress, "progress");
+        Objects.requireNonNull(snapshots, "snapshots");
         if (seed < 0) {
             throw new IllegalArgumentException("seed must be 0 or greater, got " + seed);
         }
@@ -42,7 +43,7 @@ public record RunRequest(Scenario scenario, Path out, long seed, int threads, bo
 
     /** A run of {@code scenario} into {@code out} with its own seed, one thread, no extras, silent. */
     public static RunRequest of(Scenario scenario, Path out) {
-        return new RunRequest(scenario, out, scenario.seed(), 1, false, Progress.silent(), 0, false, 0, false);
+        return new RunRequest(scenario, out, scenario.seed(), 1, false, Progress.silent(), 0, false, 0, SnapshotFormat.NONE);
     }
 
     /** With master seed {@code value}. */
@@ -86,8 +87,8 @@ public record RunRequest(Scenario scenario, Path out, long seed, int threads, bo
                 force, progress, checkpointSteps, resume, steps, snapshots);
     }
 
-    /** Writing (or not) the cell and field tables at every record time. */
-    public RunRequest withSnapshots(boolean value) {
+    /** Writing {@code value} at every record time. */
+    public RunRequest withSnapshots(SnapshotFormat value) {
         return new RunRequest(scenario, out, seed, threads,
                 force, progress, checkpointSteps, resume, frameSteps, value);
     }

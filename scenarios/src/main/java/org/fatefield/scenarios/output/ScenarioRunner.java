@@ -77,8 +77,8 @@ public final class ScenarioRunner {
             }
             tissue.addObserver(TissueObserver.every(request.frameSteps(), unchecked(frames::write)));
         }
-        if (request.snapshots()) {
-            Snapshots snapshots = new Snapshots(out);
+        if (request.snapshots().any()) {
+            Snapshots snapshots = new Snapshots(out, request.snapshots() == SnapshotFormat.TABLES_AND_VTK);
             if (saved == null) {
                 snapshots.write(tissue);
             }
@@ -110,7 +110,7 @@ public final class ScenarioRunner {
         if (request.frameSteps() > 0) {
             files.addAll(frames.finish(folder));
         }
-        if (request.snapshots()) {
+        if (request.snapshots().any()) {
             files.add(RunLayout.SNAPSHOTS + "/");
         }
         files.add(RunLayout.LINEAGE);

@@ -21,7 +21,8 @@ import org.fatefield.engine.tissue.TissueSpec;
  * {@code snapshots/fields-<step>.csv} (one row per grid square of each field). Every file has
  * the same columns and a {@code time_h} column, so the files of a run concatenate into one long
  * table. Each file is written whole under a temporary name and then renamed, so a killed run
- * leaves only complete files, and a resumed run writes the later ones again, identically.
+ * leaves only complete files, and a resumed run writes the later ones again, identically. On
+ * request each field is also written as VTK image data ({@link VtkImageData}).
  */
 public final class Snapshots {
 
@@ -30,9 +31,12 @@ public final class Snapshots {
     private static final int FIELD_ROW_BYTES = 45;
 
     private final Path folder;
+    private final boolean vtk;
 
-    Snapshots(Path runFolder) {
+    /** Snapshots into {@code runFolder/snapshots}, with VTK image data of each field if {@code vtk}. */
+    Snapshots(Path runFolder, boolean vtk) {
         this.folder = runFolder.resolve(RunLayout.SNAPSHOTS);
+        this.vtk = vtk;
     }
 
     /**
@@ -56,6 +60,11 @@ public final class Snapshots {
         String step = String.format(Locale.ROOT, "%08d", tissue.steps());
         atomically(folder.resolve("cells-" + step + ".csv"), w -> cells(tissue, w));
         atomically(folder.resolve("fields-" + step + ".csv"), w -> fields(tissue, w));
+        for (int f = 0; vtk && f < tissue.fields().size(); f++) {
+            MorphogenField field = tissue.fields().get(f);
+            atomically(folder.resolve(VtkImageData.fileName(f, field.spec().name(), step)),
+                    w -> VtkImageData.write(field, tissue.time(), w));
+        }
     }
 
     private static void cells(Tissue tissue, Writer out) throws IOException {

@@ -90,9 +90,23 @@ public final class ReplicateReport {
         for (String fate : fates) {
             JsonObject f = summary.getAsJsonObject(fate);
             error.add(List.of(fate, f.get("runs_with_boundary").getAsString(), number(f.get("mean_boundary_um")),
-                    number(f.get("positional_error_sd_um"))));
+                    number(f.get("positional_error_sd_um")), number(f.get("mean_predicted_fate_call_um")),
+                    number(f.get("predicted_positional_error_um"))));
         }
-        page.table(List.of("fate", "tissues with a boundary", "mean boundary (µm)", "SD across tissues (µm)"), error);
+        JsonObject committed = summary.getAsJsonObject("committed_boundary");
+        if (committed != null) {
+            error.add(List.of("any committed fate against " + fates.get(fates.size() - 1),
+                    committed.get("runs_with_boundary").getAsString(), number(committed.get("mean_boundary_um")),
+                    number(committed.get("positional_error_sd_um")), number(committed.get("mean_predicted_fate_call_um")),
+                    number(committed.get("predicted_positional_error_um"))));
+            page.paragraph("Committed fates against the default, predicted from single cells (mean over tissues): "
+                    + number(committed.get("mean_predicted_from_single_cells_um")) + " µm.");
+        }
+        page.table(List.of("fate", "tissues with a boundary", "mean boundary (µm)", "SD across tissues (µm)",
+                "predicted fate-call boundary (µm)", "positional error predicted from the gradient (µm)"), error);
+        page.paragraph("The predicted positional error is σ_x = σ_c / |dc/dx| at the fate-call boundary (Gregor et al."
+                + " 2007), from the morphogen's tissue-to-tissue amplitude_cv; it is not defined (–) without amplitude"
+                + " variability. Expression noise adds to the simulated SD.");
         page.heading("Tissues");
         List<String> header = new ArrayList<>(rows.get(0).getParser().getHeaderNames());
         List<List<String>> table = new ArrayList<>();

@@ -111,14 +111,17 @@ public final class RunReport {
         if (fateCalls != null && fateCalls.isJsonArray()) {
             for (JsonElement e : fateCalls.getAsJsonArray()) {
                 JsonObject p = e.getAsJsonObject();
-                calls.add(List.of(p.get("fate").getAsString(), text(p.get("control_value")), text(p.get("position_um"))));
+                calls.add(List.of(p.get("fate").getAsString(), text(p.get("control_value")), text(p.get("position_um")),
+                        text(p.get("predicted_positional_error_um"))));
             }
         }
         if (!calls.isEmpty()) {
             page.paragraph("Where a stable steady state first satisfies each fate's rule (the fate-call boundary;"
                     + " it can lie inside the bistable range when a rule asks for more than being on a branch):");
-            page.table(List.of("fate", "control value", "predicted position (µm)"), calls);
+            page.table(List.of("fate", "control value", "predicted position (µm)",
+                    "positional error from the gradient's amplitude variability (µm)"), calls);
         }
+        singleCellPrediction(page, metrics, fates);
         JsonElement undefined = metrics.get("predicted_boundaries_undefined");
         if (undefined != null && !undefined.isJsonNull()) {
             page.paragraph("No boundary is predicted: " + undefined.getAsString() + ".");
@@ -146,13 +149,40 @@ public final class RunReport {
         return page.finish();
     }
 
+    /** The noise-based prediction from single cells, beside the simulated boundaries. */
+    private static void singleCellPrediction(HtmlPage page, JsonObject metrics, List<String> fates) {
+        JsonElement element = metrics.get("predicted_profile");
+        if (element == null || !element.isJsonObject()) {
+            return;
+        }
+        JsonObject single = element.getAsJsonObject();
+        JsonElement undefined = single.get("undefined");
+        if (undefined != null && !undefined.isJsonNull()) {
+            page.paragraph("No fate profile is predicted from single cells: " + undefined.getAsString() + ".");
+            return;
+        }
+        page.paragraph("Predicted from single cells (" + single.get("cells_per_position").getAsInt() + " noisy cells"
+                + " per position, held at the local parameters for the whole run, without division; dashed in the"
+                + " profile figure): committed fates against the default at " + text(single.get("committed_boundary_um"))
+                + " µm.");
+        List<List<String>> rows = new ArrayList<>();
+        JsonObject byFate = single.getAsJsonObject("fates");
+        for (String fate : fates) {
+            JsonObject f = byFate.getAsJsonObject(fate);
+            rows.add(List.of(fate, text(f.get("position_um")), text(f.get("rms_difference_to_simulated"))));
+        }
+        page.table(List.of("fate", "predicted boundary (µm, fraction crosses 1/2 once)",
+                "RMS difference to the simulated fraction"), rows);
+    }
+
     private static byte[] profile(RunFolderReader folder, List<String> fates, JsonObject metrics) throws IOException {
         RunFolderReader.Profile profile = folder.profile(fates);
         JsonElement sim = metrics.getAsJsonObject("boundaries").getAsJsonObject(fates.get(fates.size() - 1))
                 .get("position_um");
         double simulated = sim == null || sim.isJsonNull() ? Double.NaN : sim.getAsDouble();
         return png(ProfileChart.create(fates, profile.x(), profile.fractions(), simulated,
-                RunFolderReader.predictedBoundaries(metrics), RunFolderReader.predictedFateCalls(metrics)));
+                RunFolderReader.predictedBoundaries(metrics), RunFolderReader.predictedFateCalls(metrics),
+                profile.predicted()));
     }
 
     /**

@@ -6,6 +6,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Optional;
 import org.fatefield.circuits.random.RandomStreams;
 import org.fatefield.scenarios.builtin.BuiltinScenarios;
@@ -47,6 +48,10 @@ public record SweepDefinition(String scenarioText, String scenarioLabel, String 
 
     /** Largest base scenario file a sweep reads (a scenario is a short text; this refuses /dev/zero). */
     private static final long MAX_SCENARIO_BYTES = 1 << 20;
+    /** Most points a design may have, and steps a parameter may take. */
+    private static final long MAX_POINTS = 100_000;
+    /** Most runs (points times replicates) one sweep may plan. */
+    private static final long MAX_RUNS = 1_000_000;
 
     /** Reads and checks a sweep file, reporting every problem at once. */
     public static SweepDefinition read(Path file) throws ScenarioException {
@@ -111,7 +116,7 @@ public record SweepDefinition(String scenarioText, String scenarioLabel, String 
             problems.add(at(label, sweep, "design", "sweep.design", "must be one of \"grid\", \"latin-hypercube\","
                     + " \"sobol\""));
         }
-        long points = wholeNumber(label, sweep, "points", 8, 1, 100_000, problems);
+        long points = wholeNumber(label, sweep, "points", 8, 1, MAX_POINTS, problems);
         long replicates = wholeNumber(label, sweep, "replicates", 1, 1, 10_000, problems);
         long seed = wholeNumber(label, sweep, "seed", 1, 0, RandomStreams.MAX_SEED, problems);
         List<SweepParameter> parameters = new ArrayList<>();
@@ -129,10 +134,28 @@ public record SweepDefinition(String scenarioText, String scenarioLabel, String 
                         e.getMessage()));
             }
         }
+        if (problems.isEmpty()) {
+            double designPoints = design.equals("grid") ? gridSize(parameters) : points;
+            if (designPoints * replicates > MAX_RUNS) {
+                problems.add(new Problem(label, 0, 0, "sweep", null, String.format(Locale.ROOT,
+                        "the design has %.3g runs (%.3g points x %d replicates); at most %d runs fit one sweep:"
+                                + " use fewer steps or values, or split the sweep", designPoints * replicates,
+                        designPoints, replicates, MAX_RUNS)));
+            }
+        }
         if (!problems.isEmpty()) {
             throw new ScenarioException(problems);
         }
         return new SweepDefinition(text, scenario, design, (int) points, (int) replicates, seed, parameters);
+    }
+
+    /** Points of a full grid over {@code parameters}: the product of their value counts. */
+    private static double gridSize(List<SweepParameter> parameters) {
+        double size = 1;
+        for (SweepParameter p : parameters) {
+            size *= p.values().length > 0 ? p.values().length : p.steps();
+        }
+        return size;
     }
 
     /** A whole number from {@code min} to {@code max} at {@code key}, or a problem saying so. */
@@ -149,20 +172,29 @@ public record SweepDefinition(String scenarioText, String scenarioLabel, String 
     }
 
     private static SweepParameter parameter(TomlTable p) {
-        String key = p.getString("key");
-        if (key == null) {
-            throw new IllegalArgumentException("needs key = \"<scenario key path>\"");
+        if (!p.isString("key")) {
+            throw new IllegalArgumentException("needs key = \"<scenario key path>\" (text)");
         }
+        String key = p.getString("key");
         for (String k : p.keySet()) {
             if (!List.of("key", "values", "low", "high", "steps", "scale").contains(k)) {
                 throw new IllegalArgumentException("unknown key " + k + "; keys are key, values, low, high, steps, scale");
             }
         }
         if (p.contains("values")) {
+            if (!p.isArray("values")) {
+                throw new IllegalArgumentException("values must be a list of numbers, like [0.1, 0.2]");
+            }
             TomlArray values = p.getArray("values");
+            if (values.size() > MAX_POINTS) {
+                throw new IllegalArgumentException("values holds " + values.size() + " numbers; at most " + MAX_POINTS);
+            }
             double[] v = new double[values.size()];
             for (int i = 0; i < v.length; i++) {
                 Object o = values.get(i);
+                if (!(o instanceof Long) && !(o instanceof Double)) {
+                    throw new IllegalArgumentException("values must be numbers; item " + (i + 1) + " is " + o);
+                }
                 v[i] = o instanceof Long l ? l : (Double) o;
             }
             if (v.length == 0) {
@@ -178,6 +210,12 @@ public record SweepDefinition(String scenarioText, String scenarioLabel, String 
         String scale = p.getString("scale") != null ? p.getString("scale") : "linear";
         if (!scale.equals("linear") && !scale.equals("log")) {
             throw new IllegalArgumentException("scale must be \"linear\" or \"log\", got \"" + scale + "\"");
+        }
+        if (!(low instanceof Number) || !(high instanceof Number)) {
+            throw new IllegalArgumentException("low and high must be numbers");
+        }
+        if (p.contains("steps") && !(p.isLong("steps") && p.getLong("steps") >= 1 && p.getLong("steps") <= MAX_POINTS)) {
+            throw new IllegalArgumentException("steps must be a whole number from 1 to " + MAX_POINTS);
         }
         return new SweepParameter(key, new double[0], ((Number) low).doubleValue(), ((Number) high).doubleValue(),
                 (int) p.getLong("steps", () -> 5L), scale.equals("log"));

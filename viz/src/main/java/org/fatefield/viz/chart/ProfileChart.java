@@ -29,9 +29,11 @@ public final class ProfileChart {
      * @param simulated simulated boundary of the default fate (NaN for none)
      * @param predicted predicted boundaries where the switch becomes bistable (µm)
      * @param fateCalls predicted positions where a stable state first meets a fate rule (µm)
+     * @param singleCell noise-based predicted fractions {@code [f][b]} from single cells, drawn
+     *                   dashed in each fate's colour, or null for none
      */
     public static JFreeChart create(List<String> fates, double[] x, double[][] fractions, double simulated,
-            double[] predicted, double[] fateCalls) {
+            double[] predicted, double[] fateCalls, double[][] singleCell) {
         XYSeriesCollection data = new XYSeriesCollection();
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
         for (int f = 0; f < fates.size(); f++) {
@@ -44,6 +46,19 @@ public final class ProfileChart {
             data.addSeries(s);
             renderer.setSeriesPaint(f, FatePalette.fate(f, fates.size()));
             renderer.setSeriesStroke(f, new BasicStroke(2.6f));
+        }
+        for (int f = 0; singleCell != null && f < fates.size(); f++) {
+            XYSeries s = new XYSeries(fates.get(f) + ", predicted from single cells", false, true);
+            for (int b = 0; b < x.length; b++) {
+                if (Double.isFinite(singleCell[f][b])) {
+                    s.add(x[b], singleCell[f][b]);
+                }
+            }
+            data.addSeries(s);
+            int series = fates.size() + f;
+            renderer.setSeriesPaint(series, FatePalette.fate(f, fates.size()));
+            renderer.setSeriesStroke(series, new BasicStroke(1.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
+                    new float[] {5f, 4f}, 0f));
         }
         NumberAxis xAxis = new NumberAxis("x (µm), along the gradient");
         NumberAxis yAxis = new NumberAxis("fraction of cells");

@@ -1,0 +1,35 @@
+package org.fatefield.engine.field;
+
+import org.apache.commons.rng.UniformRandomProvider;
+import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
+
+/**
+ * Tissue-to-tissue variability of a morphogen's production, the embryo-to-embryo spread that
+ * sets the positional error of a boundary read from the gradient (Gregor et al. 2007, Cell
+ * 130:153). Each tissue draws one factor per field, lognormal with mean 1 and coefficient of
+ * variation cv: {@code exp(sigma z - sigma^2 / 2)} with {@code sigma^2 = ln(1 + cv^2)} and z a
+ * standard normal draw from the tissue's own stream, so replicate seeds give independent
+ * factors and one seed always gives the same one.
+ */
+public final class AmplitudeVariability {
+
+    /** Largest coefficient of variation accepted (the factor's median is then 0.2 of its mean). */
+    public static final double MAX_CV = 5.0;
+
+    private AmplitudeVariability() {
+    }
+
+    /** Standard deviation of the log of the factor, {@code sqrt(ln(1 + cv^2))}. */
+    public static double sigmaOfLog(double cv) {
+        return Math.sqrt(Math.log1p(cv * cv));
+    }
+
+    /** One factor of coefficient of variation {@code cv} drawn from {@code rng}; exactly 1 when cv is 0. */
+    public static double factor(double cv, UniformRandomProvider rng) {
+        if (cv == 0) {
+            return 1.0;
+        }
+        double sigma = sigmaOfLog(cv);
+        return Math.exp(sigma * ZigguratSampler.NormalizedGaussian.of(rng).sample() - 0.5 * sigma * sigma);
+    }
+}
