@@ -29,7 +29,8 @@ public final class HillFunctions {
     /** Activating Hill function {@code x^n / (theta^n + x^n)}, in [0, 1). */
     public static double activation(double x, double theta, double n) {
         double r = ratioPower(x, theta, n);
-        return r / (1.0 + r);
+        // A huge Hill coefficient overflows r to infinity above theta, where the function is 1.
+        return r == Double.POSITIVE_INFINITY ? 1.0 : r / (1.0 + r);
     }
 
     /** Repressing Hill function {@code theta^n / (theta^n + x^n)}, in (0, 1]. */
@@ -43,6 +44,9 @@ public final class HillFunctions {
             return n == 1.0 ? 1.0 / theta : 0.0;
         }
         double r = ratioPower(x, theta, n);
+        if (r == Double.POSITIVE_INFINITY) {
+            return 0.0;
+        }
         return n * r / (x * (1.0 + r) * (1.0 + r));
     }
 

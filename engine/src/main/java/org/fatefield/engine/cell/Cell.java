@@ -106,6 +106,9 @@ public final class Cell {
         writeArray(out, scores);
     }
 
+    /** Longest state or score array a stored cell may hold (far more species than any circuit has). */
+    private static final int MAX_STORED_ARRAY = 1 << 16;
+
     /** Reads a cell written by {@link #write}. */
     public static Cell read(DataInputStream in) throws IOException {
         long id = in.readLong();
@@ -163,7 +166,12 @@ public final class Cell {
     }
 
     private static double[] readArray(DataInputStream in) throws IOException {
-        double[] values = new double[in.readInt()];
+        int length = in.readInt();
+        if (length < 0 || length > MAX_STORED_ARRAY) {
+            throw new IOException("a cell record holds an array of " + length + " values (at most "
+                    + MAX_STORED_ARRAY + "): the checkpoint is damaged");
+        }
+        double[] values = new double[length];
         for (int i = 0; i < values.length; i++) {
             values[i] = in.readDouble();
         }

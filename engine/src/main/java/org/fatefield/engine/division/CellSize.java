@@ -1,6 +1,7 @@
 package org.fatefield.engine.division;
 
 import org.apache.commons.rng.UniformRandomProvider;
+import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
 
 /**
  * Cell-size rules: when cells divide ({@link SizeControl}) and how unequally a mother's volume
@@ -41,6 +42,12 @@ public record CellSize(SizeControl control, double splitCv) {
             return 0.5;
         }
         double concentration = 1.0 / (splitCv * splitCv) - 1.0;
+        if (concentration > 1e8) {
+            // A split this even (cv below 1e-4) is its normal limit, sd cv / 2; the gamma draws of
+            // the Beta law overflow as cv goes to 0.
+            double share = 0.5 + 0.5 * splitCv * ZigguratSampler.NormalizedGaussian.of(rng).sample();
+            return Math.max(0.25, Math.min(0.75, share));
+        }
         return Partitioning.betaShare(rng, 0.5, concentration);
     }
 }

@@ -64,6 +64,10 @@ public record CycleTimeDistribution(Kind kind, double mean, double cv) {
             case NONE:
                 return Double.POSITIVE_INFINITY;
             case GAMMA: {
+                if (cv < 1e-4) {
+                    // The gamma law's normal limit (its shape 1/cv^2 overflows as cv goes to 0).
+                    return Math.max(0.0, mean * (1 + cv * ZigguratSampler.NormalizedGaussian.of(rng).sample()));
+                }
                 double shape = 1.0 / (cv * cv);
                 return AhrensDieterMarsagliaTsangGammaSampler.of(rng, shape, mean / shape).sample();
             }

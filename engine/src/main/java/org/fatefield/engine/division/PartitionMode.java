@@ -73,9 +73,13 @@ public enum PartitionMode {
 
     /**
      * Binomial(n, 1/2) exactly: each uniformly random bit is one fair coin, so the count of set
-     * bits in n random bits has exactly this law. Costs n / 64 random words.
+     * bits in n random bits has exactly this law. Costs n / 64 random words; above
+     * {@link Partitioning#EXACT_BINOMIAL_LIMIT} molecules the normal approximation is drawn instead.
      */
     static long fairBinomial(long n, UniformRandomProvider rng) {
+        if (n > Partitioning.EXACT_BINOMIAL_LIMIT) {
+            return Partitioning.normalBinomial(n, 0.5, rng);
+        }
         long count = 0;
         long remaining = n;
         while (remaining >= 64) {

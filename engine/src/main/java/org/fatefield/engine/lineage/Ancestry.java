@@ -35,9 +35,16 @@ public final class Ancestry {
         }
     }
 
-    /** Reads a table written by {@link #write}, replacing this one's contents. */
-    public void read(DataInputStream in) throws IOException {
+    /**
+     * Reads a table written by {@link #write}, replacing this one's contents; it must hold
+     * exactly the {@code ids} cells born so far.
+     */
+    public void read(DataInputStream in, long ids) throws IOException {
         long n = in.readLong();
+        if (n != ids) {
+            throw new IOException("the checkpoint's ancestry holds " + n + " cells where " + ids + " were born: it is"
+                    + " damaged; start the run again");
+        }
         parent = new int[(int) Math.max(1024, n)];
         size = n;
         for (int i = 0; i < n; i++) {

@@ -53,27 +53,48 @@ final class TissueCheckpoint {
             throw new IOException("not a tissue checkpoint of this Fatefield version (an older version's checkpoint"
                     + " cannot be resumed: start the run again)");
         }
+        TissueSpec spec = tissue.spec();
         long steps = in.readLong();
         long nextId = in.readLong();
         int n = in.readInt();
+        require(steps >= 0 && steps <= spec.timing().totalSteps(), "step count " + steps + " outside the run's 0 to "
+                + spec.timing().totalSteps());
+        require(n >= 0 && n <= 4 * WorkEstimate.MAX_CELLS && nextId >= n && nextId < Integer.MAX_VALUE,
+                n + " cells with next id " + nextId);
         tissue.population().reset(nextId);
+        int species = spec.circuit().network().speciesCount();
         for (int i = 0; i < n; i++) {
-            tissue.population().add(Cell.read(in));
+            Cell cell = Cell.read(in);
+            require(cell.liveState().length == species && cell.scores().length <= spec.extrinsic().size()
+                    && cell.id() >= 0 && cell.id() < nextId, "cell record " + i + " does not fit this scenario");
+            tissue.population().add(cell);
         }
         for (MorphogenField f : tissue.fields()) {
             f.read(in);
         }
         TimeSeries series = new TimeSeries(tissue.spec().fates().fateNames());
         int rows = in.readInt();
+        require(rows >= 0 && rows <= steps + 1, rows + " recorded rows after " + steps + " steps");
         for (int r = 0; r < rows; r++) {
             double time = in.readDouble();
-            int[] counts = new int[in.readInt()];
+            int fates = in.readInt();
+            require(fates == spec.fates().fateCount(), "a recorded row with " + fates + " fates, not "
+                    + spec.fates().fateCount());
+            int[] counts = new int[fates];
             for (int k = 0; k < counts.length; k++) {
                 counts[k] = in.readInt();
             }
             series.add(new TimeSeries.Row(time, counts, in.readInt(), in.readDouble()));
         }
-        tissue.ancestry().read(in);
+        tissue.ancestry().read(in, nextId);
         tissue.restoreProgress(steps, series);
+    }
+
+    /** Refuses a checkpoint whose contents do not fit the run, with {@code what} was found. */
+    private static void require(boolean ok, String what) throws IOException {
+        if (!ok) {
+            throw new IOException("the checkpoint does not fit this scenario (" + what + "): it is damaged or from"
+                    + " another run; start the run again");
+        }
     }
 }

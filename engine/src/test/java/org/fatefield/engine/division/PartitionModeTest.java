@@ -36,6 +36,34 @@ class PartitionModeTest {
         assertEquals(expectedVariance, variance, 4 * expectedVariance * Math.sqrt(2.0 / (SAMPLES - 1)));
     }
 
+    /**
+     * Past 2^20 molecules the share comes from the normal approximation: same mean N/2 and
+     * variance N/4 (four standard errors, 20,000 draws), and it takes no time at N = 1e18
+     * (exact counting would need 1.6e16 random words).
+     */
+    @Test
+    void hugeCountsKeepTheBinomialMomentsWithoutCountingEachMolecule() {
+        for (long total : new long[] {(1L << 20) + 1, 1_000_000_000_000_000_000L}) {
+            UniformRandomProvider rng = RandomStreams.of(9).stream(0);
+            double sum = 0;
+            double sumSq = 0;
+            for (int i = 0; i < SAMPLES; i++) {
+                double share = PartitionMode.BINOMIAL.firstShare(total, rng) - total / 2.0;
+                sum += share;
+                sumSq += share * share;
+            }
+            double mean = sum / SAMPLES;
+            double variance = (sumSq - SAMPLES * mean * mean) / (SAMPLES - 1);
+            double expectedVariance = total / 4.0;
+            assertEquals(0.0, mean, 4 * Math.sqrt(expectedVariance / SAMPLES), "N = " + total);
+            assertEquals(expectedVariance, variance, 4 * expectedVariance * Math.sqrt(2.0 / (SAMPLES - 1)),
+                    "N = " + total);
+            double p = 0.3;
+            double volumeShare = Partitioning.binomial(total, p, rng);
+            assertEquals(total * p, volumeShare, 6 * Math.sqrt(total * p * (1 - p)), "volume share, N = " + total);
+        }
+    }
+
     @Test
     void binomialSharesFollowTheBinomialLawByChiSquare() {
         // Goodness of fit at the 1% level against Hipparchus' binomial distribution; bins

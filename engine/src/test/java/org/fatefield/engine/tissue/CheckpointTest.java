@@ -89,4 +89,34 @@ class CheckpointTest {
         }
         assertEquals(straightRecords, resumedRecords);
     }
+
+    /**
+     * A checkpoint whose bytes were altered without breaking its file checksum (crafted): a cell
+     * count, an array length or a row width that does not fit the scenario is refused with a
+     * message before anything is allocated from it.
+     */
+    @Test
+    void craftedLengthsAreRefusedWithAMessage() throws IOException {
+        Tissue first = new Tissue(spec(), 5, 1);
+        first.start();
+        first.advance(120);
+        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+        first.writeCheckpoint(new DataOutputStream(bytes));
+        first.finish();
+        byte[] good = bytes.toByteArray();
+        // Layout: magic, steps, next id (8 bytes each), cell count (4), then the first cell: id,
+        // parent (8 each), generation (4), birth and cycle time (8 each), state length (4).
+        int[][] edits = {{24, Integer.MAX_VALUE}, {24, -3}, {64, 1_000_000_000}, {64, 3}};
+        for (int[] edit : edits) {
+            byte[] bad = good.clone();
+            java.nio.ByteBuffer.wrap(bad).putInt(edit[0], edit[1]);
+            Tissue resumed = new Tissue(spec(), 5, 1);
+            resumed.start();
+            IOException e = org.junit.jupiter.api.Assertions.assertThrows(IOException.class,
+                    () -> resumed.readCheckpoint(new DataInputStream(new ByteArrayInputStream(bad))),
+                    "offset " + edit[0] + " set to " + edit[1]);
+            assertTrue(e.getMessage().contains("damaged") || e.getMessage().contains("does not fit"), e.getMessage());
+            resumed.finish();
+        }
+    }
 }

@@ -2,7 +2,6 @@ package org.fatefield.scenarios.format;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -42,10 +41,10 @@ record CircuitDocument(String label, TomlTable toml, ScenarioChecker locator, by
         }
         byte[] bytes;
         try {
-            bytes = Files.readAllBytes(target);
+            bytes = TextLimits.read(target, TextLimits.MAX_TOML_BYTES, "a circuit file is a short text");
         } catch (IOException e) {
             problems.add(new Problem(scenarioLabel, scenario.inputPositionOf("circuit.file").line(), 0, "circuit.file",
-                    "\"" + name + "\"", "cannot read the circuit file " + target + ": " + e.getMessage()));
+                    "\"" + name + "\"", "cannot read the circuit file " + target + ": " + TextLimits.describe(e)));
             return null;
         }
         String label = target.toString();

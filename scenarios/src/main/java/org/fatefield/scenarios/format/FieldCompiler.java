@@ -2,7 +2,8 @@ package org.fatefield.scenarios.format;
 
 import java.io.IOException;
 import java.io.Reader;
-import java.nio.file.Files;
+import java.io.StringReader;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -81,8 +82,10 @@ final class FieldCompiler {
         }
         double spacing = values.number(table, section, "grid_spacing");
         if (width / spacing > MAX_GRID || height / spacing > MAX_GRID) {
-            values.fail(table, section, "grid_spacing", "gives more than " + MAX_GRID
-                    + " grid squares along a side; use at least " + Math.max(width, height) / MAX_GRID + " µm");
+            values.fail(table, section, "grid_spacing", String.format(Locale.ROOT, "gives more than %d grid squares"
+                    + " along a side of the %.6g x %.6g µm tissue (tissue.width x tissue.height); use a grid_spacing"
+                    + " of at least %.6g µm or a smaller tissue", MAX_GRID, width, height,
+                    Math.max(width, height) / MAX_GRID));
             return null;
         }
         MorphogenSpec.WallKind kind = switch (values.text(table, section, "left_wall")) {
@@ -140,7 +143,8 @@ final class FieldCompiler {
         }
         List<Double> xs = new ArrayList<>();
         List<Double> ys = new ArrayList<>();
-        try (Reader in = Files.newBufferedReader(target)) {
+        try (Reader in = new StringReader(new String(TextLimits.read(target, TextLimits.MAX_TABLE_BYTES,
+                "a measured profile is a table of a few thousand rows at most"), StandardCharsets.UTF_8))) {
             for (CSVRecord row : CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get().parse(in)) {
                 try {
                     xs.add(Double.parseDouble(row.get("x_um")));
@@ -153,7 +157,7 @@ final class FieldCompiler {
             }
         } catch (IOException | IllegalStateException e) {
             values.problem(table, "profile", path + ".profile", "\"" + name + "\"", "cannot read " + target + ": "
-                    + e.getMessage());
+                    + (e instanceof IOException io ? TextLimits.describe(io) : e.getMessage()));
             return null;
         }
         try {

@@ -54,6 +54,12 @@ final class ScenarioChecker {
 
     /** Parses {@code text} as TOML; null (with the syntax errors as problems) if it is not TOML. */
     TomlParseResult parse(String text) {
+        int[] deep = TextLimits.tooDeep(text);
+        if (deep != null) {
+            problems.add(new Problem(file, deep[0], deep[1], keyOnLine(text, deep[0]), null, "arrays or inline tables"
+                    + " nest more than " + TextLimits.MAX_NESTING + " deep here; no scenario value needs more than 3"));
+            return null;
+        }
         TomlParseResult parsed = Toml.parse(text);
         if (parsed.hasErrors()) {
             for (TomlParseError error : parsed.errors()) {

@@ -40,6 +40,9 @@ import org.tomlj.TomlTable;
  */
 final class ScenarioCompiler {
 
+    /** Most squares of one cell diameter a tissue may hold: the mechanics' neighbour grid. */
+    private static final double MAX_DIAMETERS_SQUARED = 1.6e7;
+
 
     private final String file;
     private final TomlTable toml;
@@ -83,7 +86,13 @@ final class ScenarioCompiler {
         double repulsion = values.number(tissue, "tissue", "repulsion");
         if (2 * radius > Math.min(width, height)) {
             values.fail(tissue, "tissue", "cell_radius", "a cell this size does not fit in a " + width + " x " + height
-                    + " µm domain");
+                    + " µm domain (tissue.width x tissue.height): use a smaller radius or a larger tissue");
+        } else if ((width / (2 * radius)) * (height / (2 * radius)) > MAX_DIAMETERS_SQUARED) {
+            values.fail(tissue, "tissue", "cell_radius", String.format(Locale.ROOT, "is too small for a %.6g x %.6g µm"
+                    + " tissue: it would hold %.3g cell diameters squared, at most %.3g (the neighbour grid"
+                    + " of the mechanics); use cell_radius of at least %.3g µm or a smaller tissue", width, height,
+                    width * height / (4 * radius * radius), MAX_DIAMETERS_SQUARED,
+                    0.5 * Math.sqrt(width * height / MAX_DIAMETERS_SQUARED)));
         }
         if (repulsion * step > 0.5) {
             values.fail(tissue, "tissue", "repulsion", "repulsion * run.step = " + repulsion * step

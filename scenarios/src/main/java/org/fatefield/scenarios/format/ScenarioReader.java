@@ -2,7 +2,6 @@ package org.fatefield.scenarios.format;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
@@ -31,10 +30,10 @@ public final class ScenarioReader {
     public static Scenario read(Path path) throws ScenarioException {
         byte[] bytes;
         try {
-            bytes = Files.readAllBytes(path);
+            bytes = TextLimits.read(path, TextLimits.MAX_TOML_BYTES, "a scenario file is a short text");
         } catch (IOException e) {
             throw new ScenarioException(List.of(new Problem(path.toString(), 0, 0, "", null,
-                    "cannot read the file: " + e.getMessage())));
+                    "cannot read the file: " + TextLimits.describe(e))));
         }
         String fallbackName = path.getFileName().toString().replaceFirst("\\.toml$", "");
         Path folder = path.toAbsolutePath().getParent();

@@ -12,6 +12,7 @@ import org.fatefield.circuits.random.RandomStreams;
 import org.fatefield.scenarios.builtin.BuiltinScenarios;
 import org.fatefield.scenarios.format.Problem;
 import org.fatefield.scenarios.format.ScenarioException;
+import org.fatefield.scenarios.format.TextLimits;
 import org.tomlj.Toml;
 import org.tomlj.TomlArray;
 import org.tomlj.TomlInvalidTypeException;
@@ -59,7 +60,14 @@ public record SweepDefinition(String scenarioText, String scenarioLabel, String 
         List<Problem> problems = new ArrayList<>();
         TomlParseResult toml;
         try {
-            toml = Toml.parse(file);
+            String text = new String(TextLimits.read(file, TextLimits.MAX_TOML_BYTES, "a sweep file is a short text"),
+                    StandardCharsets.UTF_8);
+            int[] deep = TextLimits.tooDeep(text);
+            if (deep != null) {
+                throw new ScenarioException(List.of(new Problem(label, deep[0], deep[1], "", null, "arrays or inline"
+                        + " tables nest more than " + TextLimits.MAX_NESTING + " deep here")));
+            }
+            toml = Toml.parse(text);
         } catch (IOException e) {
             throw new ScenarioException(List.of(new Problem(label, 0, 0, "", null, "cannot read: " + e.getMessage())));
         }

@@ -1,0 +1,116 @@
+package org.fatefield.scenarios.format;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+
+/**
+ * Limits on input text, checked before a parser sees it, so that untrusted files end in a
+ * clear message instead of exhausting memory or the stack: a file is read only up to a size
+ * (a device such as {@code /dev/zero} never ends), and TOML arrays and inline tables may nest
+ * only so deep (the TOML parser recurses once per level).
+ */
+public final class TextLimits {
+
+    /** Largest scenario, circuit or sweep file read (1 MiB: these are short texts). */
+    public static final int MAX_TOML_BYTES = 1 << 20;
+
+    /** Largest measured-profile CSV read (16 MiB). */
+    public static final int MAX_TABLE_BYTES = 1 << 24;
+
+    /** Deepest nesting of arrays and inline tables in a TOML text. */
+    public static final int MAX_NESTING = 32;
+
+    private TextLimits() {
+    }
+
+    /**
+     * The bytes of {@code file}, read up to {@code max}; an IOException saying so if the file
+     * is longer or never ends.
+     */
+    public static byte[] read(Path file, int max, String what) throws IOException {
+        try (InputStream in = Files.newInputStream(file)) {
+            byte[] bytes = in.readNBytes(max + 1);
+            if (bytes.length > max) {
+                throw new IOException("is larger than " + max / 1024 + " KiB; " + what);
+            }
+            return bytes;
+        }
+    }
+
+    /** What went wrong reading a file, in words: "no such file" rather than the bare path. */
+    public static String describe(IOException e) {
+        if (e instanceof java.nio.file.NoSuchFileException) {
+            return "no such file";
+        }
+        if (e instanceof java.nio.file.AccessDeniedException) {
+            return "permission denied";
+        }
+        return e.getMessage();
+    }
+
+    /**
+     * Where {@code text} first nests arrays and inline tables more than {@link #MAX_NESTING}
+     * deep, as {@code {line, column}} (1-based), or null if it never does. Brackets inside
+     * strings and comments do not count.
+     */
+    public static int[] tooDeep(String text) {
+        int depth = 0;
+        int line = 1;
+        int column = 0;
+        char quote = 0;
+        boolean multiline = false;
+        boolean comment = false;
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            column++;
+            if (c == '\n') {
+                line++;
+                column = 0;
+                comment = false;
+                if (quote != 0 && !multiline) {
+                    quote = 0;
+                }
+                continue;
+            }
+            if (comment) {
+                continue;
+            }
+            if (quote != 0) {
+                if (quote == '"' && c == '\\') {
+                    i++;
+                    column++;
+                } else if (c == quote && (!multiline || text.startsWith(triple(quote), i))) {
+                    if (multiline) {
+                        i += 2;
+                        column += 2;
+                    }
+                    quote = 0;
+                }
+                continue;
+            }
+            if (c == '#') {
+                comment = true;
+            } else if (c == '"' || c == '\'') {
+                quote = c;
+                multiline = text.startsWith(triple(c), i);
+                if (multiline) {
+                    i += 2;
+                    column += 2;
+                }
+            } else if (c == '[' || c == '{') {
+                if (++depth > MAX_NESTING) {
+                    return new int[] {line, column};
+                }
+            } else if ((c == ']' || c == '}') && depth > 0) {
+                depth--;
+            }
+        }
+        return null;
+    }
+
+    private static String triple(char quote) {
+        return String.valueOf(quote).repeat(3);
+    }
+}
