@@ -16,6 +16,7 @@ import org.fatefield.scenarios.analysis.AnalysisWriter;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.output.RunLayout;
+import org.hipparchus.exception.MathIllegalStateException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -146,6 +147,12 @@ final class AnalyzeCommand implements Callable<Integer> {
             } catch (IllegalArgumentException e) {
                 err.println("Cannot analyse " + loaded.name() + ": " + e.getMessage());
                 return FatefieldCommand.INVALID_INPUT;
+            } catch (MathIllegalStateException e) {
+                // An integration or solver that met NaN or infinity: the circuit overflows at these values.
+                err.println("Cannot analyse " + loaded.name() + " at " + plan.parameter() + " = " + plan.at() + ": "
+                        + e.getMessage() + "; the circuit's rates overflow there. Choose --at (and --range)"
+                        + " where its rates stay finite, such as the coupling's range");
+                return FatefieldCommand.INVALID_INPUT;
             }
             AnalysisWriter writer = new AnalysisWriter(RunFolder.open(folder), network, plan);
             writer.write(result, analysis);
@@ -158,7 +165,7 @@ final class AnalyzeCommand implements Callable<Integer> {
             o.flush();
             return 0;
         } catch (IOException e) {
-            err.println("Cannot write results: " + e.getMessage());
+            err.println("Cannot write results: " + IoMessages.describe(e));
             return FatefieldCommand.OUTPUT_ERROR;
         }
     }

@@ -86,7 +86,7 @@ final class ReplicatesCommand implements Callable<Integer> {
             o.flush();
             return 0;
         } catch (IOException e) {
-            err.println("Cannot write results: " + e.getMessage());
+            err.println("Cannot write results: " + IoMessages.describe(e));
             return FatefieldCommand.OUTPUT_ERROR;
         }
     }

@@ -111,7 +111,7 @@ final class RobustnessCommand implements Callable<Integer> {
                     perturbations.size(), replicates, out.toAbsolutePath().normalize());
             return 0;
         } catch (IOException e) {
-            err.println("Cannot write results: " + e.getMessage());
+            err.println("Cannot write results: " + IoMessages.describe(e));
             return FatefieldCommand.OUTPUT_ERROR;
         }
     }

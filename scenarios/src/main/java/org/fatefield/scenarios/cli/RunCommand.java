@@ -149,7 +149,7 @@ final class RunCommand implements Callable<Integer> {
             }
             return 0;
         } catch (IOException e) {
-            err.println("Cannot write results: " + e.getMessage());
+            err.println("Cannot write results: " + IoMessages.describe(e));
             return FatefieldCommand.OUTPUT_ERROR;
         }
     }
