@@ -6,6 +6,8 @@ import java.util.List;
 import java.util.Locale;
 import org.fatefield.circuits.analysis.Spectra;
 import org.fatefield.circuits.model.ReactionNetwork;
+import org.fatefield.circuits.sim.CircuitStepper;
+import org.fatefield.circuits.sim.RungeKutta4Stepper;
 import org.fatefield.engine.coupling.SignalCoupling;
 import org.hipparchus.complex.Complex;
 
@@ -20,7 +22,8 @@ import org.hipparchus.complex.Complex;
  * (Langevin) is unstable on a linear decay when rate x step exceeds 2 and already wrong by
  * a factor of two at 1, so 1 is the limit; the deterministic RK4 steps are refused above 2
  * (their stability limit on real decays is 2.79; Hairer, Norsett &amp; Wanner 1993, Solving
- * Ordinary Differential Equations I, §IV.2).
+ * Ordinary Differential Equations I, §IV.2). Last, every rate is evaluated over the box of
+ * states the circuit can reach (see boxProblem).
  */
 public final class RateCheck {
 
@@ -71,11 +74,69 @@ public final class RateCheck {
                     problems.add(step);
                 }
             }
+            if (problems.isEmpty()) {
+                String box = boxProblem(spec, p, where.toString());
+                if (box != null) {
+                    problems.add(box);
+                }
+            }
             if (!problems.isEmpty()) {
                 return problems;
             }
         }
         return problems;
+    }
+
+    /**
+     * Evaluates every rate over the box of states the circuit can reach: each species from 0 to
+     * 1.5 times its largest value on the deterministic path from the initial state (RK4 at the
+     * run's step, over the run or 200 h, whichever is longer, at most 1e5 steps: long enough to
+     * settle, and a divided cell restarts from its mother's state; the margin allows for noise), on a
+     * grid of 0, half and all of each range (every combination up to six species, else the
+     * corners of one species at a time). Returns the first problem, or null.
+     */
+    private static String boxProblem(TissueSpec spec, double[] p, String where) {
+        ReactionNetwork network = spec.circuit().network();
+        int n = network.speciesCount();
+        double[] x = spec.circuit().initialState();
+        double[] top = x.clone();
+        double dt = spec.timing().step();
+        long steps = (long) Math.min(Math.ceil(Math.max(spec.timing().duration(), 200.0) / dt), 100_000);
+        CircuitStepper path = RungeKutta4Stepper.of(network);
+        for (long k = 0; k < steps; k++) {
+            path.advance(x, p, dt, null);
+            for (int i = 0; i < n; i++) {
+                if (!Double.isFinite(x[i])) {
+                    return String.format(Locale.ROOT, "the circuit's deterministic path from the initial state%s"
+                            + " runs away: %s is %s at t = %.4g h; fix the rate laws or the parameter values",
+                            where.isEmpty() ? "" : " with " + where, network.speciesNames().get(i), x[i], (k + 1) * dt);
+                }
+                top[i] = Math.max(top[i], x[i]);
+            }
+        }
+        double[] propensity = new double[network.reactionCount()];
+        double[] state = new double[n];
+        int points = n <= 6 ? (int) Math.pow(3, n) : 2 * n + 1;
+        for (int point = 0; point < points; point++) {
+            for (int i = 0; i < n; i++) {
+                int level = n <= 6 ? (point / (int) Math.pow(3, i)) % 3 : point == 2 * n ? 2
+                        : point / 2 == i ? 1 + point % 2 : 0;
+                state[i] = 1.5 * top[i] * level / 2.0;
+            }
+            network.propensities(state, p, propensity);
+            for (int r = 0; r < propensity.length; r++) {
+                if (!Double.isFinite(propensity[r]) || propensity[r] < 0) {
+                    return String.format(Locale.ROOT, "the rate of %s is %s at %s, inside the states the circuit can"
+                            + " reach%s (each species from 0 to 1.5 times its largest value on the deterministic path"
+                            + " from the initial state: %s); fix the rate law, the parameter values or the coupling's"
+                            + " range", network.reactionName(r), Double.isFinite(propensity[r])
+                            ? String.format(Locale.ROOT, "negative (%.6g)", propensity[r]) : "not a finite number ("
+                            + propensity[r] + ")", Arrays.toString(state), where.isEmpty() ? "" : " with " + where,
+                            Arrays.toString(top));
+                }
+            }
+        }
+        return null;
     }
 
     private static String stepProblem(TissueSpec spec, double[] x, double[] p, String where) {

@@ -37,4 +37,27 @@ class FateCallBoundaryTest {
         // Bisection along chords of at most 0.01: the chord's deviation from the branch, about 1e-5.
         assertEquals(13.0 / 6, calls.get(0).controlValue(), 1e-4);
     }
+
+    /**
+     * The n = 2 self-activation/mutual-inhibition switch x' = a x^2/(S^2 + x^2) + b S^2/(S^2 + y^2)
+     * - k x (and x, y swapped; Huang, Guo, May &amp; Enver 2007, Dev Biol 305:695), continued in b.
+     * Derived here: on y = S^2/x both equations reduce to k x^2 - (a + b) x + k S^2 = 0, so the
+     * asymmetric states exist for a + b &gt;= 2kS and their high member x reaches the rule's level
+     * X at b = k (X^2 + S^2) / X - a. With a = 0.5, S = 0.5, k = 1 and the rule x &gt;= 0.8,
+     * y &lt; 0.35 (y = 0.3125 there): b = 0.6125, while the branch is born at b = 0.5.
+     */
+    @Test
+    void selfActivatingSwitchEntersTheRuleWhereTheQuadraticSays() {
+        SelfActivatingSwitch sw = SelfActivatingSwitch.symmetric("X", "Y",
+                new GeneKinetics(0, 0.5, 0.5, 2, 0.3, 0.5, 2, 1));
+        int[] b = {sw.parameterIndex("X.repression"), sw.parameterIndex("Y.repression")};
+        List<Branch> branches = EquilibriumContinuation.of(new NetworkSystem(sw, sw.defaultParameters(), b),
+                ContinuationSettings.defaults().withMaxStep(0.005)).diagram(new double[] {0.3, 0.3}, 0.3, 0.3, 1.5,
+                true, 2);
+        FateClassifier fates = new FateClassifier(List.of(new FateRule("x-high", new double[] {0.8, Double.NaN},
+                new double[] {Double.NaN, 0.35})), "other");
+        List<FateCallBoundary> calls = FateCallBoundary.of(branches, fates);
+        assertEquals(1, calls.size(), calls.toString());
+        assertEquals(0.6125, calls.get(0).controlValue(), 1e-4);
+    }
 }
