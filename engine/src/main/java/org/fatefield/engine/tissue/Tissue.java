@@ -12,7 +12,6 @@ import org.apache.commons.rng.UniformRandomProvider;
 import org.fatefield.circuits.random.EmbeddedStream;
 import org.fatefield.circuits.random.RandomStreams;
 import org.fatefield.engine.cell.Cell;
-import org.fatefield.engine.cell.CellRandom;
 import org.fatefield.engine.cell.CellPopulation;
 import org.fatefield.engine.field.AmplitudeVariability;
 import org.fatefield.engine.field.MorphogenField;
@@ -164,7 +163,7 @@ public final class Tissue extends SimState {
         steps++;
         division.divideReady(population, ready, ancestry, lineage, time());
         if (spec.growth().deathRate() > 0) {
-            removeDead(dt);
+            CellDeaths.remove(spec, population, cellLoop.serialRandom(), lineage, dt, time());
         }
         mechanics.relax(population, dt, pool);
         if (steps % reorderEvery == 0) {
@@ -187,31 +186,6 @@ public final class Tissue extends SimState {
     /** The cell stage of the tick (see {@link CellLoop}). */
     private void stepCells(double dt, double end) {
         ready = cellLoop.step(population, fields, dt, end, pool);
-    }
-
-    /**
-     * Each cell dies with probability {@code deathRate * dt} per step, drawn from its own stream;
-     * the dead are removed (extruded) and their lineage records written in order of id. The
-     * survivors keep their order.
-     */
-    private void removeDead(double dt) {
-        double p = spec.growth().deathRate() * dt;
-        double now = time();
-        CellRandom random = cellLoop.serialRandom();
-        List<Cell> dead = new ArrayList<>();
-        population.removeIf(cell -> {
-            if (random.of(cell).nextDouble() >= p) {
-                return false;
-            }
-            dead.add(cell);
-            return true;
-        });
-        dead.sort(BY_ID);
-        for (Cell cell : dead) {
-            lineage.accept(new LineageRecord(cell.id(), cell.parentId(), cell.generation(), cell.birthTime(),
-                    Double.NaN, cell.birthX(), cell.birthY(), -1, spec.fates().classify(cell.liveState()),
-                    cell.fateSince(), now, cell.birthVolume(), cell.volume(), cell.firstEntry()));
-        }
     }
 
     private void record() {
