@@ -2,14 +2,14 @@ package org.fatefield.engine.field;
 
 import org.apache.commons.rng.UniformRandomProvider;
 import org.apache.commons.rng.sampling.distribution.ZigguratSampler;
+import org.fatefield.engine.variability.LognormalFactor;
 
 /**
  * Tissue-to-tissue variability of a morphogen's production, the embryo-to-embryo spread that
  * sets the positional error of a boundary read from the gradient (Gregor et al. 2007, Cell
  * 130:153). Each tissue draws one factor per field, lognormal with mean 1 and coefficient of
- * variation cv: {@code exp(sigma z - sigma^2 / 2)} with {@code sigma^2 = ln(1 + cv^2)} and z a
- * standard normal draw from the tissue's own stream, so replicate seeds give independent
- * factors and one seed always gives the same one.
+ * variation cv ({@link LognormalFactor}), its score z a standard normal draw from the tissue's
+ * own stream, so replicate seeds give independent factors and one seed always gives the same one.
  */
 public final class AmplitudeVariability {
 
@@ -21,7 +21,7 @@ public final class AmplitudeVariability {
 
     /** Standard deviation of the log of the factor, {@code sqrt(ln(1 + cv^2))}. */
     public static double sigmaOfLog(double cv) {
-        return Math.sqrt(Math.log1p(cv * cv));
+        return LognormalFactor.sigmaOfLog(cv);
     }
 
     /** One factor of coefficient of variation {@code cv} drawn from {@code rng}; exactly 1 when cv is 0. */
@@ -29,7 +29,6 @@ public final class AmplitudeVariability {
         if (cv == 0) {
             return 1.0;
         }
-        double sigma = sigmaOfLog(cv);
-        return Math.exp(sigma * ZigguratSampler.NormalizedGaussian.of(rng).sample() - 0.5 * sigma * sigma);
+        return LognormalFactor.of(sigmaOfLog(cv), ZigguratSampler.NormalizedGaussian.of(rng).sample());
     }
 }

@@ -150,12 +150,7 @@ public record SingleCellProfile(double[] centres, double[][] fractions, int cell
 
     /** Where the predicted fraction of fate {@code f} crosses 1/2, if it crosses exactly once (else NaN). */
     public double boundary(int f) {
-        if (!defined()) {
-            return Double.NaN;
-        }
-        int[] counts = new int[centres.length];
-        Arrays.fill(counts, cellsPerPosition);
-        return new FateProfile(centres, counts, fractions).boundary(f);
+        return defined() ? asProfile(fractions).boundary(f) : Double.NaN;
     }
 
     /**
@@ -170,9 +165,14 @@ public record SingleCellProfile(double[] centres, double[][] fractions, int cell
         for (int b = 0; b < centres.length; b++) {
             committed[0][b] = 1 - fractions[fractions.length - 1][b];
         }
+        return asProfile(committed).boundary(0);
+    }
+
+    /** {@code fractions} over this prediction's bins, as a profile whose boundaries are measured like a tissue's. */
+    private FateProfile asProfile(double[][] fractions) {
         int[] counts = new int[centres.length];
         Arrays.fill(counts, cellsPerPosition);
-        return new FateProfile(centres, counts, committed).boundary(0);
+        return new FateProfile(centres, counts, fractions);
     }
 
     /**

@@ -41,13 +41,12 @@ public record ExtrinsicNoise(String label, int[] indices, double cv, double rho)
 
     /** The log-scale standard deviation sigma for the coefficient of variation. */
     public double sigma() {
-        return Math.sqrt(Math.log1p(cv * cv));
+        return LognormalFactor.sigmaOfLog(cv);
     }
 
     /** The factor for score {@code z}. */
     public double factor(double z) {
-        double s = sigma();
-        return Math.exp(s * z - 0.5 * s * s);
+        return LognormalFactor.of(sigma(), z);
     }
 
     /** A founder's score. */

@@ -2,7 +2,11 @@ package org.fatefield.scenarios.format;
 
 import java.io.IOException;
 import java.io.InputStream;
+import java.nio.file.AccessDeniedException;
+import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.FileSystemException;
 import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 
 /**
@@ -39,13 +43,15 @@ public final class TextLimits {
         }
     }
 
-    /** What went wrong reading a file, in words: "no such file" rather than the bare path. */
+    /**
+     * What went wrong with a file, in words ("no such file or folder") where Java's message is
+     * the bare path; otherwise Java's message.
+     */
     public static String describe(IOException e) {
-        if (e instanceof java.nio.file.NoSuchFileException) {
-            return "no such file";
-        }
-        if (e instanceof java.nio.file.AccessDeniedException) {
-            return "permission denied";
+        if (e instanceof FileSystemException fs && fs.getReason() == null) {
+            return e instanceof NoSuchFileException ? "no such file or folder"
+                    : e instanceof AccessDeniedException ? "permission denied"
+                    : e instanceof FileAlreadyExistsException ? "already exists" : e.getClass().getSimpleName();
         }
         return e.getMessage();
     }
