@@ -77,48 +77,11 @@ public final class ControlCircuit {
     }
 
     /**
-     * The middle of the longest stretch of the range (scanned at 81 values) where the most stable
-     * steady states coexist: the place to look at a multistable landscape.
+     * The middle of the coupling's range: where every Fatefield screen (analysis default, live
+     * window, report) shows the landscape unless told otherwise.
      */
-    public double mostMultistable() {
-        int values = 81;
-        int best = -1;
-        int bestStart = 0;
-        int bestLength = 0;
-        int runStart = 0;
-        int previous = -1;
-        for (int k = 0; k <= values; k++) {
-            int count = k < values ? stableCount(lo + (hi - lo) * k / (values - 1)) : -1;
-            if (count != previous) {
-                int length = k - runStart;
-                if (previous > best || previous == best && length > bestLength) {
-                    best = previous;
-                    bestStart = runStart;
-                    bestLength = length;
-                }
-                runStart = k;
-                previous = count;
-            }
-        }
-        double middle = bestStart + (bestLength - 1) / 2.0;
-        return lo + (hi - lo) * middle / (values - 1);
-    }
-
-    private int stableCount(double value) {
-        int count = 0;
-        for (Branch b : branches) {
-            List<BranchPoint> pts = b.points();
-            for (int i = 0; i + 1 < pts.size(); i++) {
-                BranchPoint a = pts.get(i);
-                BranchPoint z = pts.get(i + 1);
-                boolean spans = Math.min(a.parameter(), z.parameter()) <= value
-                        && value < Math.max(a.parameter(), z.parameter());
-                if (spans && a.stable() && z.stable()) {
-                    count++;
-                }
-            }
-        }
-        return count;
+    public double middle() {
+        return 0.5 * (lo + hi);
     }
 
     /**

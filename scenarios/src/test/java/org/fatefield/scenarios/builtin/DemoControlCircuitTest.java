@@ -3,8 +3,10 @@ package org.fatefield.scenarios.builtin;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 
+import java.util.List;
 import org.fatefield.circuits.analysis.QuasiPotential;
 import org.fatefield.circuits.analysis.continuation.Branch;
+import org.fatefield.circuits.analysis.continuation.MultistableRanges;
 import org.fatefield.circuits.analysis.continuation.SpecialPoint;
 import org.fatefield.engine.control.ControlCircuit;
 import org.fatefield.scenarios.format.ScenarioReader;
@@ -17,7 +19,7 @@ import org.junit.jupiter.api.Test;
 class DemoControlCircuitTest {
 
     @Test
-    void mostMultistableValueIsTheMiddleOfTheBistableStretchAndItsWellsAreEquallyDeep() throws Exception {
+    void bistableFromThePitchforkToTheTopAndEqualWellsAtTheMiddleOfTheRange() throws Exception {
         var scenario = ScenarioReader.parse("demo", "demo", BuiltinScenarios.bytes("demo").orElseThrow());
         ControlCircuit circuit = ControlCircuit.of(scenario.tissue(), 60);
         assertNotNull(circuit);
@@ -28,14 +30,16 @@ class DemoControlCircuitTest {
             }
         }
         double hi = 2.0;
-        // The bistable stretch runs from the pitchfork to the range's top; the scan of 81 values
-        // places its middle to within one scan spacing.
-        double spacing = (hi - 0.2) / 80;
-        assertEquals(0.5 * (pitchfork + hi), circuit.mostMultistable(), spacing);
+        // The bistable range read off the diagram runs from the located pitchfork to the range's top.
+        List<MultistableRanges.Range> bistable = MultistableRanges.of(circuit.branches());
+        assertEquals(1, bistable.size(), bistable.toString());
+        assertEquals(pitchfork, bistable.get(0).from(), 1e-9, "starts at the located pitchfork");
+        assertEquals(hi, bistable.get(0).to(), 1e-12);
+        assertEquals(0.5 * (0.2 + hi), circuit.middle(), 1e-12);
         // Mirror symmetry of the toggle (swap the two species): the two wells of the stationary
         // distribution are equally deep; on the mirror-symmetric grid the solved minima of U agree
         // to round-off (1e-9 allows for the error accumulated by the elimination).
-        QuasiPotential u = circuit.landscape().apply(circuit.mostMultistable());
+        QuasiPotential u = circuit.landscape().apply(circuit.middle());
         double lowerLeft = Double.POSITIVE_INFINITY;
         double upperRight = Double.POSITIVE_INFINITY;
         for (int j = 0; j < u.ys().length; j++) {
