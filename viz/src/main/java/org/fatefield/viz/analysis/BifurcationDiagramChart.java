@@ -1,27 +1,39 @@
 package org.fatefield.viz.analysis;
 
 import java.awt.BasicStroke;
-import java.awt.geom.Ellipse2D;
+import java.awt.Color;
+import java.awt.Polygon;
+import java.awt.Shape;
 import java.util.List;
 import java.util.Locale;
 import org.fatefield.circuits.analysis.continuation.Branch;
 import org.fatefield.circuits.analysis.continuation.BranchPoint;
+import org.fatefield.circuits.analysis.continuation.MultistableRanges;
 import org.fatefield.circuits.analysis.continuation.SpecialPoint;
 import org.fatefield.viz.chart.ChartStyle;
 import org.jfree.chart.JFreeChart;
-import org.jfree.chart.annotations.XYTextAnnotation;
 import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.plot.IntervalMarker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.ui.Layer;
+import org.jfree.chart.ui.RectangleAnchor;
+import org.jfree.chart.ui.RectangleInsets;
 import org.jfree.chart.ui.TextAnchor;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 
 /**
  * One-parameter bifurcation diagram: steady states of one species against the parameter, stable
- * branches solid, unstable dashed (the usual convention), special points marked and labelled.
+ * branches solid, unstable dashed (the usual convention), the range where two or more stable
+ * states coexist shaded and labelled, special points marked with open diamonds and described in
+ * the legend.
  */
 public final class BifurcationDiagramChart {
+
+    /** Open diamond marking a special point, in every chart that marks them. */
+    public static final Shape DIAMOND = new Polygon(new int[] {0, 7, 0, -7}, new int[] {-7, 0, 7, 0}, 4);
+    private static final int MAX_SPECIALS_IN_LEGEND = 6;
 
     private BifurcationDiagramChart() {
     }
@@ -35,6 +47,8 @@ public final class BifurcationDiagramChart {
     public static JFreeChart create(List<Branch> branches, int species, String parameter, String speciesName) {
         XYSeriesCollection data = new XYSeriesCollection();
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
+        // One path per series, so dashes run on along a branch of many short segments.
+        renderer.setDrawSeriesLineAsPath(true);
         BasicStroke solid = new BasicStroke(2.4f);
         BasicStroke dashed = new BasicStroke(2.0f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f,
                 new float[] {7f, 5f}, 0f);
@@ -63,27 +77,45 @@ public final class BifurcationDiagramChart {
                 }
             }
         }
-        XYSeries marks = new XYSeries("special points", false, true);
         NumberAxis x = new NumberAxis(parameter);
         NumberAxis y = new NumberAxis(speciesName + " (concentration)");
         x.setAutoRangeIncludesZero(false);
         XYPlot plot = new XYPlot(data, x, y, renderer);
+        for (MultistableRanges.Range range : MultistableRanges.of(branches)) {
+            IntervalMarker band = new IntervalMarker(range.from(), range.to(), ChartStyle.BISTABLE);
+            band.setLabel(String.format(Locale.ROOT, "bistable, %s %.4g to %.4g", parameter, range.from(), range.to()));
+            band.setLabelFont(ChartStyle.SMALL);
+            band.setLabelBackgroundColor(new Color(255, 255, 255, 0));
+            band.setLabelAnchor(RectangleAnchor.TOP);
+            band.setLabelTextAnchor(TextAnchor.TOP_CENTER);
+            band.setLabelOffset(new RectangleInsets(6, 0, 0, 0));
+            plot.addDomainMarker(band, Layer.BACKGROUND);
+        }
+        // Special points are described in the legend, not beside the curve, so no label covers a branch.
+        XYSeriesCollection markData = new XYSeriesCollection();
+        XYLineAndShapeRenderer markRenderer = new XYLineAndShapeRenderer(false, true);
+        int shown = 0;
         for (Branch branch : branches) {
             for (SpecialPoint s : branch.specials()) {
-                double sx = s.parameter();
-                double sy = s.state()[species];
-                marks.add(sx, sy);
-                XYTextAnnotation label = new XYTextAnnotation(
-                        String.format(Locale.ROOT, "  %s, %s = %.4g", s.description(), parameter, sx), sx, sy);
-                label.setFont(ChartStyle.SMALL);
-                label.setTextAnchor(TextAnchor.BOTTOM_LEFT);
-                plot.addAnnotation(label);
+                String name = shown < MAX_SPECIALS_IN_LEGEND
+                        ? String.format(Locale.ROOT, "%s at %s = %.4g", s.description(), parameter, s.parameter())
+                        : "further special points";
+                int series = markData.getSeriesIndex(name);
+                if (series < 0) {
+                    markData.addSeries(new XYSeries(name, false, true));
+                    series = markData.getSeriesCount() - 1;
+                    markRenderer.setSeriesShape(series, DIAMOND);
+                    markRenderer.setSeriesPaint(series, ChartStyle.SPECIAL);
+                    markRenderer.setSeriesFillPaint(series, Color.WHITE);
+                    markRenderer.setSeriesOutlineStroke(series, new BasicStroke(1.8f));
+                }
+                markData.getSeries(series).add(s.parameter(), s.state()[species]);
+                shown++;
             }
         }
-        XYSeriesCollection markData = new XYSeriesCollection(marks);
-        XYLineAndShapeRenderer markRenderer = new XYLineAndShapeRenderer(false, true);
-        markRenderer.setSeriesShape(0, new Ellipse2D.Double(-5, -5, 10, 10));
-        markRenderer.setSeriesPaint(0, ChartStyle.SPECIAL);
+        markRenderer.setUseFillPaint(true);
+        markRenderer.setUseOutlinePaint(false);
+        markRenderer.setDrawOutlines(true);
         plot.setDataset(1, markData);
         plot.setRenderer(1, markRenderer);
         renderer.setLegendItemLabelGenerator((dataset, series) ->

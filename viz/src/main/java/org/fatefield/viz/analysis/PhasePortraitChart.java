@@ -7,6 +7,7 @@ import java.util.List;
 import org.fatefield.circuits.analysis.SteadyState;
 import org.fatefield.circuits.model.ReactionNetwork;
 import org.fatefield.viz.chart.ChartStyle;
+import org.fatefield.viz.palette.SpeciesPalette;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.annotations.XYLineAnnotation;
 import org.jfree.chart.axis.NumberAxis;
@@ -16,14 +17,18 @@ import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 
 /**
- * Phase portrait in the plane of two species: both nullclines, a field of direction arrows and
- * the steady states (filled when stable, open when not).
+ * Phase portrait in the plane of two species: both nullclines (each in its species' colour),
+ * evenly spaced streamlines of the flow shaded by speed, and the steady states (filled when
+ * stable, open when not).
  */
 public final class PhasePortraitChart {
 
-    private static final Color X_NULLCLINE = new Color(0xD55E00);
-    private static final Color Y_NULLCLINE = new Color(0x0072B2);
-    private static final Color ARROW = new Color(0x9A9A9A);
+    private static final Color SLOW = new Color(0xD0D0D0);
+    private static final Color FAST = new Color(0x505050);
+    /** Streamline spacing as a fraction of the plot's side. */
+    private static final double SEPARATION = 0.045;
+    /** Points per shaded piece of a streamline. */
+    private static final int PIECE = 12;
 
     private PhasePortraitChart() {
     }
@@ -68,8 +73,8 @@ public final class PhasePortraitChart {
         legend.addSeries(stable);
         legend.addSeries(unstable);
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, true);
-        renderer.setSeriesPaint(0, X_NULLCLINE);
-        renderer.setSeriesPaint(1, Y_NULLCLINE);
+        renderer.setSeriesPaint(0, SpeciesPalette.species(xSpecies));
+        renderer.setSeriesPaint(1, SpeciesPalette.species(ySpecies));
         renderer.setSeriesStroke(0, new BasicStroke(2.4f));
         renderer.setSeriesStroke(1, new BasicStroke(2.4f));
         for (int s = 2; s < 4; s++) {
@@ -90,50 +95,66 @@ public final class PhasePortraitChart {
         xAxis.setRange(lower[0], upper[0]);
         yAxis.setRange(lower[1], upper[1]);
         XYPlot plot = new XYPlot(legend, xAxis, yAxis, renderer);
-        addArrows(plot, network, params, base, xSpecies, ySpecies, lower, upper);
+        addStreamlines(plot, network, params, base, xSpecies, ySpecies, lower, upper);
         for (double[] s : Contours.zeroLevel(xs, ys, fx)) {
-            plot.addAnnotation(new XYLineAnnotation(s[0], s[1], s[2], s[3], new BasicStroke(2.4f), X_NULLCLINE));
+            plot.addAnnotation(new XYLineAnnotation(s[0], s[1], s[2], s[3], new BasicStroke(2.4f), SpeciesPalette.species(xSpecies)));
         }
         for (double[] s : Contours.zeroLevel(xs, ys, fy)) {
-            plot.addAnnotation(new XYLineAnnotation(s[0], s[1], s[2], s[3], new BasicStroke(2.4f), Y_NULLCLINE));
+            plot.addAnnotation(new XYLineAnnotation(s[0], s[1], s[2], s[3], new BasicStroke(2.4f), SpeciesPalette.species(ySpecies)));
         }
-        return ChartStyle.chart("Phase portrait: nullclines and steady states", plot, true);
+        legend.addSeries(new XYSeries("streamlines (darker: faster flow)"));
+        renderer.setSeriesPaint(4, FAST);
+        renderer.setSeriesShapesVisible(4, false);
+        renderer.setSeriesStroke(4, new BasicStroke(1.6f));
+        return ChartStyle.chart("Phase portrait: nullclines, flow and steady states", plot, true);
     }
 
-    private static void addArrows(XYPlot plot, ReactionNetwork network, double[] params, double[] base, int xSpecies,
-            int ySpecies, double[] lower, double[] upper) {
-        int arrows = 21;
-        double wx = (upper[0] - lower[0]) / arrows;
-        double wy = (upper[1] - lower[1]) / arrows;
+    /**
+     * Streamlines of the flow, cut into short pieces shaded by speed on a log scale (darker and
+     * wider: faster), each line with an arrowhead halfway along showing the direction.
+     */
+    private static void addStreamlines(XYPlot plot, ReactionNetwork network, double[] params, double[] base,
+            int xSpecies, int ySpecies, double[] lower, double[] upper) {
         double[] work = new double[network.reactionCount()];
         double[] f = new double[network.speciesCount()];
-        BasicStroke stroke = new BasicStroke(1.0f);
-        for (int j = 0; j < arrows; j++) {
-            for (int i = 0; i < arrows; i++) {
-                double cx = lower[0] + (i + 0.5) * wx;
-                double cy = lower[1] + (j + 0.5) * wy;
-                double[] x = base.clone();
-                x[xSpecies] = cx;
-                x[ySpecies] = cy;
-                network.drift(x, params, f, work);
-                double ux = f[xSpecies] / wx;
-                double uy = f[ySpecies] / wy;
-                double norm = Math.hypot(ux, uy);
-                if (!(norm > 0)) {
-                    continue;
+        double[] x = base.clone();
+        List<Streamlines.Line> lines = Streamlines.trace((px, py, out) -> {
+            x[xSpecies] = px;
+            x[ySpecies] = py;
+            network.drift(x, params, f, work);
+            out[0] = f[xSpecies];
+            out[1] = f[ySpecies];
+        }, lower[0], upper[0], lower[1], upper[1], SEPARATION);
+        double[] logs = lines.stream().flatMapToDouble(l -> java.util.Arrays.stream(l.speeds()))
+                .map(Math::log).sorted().toArray();
+        if (logs.length == 0) {
+            return;
+        }
+        double lo = logs[(int) (0.05 * (logs.length - 1))];
+        double hi = logs[(int) (0.95 * (logs.length - 1))];
+        for (Streamlines.Line line : lines) {
+            int n = line.xs().length;
+            int middle = n / 2;
+            for (int start = 0; start < n - 1; start += PIECE) {
+                int end = Math.min(n - 1, start + PIECE);
+                boolean arrow = middle > start && middle <= end;
+                int stop = arrow ? middle : end;
+                double t = hi > lo ? (Math.log(line.speeds()[start]) - lo) / (hi - lo) : 0.5;
+                t = Math.max(0, Math.min(1, t));
+                Color shade = new Color(mix(SLOW.getRed(), FAST.getRed(), t), mix(SLOW.getGreen(), FAST.getGreen(), t),
+                        mix(SLOW.getBlue(), FAST.getBlue(), t));
+                float width = (float) (0.7 + 1.3 * t);
+                plot.addAnnotation(new FlowPath(java.util.Arrays.copyOfRange(line.xs(), start, stop + 1),
+                        java.util.Arrays.copyOfRange(line.ys(), start, stop + 1), shade, width, arrow), false);
+                if (arrow && stop < end) {
+                    plot.addAnnotation(new FlowPath(java.util.Arrays.copyOfRange(line.xs(), stop, end + 1),
+                            java.util.Arrays.copyOfRange(line.ys(), stop, end + 1), shade, width, false), false);
                 }
-                double dx = 0.4 * wx * ux / norm;
-                double dy = 0.4 * wy * uy / norm;
-                double tx = cx + dx;
-                double ty = cy + dy;
-                plot.addAnnotation(new XYLineAnnotation(cx - dx, cy - dy, tx, ty, stroke, ARROW));
-                double hx = -0.35 * dx;
-                double hy = -0.35 * dy;
-                plot.addAnnotation(new XYLineAnnotation(tx, ty, tx + hx - 0.5 * hy * wx / wy, ty + hy + 0.5 * hx * wy / wx,
-                        stroke, ARROW));
-                plot.addAnnotation(new XYLineAnnotation(tx, ty, tx + hx + 0.5 * hy * wx / wy, ty + hy - 0.5 * hx * wy / wx,
-                        stroke, ARROW));
             }
         }
+    }
+
+    private static int mix(int a, int b, double t) {
+        return (int) Math.round(a + (b - a) * t);
     }
 }

@@ -3,6 +3,7 @@ package org.fatefield.viz.chart;
 import java.awt.Color;
 import java.awt.Font;
 import org.jfree.chart.JFreeChart;
+import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.block.BlockBorder;
 import org.jfree.chart.plot.XYPlot;
@@ -17,12 +18,17 @@ public final class ChartStyle {
     public static final Font LABEL = new Font(Font.SANS_SERIF, Font.PLAIN, 14);
     /** Tick-label and annotation font. */
     public static final Font SMALL = new Font(Font.SANS_SERIF, Font.PLAIN, 12);
-    /** Colour of stable branches and attracting states. */
-    public static final Color STABLE = new Color(0x1F4E79);
-    /** Colour of unstable branches and states. */
-    public static final Color UNSTABLE = new Color(0xA23B2A);
-    /** Colour of marked special points. */
+    /**
+     * Colour of stable branches and attracting states: near-black, so that no branch is read as
+     * a fate (fates take the Okabe-Ito hues and grey; see FatePalette).
+     */
+    public static final Color STABLE = new Color(0x1A1A1A);
+    /** Colour of unstable branches and states (drawn dashed): a dark grey, distinct from fate grey. */
+    public static final Color UNSTABLE = new Color(0x5A5A5A);
+    /** Colour of marked special points (drawn as open diamonds). */
     public static final Color SPECIAL = new Color(0x111111);
+    /** Fill of the bistable range of the control parameter. */
+    public static final Color BISTABLE = new Color(0xEDE7F6);
 
     private ChartStyle() {
     }
@@ -33,8 +39,12 @@ public final class ChartStyle {
         plot.setDomainGridlinePaint(new Color(0xE0E0E0));
         plot.setRangeGridlinePaint(new Color(0xE0E0E0));
         plot.setOutlineVisible(false);
-        style(plot.getDomainAxis());
-        style(plot.getRangeAxis());
+        for (int i = 0; i < plot.getDomainAxisCount(); i++) {
+            style(plot.getDomainAxis(i));
+        }
+        for (int i = 0; i < plot.getRangeAxisCount(); i++) {
+            style(plot.getRangeAxis(i));
+        }
         JFreeChart chart = new JFreeChart(null, TITLE, plot, legend);
         chart.setTitle(new TextTitle(title, TITLE));
         chart.setBackgroundPaint(Color.WHITE);
@@ -45,10 +55,14 @@ public final class ChartStyle {
         return chart;
     }
 
-    private static void style(ValueAxis axis) {
+    /** Fonts, and at most {@link ModerateTickUnits#MAX_INTERVALS} tick intervals on a number axis. */
+    public static void style(ValueAxis axis) {
         if (axis != null) {
             axis.setLabelFont(LABEL);
             axis.setTickLabelFont(SMALL);
+            if (axis instanceof NumberAxis number) {
+                ModerateTickUnits.apply(number);
+            }
         }
     }
 }

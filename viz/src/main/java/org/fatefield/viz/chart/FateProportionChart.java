@@ -2,19 +2,13 @@ package org.fatefield.viz.chart;
 
 import java.awt.BasicStroke;
 import java.awt.Color;
-import java.awt.Font;
-import java.io.File;
-import java.io.IOException;
 import java.util.List;
 import org.fatefield.engine.record.TimeSeries;
 import org.fatefield.viz.palette.FatePalette;
-import org.jfree.chart.ChartUtils;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.axis.NumberAxis;
-import org.jfree.chart.block.BlockBorder;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
-import org.jfree.chart.title.TextTitle;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 
@@ -22,10 +16,6 @@ import org.jfree.data.xy.XYSeriesCollection;
  * Fraction of cells in each fate over time, with the population size on a second axis.
  */
 public final class FateProportionChart {
-
-    private static final Font TITLE = new Font(Font.SANS_SERIF, Font.BOLD, 18);
-    private static final Font LABEL = new Font(Font.SANS_SERIF, Font.PLAIN, 14);
-    private static final Font TICKS = new Font(Font.SANS_SERIF, Font.PLAIN, 12);
 
     private FateProportionChart() {
     }
@@ -66,6 +56,7 @@ public final class FateProportionChart {
         XYPlot plot = new XYPlot(fractions, time, fraction, fateLines);
         NumberAxis count = new NumberAxis("cells");
         count.setAutoRangeIncludesZero(true);
+        count.setStandardTickUnits(NumberAxis.createIntegerTickUnits());
         plot.setRangeAxis(1, count);
         plot.setDataset(1, population);
         plot.mapDatasetToRangeAxis(1, 1);
@@ -74,29 +65,6 @@ public final class FateProportionChart {
         populationLine.setSeriesStroke(0, new BasicStroke(1.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER,
                 10f, new float[] {6f, 5f}, 0f));
         plot.setRenderer(1, populationLine);
-        styleAxes(time, fraction, count);
-        plot.setBackgroundPaint(Color.WHITE);
-        plot.setDomainGridlinePaint(new Color(0xDDDDDD));
-        plot.setRangeGridlinePaint(new Color(0xDDDDDD));
-        plot.setOutlineVisible(false);
-
-        JFreeChart chart = new JFreeChart(null, TITLE, plot, true);
-        chart.setTitle(new TextTitle(title, TITLE));
-        chart.setBackgroundPaint(Color.WHITE);
-        chart.getLegend().setItemFont(LABEL);
-        chart.getLegend().setFrame(BlockBorder.NONE);
-        return chart;
-    }
-
-    private static void styleAxes(NumberAxis... axes) {
-        for (NumberAxis axis : axes) {
-            axis.setLabelFont(LABEL);
-            axis.setTickLabelFont(TICKS);
-        }
-    }
-
-    /** Writes {@code chart} as a PNG of {@code width x height} pixels. */
-    public static void writePng(JFreeChart chart, File file, int width, int height) throws IOException {
-        ChartUtils.saveChartAsPNG(file, chart, width, height);
+        return ChartStyle.chart(title, plot, true);
     }
 }

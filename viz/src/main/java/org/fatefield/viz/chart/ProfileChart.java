@@ -11,9 +11,6 @@ import org.jfree.chart.axis.NumberAxis;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
 import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
-import org.jfree.chart.ui.RectangleAnchor;
-import org.jfree.chart.ui.RectangleInsets;
-import org.jfree.chart.ui.TextAnchor;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
 
@@ -26,14 +23,15 @@ public final class ProfileChart {
     /**
      * @param x         bin centres (µm)
      * @param fractions {@code fractions[f][b]}
-     * @param simulated simulated boundary of the default fate (NaN for none)
+     * @param simulated simulated boundary of each fate (NaN where none is reported)
+     * @param committed best step fit of committed against default cells (NaN for none)
      * @param predicted predicted boundaries where the switch becomes bistable (µm)
      * @param fateCalls predicted positions where a stable state first meets a fate rule (µm)
      * @param singleCell noise-based predicted fractions {@code [f][b]} from single cells, drawn
      *                   dashed in each fate's colour, or null for none
      */
-    public static JFreeChart create(List<String> fates, double[] x, double[][] fractions, double simulated,
-            double[] predicted, double[] fateCalls, double[][] singleCell) {
+    public static JFreeChart create(List<String> fates, double[] x, double[][] fractions, double[] simulated,
+            double committed, double[] predicted, double[] fateCalls, double[][] singleCell) {
         XYSeriesCollection data = new XYSeriesCollection();
         XYLineAndShapeRenderer renderer = new XYLineAndShapeRenderer(true, false);
         for (int f = 0; f < fates.size(); f++) {
@@ -55,28 +53,30 @@ public final class ProfileChart {
                 }
             }
             data.addSeries(s);
-            int series = fates.size() + f;
+            int series = data.getSeriesCount() - 1;
             renderer.setSeriesPaint(series, FatePalette.fate(f, fates.size()));
-            renderer.setSeriesStroke(series, new BasicStroke(1.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
-                    new float[] {5f, 4f}, 0f));
+            renderer.setSeriesStroke(series, dashed(1.6f, 5f, 4f));
         }
         NumberAxis xAxis = new NumberAxis("x (µm), along the gradient");
         NumberAxis yAxis = new NumberAxis("fraction of cells");
         yAxis.setRange(0, 1);
         XYPlot plot = new XYPlot(data, xAxis, yAxis, renderer);
-        if (Double.isFinite(simulated)) {
-            ValueMarker m = marker(simulated, "simulated boundary", new BasicStroke(1.8f), ChartStyle.SPECIAL, 0);
-            // Left of its line, so it never overlaps the predicted labels, which sit to the right.
-            m.setLabelAnchor(RectangleAnchor.TOP_LEFT);
-            m.setLabelTextAnchor(TextAnchor.TOP_RIGHT);
-            m.setLabel(m.getLabel().trim() + " ");
-            plot.addDomainMarker(m);
+        // Boundary lines are named in the legend (by an empty series of the same look), never
+        // labelled on the plot, so no label covers a curve or another label.
+        for (int f = 0; f < fates.size() && f < simulated.length; f++) {
+            if (Double.isFinite(simulated[f])) {
+                line(plot, data, renderer, simulated[f], String.format(Locale.ROOT, "%s boundary %.0f µm (simulated)",
+                        fates.get(f), simulated[f]), new BasicStroke(2.2f), darker(FatePalette.fate(f, fates.size())));
+            }
         }
-        int row = 0;
+        if (Double.isFinite(committed)) {
+            line(plot, data, renderer, committed, String.format(Locale.ROOT, "committed boundary %.0f µm (simulated)",
+                    committed), dashed(2.2f, 10f, 3f), ChartStyle.SPECIAL);
+        }
         for (double p : predicted) {
             if (Double.isFinite(p)) {
-                plot.addDomainMarker(marker(p, "bistable from", new BasicStroke(1.8f, BasicStroke.CAP_BUTT,
-                        BasicStroke.JOIN_MITER, 10f, new float[] {6f, 4f}, 0f), ChartStyle.UNSTABLE, row++));
+                line(plot, data, renderer, p, String.format(Locale.ROOT, "bistable from %.0f µm (predicted)", p),
+                        dashed(1.8f, 6f, 4f), ChartStyle.UNSTABLE);
             }
         }
         double previous = Double.NaN;
@@ -86,20 +86,27 @@ public final class ProfileChart {
                 continue;
             }
             previous = p;
-            plot.addDomainMarker(marker(p, "fate rule met", new BasicStroke(1.8f, BasicStroke.CAP_BUTT,
-                    BasicStroke.JOIN_MITER, 10f, new float[] {2f, 3f}, 0f), ChartStyle.UNSTABLE, row++));
+            line(plot, data, renderer, p, String.format(Locale.ROOT, "fate rule met at %.0f µm (predicted)", p),
+                    dashed(1.8f, 2f, 3f), ChartStyle.UNSTABLE);
         }
         return ChartStyle.chart("Fate profile along the gradient", plot, true);
     }
 
-    /** A vertical line with its label to the right, {@code row} label heights below the top. */
-    private static ValueMarker marker(double x, String label, BasicStroke stroke, Color colour, int row) {
-        ValueMarker marker = new ValueMarker(x, colour, stroke);
-        marker.setLabelOffset(new RectangleInsets(3 + 18 * row, 3, 3, 3));
-        marker.setLabel(String.format(Locale.ROOT, " %s %.0f µm", label, x));
-        marker.setLabelFont(ChartStyle.SMALL);
-        marker.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
-        marker.setLabelTextAnchor(TextAnchor.TOP_LEFT);
-        return marker;
+    private static void line(XYPlot plot, XYSeriesCollection data, XYLineAndShapeRenderer renderer, double x,
+            String name, BasicStroke stroke, Color colour) {
+        plot.addDomainMarker(new ValueMarker(x, colour, stroke));
+        data.addSeries(new XYSeries(name, false, true));
+        int series = data.getSeriesCount() - 1;
+        renderer.setSeriesPaint(series, colour);
+        renderer.setSeriesStroke(series, stroke);
+    }
+
+    private static BasicStroke dashed(float width, float on, float off) {
+        return new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f, new float[] {on, off}, 0f);
+    }
+
+    /** A fate colour darkened, so its boundary line stands out from its fraction curve. */
+    private static Color darker(Color c) {
+        return new Color(c.getRed() * 3 / 5, c.getGreen() * 3 / 5, c.getBlue() * 3 / 5);
     }
 }

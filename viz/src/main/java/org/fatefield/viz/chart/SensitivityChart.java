@@ -36,8 +36,7 @@ public final class SensitivityChart {
         categories.setTickLabelFont(ChartStyle.SMALL);
         categories.setLabelFont(ChartStyle.LABEL);
         NumberAxis axis = new NumberAxis("change in " + metric + " per relative change");
-        axis.setLabelFont(ChartStyle.LABEL);
-        axis.setTickLabelFont(ChartStyle.SMALL);
+        ChartStyle.style(axis);
         CategoryPlot plot = new CategoryPlot(data, categories, axis, renderer);
         plot.setOrientation(PlotOrientation.HORIZONTAL);
         plot.setBackgroundPaint(Color.WHITE);

@@ -1,13 +1,15 @@
 package org.fatefield.viz.live;
 
+import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Graphics2D;
+import java.awt.Stroke;
 import java.awt.geom.Ellipse2D;
 import org.fatefield.engine.cell.Cell;
 import sim.portrayal.DrawInfo2D;
 import sim.portrayal.SimplePortrayal2D;
 
-/** Draws one cell as a disc of its radius, coloured by the window's current colour mode. */
+/** Draws one cell as a disc of its radius, coloured by the window's current colour mode; the selected cell is ringed. */
 final class CellPortrayal extends SimplePortrayal2D {
 
     private static final long serialVersionUID = 1L;
@@ -30,8 +32,21 @@ final class CellPortrayal extends SimplePortrayal2D {
         g.setColor(gui.colourOf(cell));
         g.fill(disc);
         if (w > 4) {
-            g.setColor(cell.id() == gui.selectedId() ? SELECTED : OUTLINE);
+            g.setColor(OUTLINE);
             g.draw(disc);
+        }
+        if (cell.id() == gui.selectedId()) {
+            // A white ring inside a black one, a few pixels out: visible on every fill and field colour.
+            double pad = Math.max(5, 0.5 * w);
+            Ellipse2D ring = new Ellipse2D.Double(disc.getX() - pad, disc.getY() - pad, w + 2 * pad, h + 2 * pad);
+            Stroke before = g.getStroke();
+            g.setStroke(new BasicStroke(4f));
+            g.setColor(Color.WHITE);
+            g.draw(ring);
+            g.setStroke(new BasicStroke(2f));
+            g.setColor(SELECTED);
+            g.draw(ring);
+            g.setStroke(before);
         }
     }
 

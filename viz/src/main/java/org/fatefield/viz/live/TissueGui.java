@@ -6,6 +6,7 @@ import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.field.MorphogenField;
 import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.viz.palette.FatePalette;
+import org.fatefield.viz.palette.SpeciesPalette;
 import sim.display.GUIState;
 import sim.field.continuous.Continuous2D;
 import sim.field.grid.DoubleGrid2D;
@@ -26,9 +27,9 @@ public final class TissueGui extends GUIState {
     public enum ColourMode {
         /** By fate, the default fate in grey. */
         FATE,
-        /** By the level of the first species, light to dark. */
-        FIRST_SPECIES,
-        /** By clone (descendants of one founder). */
+        /** By the level of one species (see {@link #setSpecies}), light to dark in its colour. */
+        SPECIES,
+        /** By clone (descendants of one founder), in colours no fate uses. */
         CLONE,
         /**
          * By commitment: the fate's colour, pale when the cell has only just entered it and full
@@ -40,9 +41,6 @@ public final class TissueGui extends GUIState {
     /** Samples of history kept per cell for the clicked cell's trace. */
     static final int TRACE_SAMPLES = 400;
 
-    private static final Color[] CLONE_COLOURS = {new Color(0xE69F00), new Color(0x56B4E9), new Color(0x009E73),
-        new Color(0xF0E442), new Color(0x0072B2), new Color(0xD55E00), new Color(0xCC79A7), new Color(0x999999)};
-
     private final Tissue tissue;
     private final Continuous2D space;
     private final ContinuousPortrayal2D cellPortrayal = new ContinuousPortrayal2D();
@@ -51,6 +49,7 @@ public final class TissueGui extends GUIState {
     private ColourMode mode = ColourMode.FATE;
     /** Id of the selected cell, or -1: cells are followed by id, as relocation replaces their objects. */
     private long selectedId = -1;
+    private int species;
     private double speciesMax = 1;
     private double fieldMax = 1e-12;
     private CellTraces traces;
@@ -129,7 +128,7 @@ public final class TissueGui extends GUIState {
         double max = 1e-12;
         for (Cell cell : tissue.cells()) {
             space.setObjectLocation(cell, new Double2D(cell.x(), height - cell.y()));
-            max = Math.max(max, cell.concentration(0));
+            max = Math.max(max, cell.concentration(species));
         }
         speciesMax = max;
         MorphogenField f = tissue.field();
@@ -146,22 +145,53 @@ public final class TissueGui extends GUIState {
         int fates = tissue.spec().fates().fateCount();
         return switch (mode) {
             case FATE -> FatePalette.fate(Math.max(0, cell.fate()), fates);
-            case FIRST_SPECIES -> shade(cell.concentration(0) / speciesMax);
-            case CLONE -> CLONE_COLOURS[(int) (tissue.ancestry().founder(cell.id()) % CLONE_COLOURS.length)];
+            case SPECIES -> SpeciesPalette.level(species, cell.concentration(species) / speciesMax);
+            case CLONE -> SpeciesPalette.clone(tissue.ancestry().founder(cell.id()));
             case COMMITMENT -> cell.fate() < 0 ? FatePalette.fate(fates - 1, fates)
                     : FatePalette.held(cell.fate(), fates,
                             (tissue.time() - cell.fateSince()) / tissue.spec().growth().cycle().mean());
         };
     }
 
-    private static Color shade(double t) {
-        double s = Math.max(0, Math.min(1, t));
-        return new Color((int) (235 - 200 * s), (int) (235 - 160 * s), (int) (245 - 120 * s));
-    }
-
     /** Sets the colour mode. */
     public void setMode(ColourMode value) {
         this.mode = value;
+    }
+
+    /** The colour mode. */
+    public ColourMode mode() {
+        return mode;
+    }
+
+    /**
+     * Sets the species shown in {@link ColourMode#SPECIES} mode.
+     *
+     * @throws IllegalArgumentException if there is no such species
+     */
+    public void setSpecies(int index) {
+        int count = tissue.spec().circuit().network().speciesNames().size();
+        if (index < 0 || index >= count) {
+            throw new IllegalArgumentException("species index must be from 0 to " + (count - 1) + ", got " + index);
+        }
+        this.species = index;
+        if (grid != null) {
+            sync();
+        }
+    }
+
+    /** The species shown in species mode. */
+    public int species() {
+        return species;
+    }
+
+    /** Highest level of the shown species among live cells (the top of its colour bar). */
+    public double speciesMax() {
+        return speciesMax;
+    }
+
+    /** Highest morphogen level on the grid (the top of its colour bar). */
+    public double fieldMax() {
+        return fieldMax;
     }
 
     /** The selected cell if it is still alive, else null. */

@@ -37,9 +37,7 @@ import org.fatefield.circuits.analysis.QuasiPotential;
 import org.fatefield.circuits.analysis.continuation.Branch;
 import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.tissue.Tissue;
-import org.fatefield.viz.analysis.GridMapChart;
 import org.fatefield.viz.chart.FateProportionChart;
-import org.fatefield.viz.palette.FatePalette;
 import org.jfree.chart.ChartPanel;
 import sim.display.Display2D;
 import sim.portrayal.LocationWrapper;
@@ -57,19 +55,29 @@ import sim.util.Bag;
 public final class TissueWindow extends JFrame {
 
     private static final long serialVersionUID = 1L;
-    /** Landscape values above this (in units of -ln P) share the top colour. */
-    private static final double LANDSCAPE_CEILING = 12;
 
     private final Function<String, Tissue> factory;
     private final JTextField settings = new JTextField(28);
     private final List<Branch> branches;
     private final String parameter;
-    private final DoubleFunction<QuasiPotential> landscape;
-    private final ChartPanel landscapePanel = new ChartPanel(null);
-    private double landscapeAt = Double.NaN;
+    private final LandscapeView landscapes;
     private TissueGui gui;
     private Display2D display;
-    private final JPanel canvasHolder = new JPanel(new BorderLayout());
+    private final JPanel canvasHolder = new JPanel(new BorderLayout()) {
+        private static final long serialVersionUID = 1L;
+
+        /** The full width of the left column, at the tissue's aspect (at most 3/4 of the window's height). */
+        @Override
+        public Dimension getPreferredSize() {
+            int width = getParent() != null && getParent().getWidth() > 0 ? getParent().getWidth() : 820;
+            if (gui == null) {
+                return new Dimension(width, 420);
+            }
+            double aspect = gui.tissue().spec().height() / gui.tissue().spec().width();
+            int limit = TissueWindow.this.getHeight() > 0 ? TissueWindow.this.getHeight() * 3 / 4 : 620;
+            return new Dimension(width, Math.min(limit, (int) Math.ceil(width * aspect) + 8));
+        }
+    };
     private final JTextArea info = new JTextArea(8, 28);
     private final JLabel status = new JLabel(" ");
     private final JPanel chartHolder = new JPanel(new GridLayout(2, 2));
@@ -78,7 +86,9 @@ public final class TissueWindow extends JFrame {
     private final JSlider speed = new JSlider(1, 50, 5);
     private final JSlider zoom = new JSlider(10, 80, 10);
     private final JCheckBox showField = new JCheckBox("morphogen", true);
-    private final JComboBox<TissueGui.ColourMode> colour = new JComboBox<>(TissueGui.ColourMode.values());
+    private final JComboBox<ColourChoice> colour = new JComboBox<>();
+    private final JLabel settingsProblem = new JLabel(" ");
+    private final LegendStrip legendStrip = new LegendStrip(() -> gui, this::pixelsPerMicron, showField::isSelected);
     private final Timer timer;
 
     /**
@@ -96,7 +106,7 @@ public final class TissueWindow extends JFrame {
         this.factory = factory;
         this.branches = branches;
         this.parameter = parameter;
-        this.landscape = landscape;
+        this.landscapes = new LandscapeView(landscape, parameter, branches);
         setDefaultCloseOperation(DISPOSE_ON_CLOSE);
         addWindowListener(new WindowAdapter() {
             @Override
@@ -127,11 +137,16 @@ public final class TissueWindow extends JFrame {
         quit.addActionListener(e -> close());
         getRootPane().registerKeyboardAction(e -> close(),
                 KeyStroke.getKeyStroke(KeyEvent.VK_Q, InputEvent.CTRL_DOWN_MASK), JComponent.WHEN_IN_FOCUSED_WINDOW);
+        ColourChoice.all(factory.apply("").spec().circuit().network().speciesNames()).forEach(colour::addItem);
         colour.addActionListener(e -> {
-            gui.setMode((TissueGui.ColourMode) colour.getSelectedItem());
+            applyColour();
             display.repaint();
+            legendStrip.repaint();
         });
-        showField.addActionListener(e -> attach());
+        showField.addActionListener(e -> {
+            attach();
+            legendStrip.repaint();
+        });
         JPanel controls = new JPanel();
         controls.add(play);
         controls.add(step);
@@ -144,6 +159,7 @@ public final class TissueWindow extends JFrame {
         zoom.addChangeListener(e -> {
             display.setScale(zoom.getValue() / 10.0);
             display.repaint();
+            legendStrip.repaint();
         });
         controls.add(new JLabel("colour by"));
         controls.add(colour);
@@ -151,42 +167,36 @@ public final class TissueWindow extends JFrame {
         JPanel edits = new JPanel();
         edits.add(new JLabel("settings for the next reset (key = value; ...)"));
         edits.add(settings);
+        settingsProblem.setForeground(new Color(0xB00020));
+        edits.add(settingsProblem);
         JPanel top = new JPanel(new GridLayout(2, 1));
         top.add(controls);
         top.add(edits);
         info.setEditable(false);
         info.setBorder(BorderFactory.createTitledBorder("clicked cell"));
-        JPanel side = new JPanel(new BorderLayout());
-        side.add(chartHolder, BorderLayout.CENTER);
-        side.add(info, BorderLayout.SOUTH);
-        side.setPreferredSize(new Dimension(760, 700));
+        chartHolder.setPreferredSize(new Dimension(760, 700));
+        // The tissue takes the width of the left column at its own aspect, so no empty band
+        // surrounds it; the legend and the clicked cell's text fill the rest of the column.
+        JPanel below = new JPanel(new BorderLayout());
+        below.add(legendStrip, BorderLayout.NORTH);
+        below.add(info, BorderLayout.CENTER);
+        JPanel left = new JPanel(new BorderLayout());
+        left.add(canvasHolder, BorderLayout.NORTH);
+        left.add(below, BorderLayout.CENTER);
         JPanel south = new JPanel(new BorderLayout());
         south.add(status, BorderLayout.WEST);
-        south.add(legend(), BorderLayout.EAST);
         add(top, BorderLayout.NORTH);
-        add(canvasHolder, BorderLayout.CENTER);
+        add(left, BorderLayout.CENTER);
         canvasHolder.addComponentListener(new ComponentAdapter() {
             @Override
             public void componentResized(ComponentEvent e) {
                 fitCanvas();
             }
         });
-        add(side, BorderLayout.EAST);
+        add(chartHolder, BorderLayout.EAST);
         add(south, BorderLayout.SOUTH);
         reset();
         pack();
-    }
-
-    private JPanel legend() {
-        Tissue t = factory.apply("");
-        List<String> fates = t.spec().fates().fateNames();
-        JPanel legend = new JPanel();
-        for (int f = 0; f < fates.size(); f++) {
-            JLabel label = new JLabel("\u25CF " + fates.get(f));
-            label.setForeground(FatePalette.fate(f, fates.size()));
-            legend.add(label);
-        }
-        return legend;
     }
 
     /** Starts a fresh tissue with the current settings. */
@@ -196,11 +206,16 @@ public final class TissueWindow extends JFrame {
         try {
             tissue = factory.apply(settings.getText());
         } catch (IllegalArgumentException e) {
-            status.setText("  settings not applied: " + e.getMessage());
+            String message = e.getMessage() == null ? "not a valid setting" : e.getMessage();
+            settingsProblem.setText("not applied: " + (message.length() > 90 ? message.substring(0, 88) + "…" : message));
+            settingsProblem.setToolTipText(message);
             if (gui != null) {
                 return;
             }
             tissue = factory.apply("");
+        }
+        if (!settings.getText().isBlank() && tissue != null) {
+            settingsProblem.setText(" ");
         }
         if (gui != null) {
             gui.finish();
@@ -229,12 +244,11 @@ public final class TissueWindow extends JFrame {
         proportions = new ChartPanel(FateProportionChart.create(tissue.series(), "Fate proportions"));
         chartHolder.removeAll();
         chartHolder.add(proportions);
-        chartHolder.add(landscapePanel);
+        chartHolder.add(landscapes.panel());
         chartHolder.add(new ChartPanel(charts.phase()));
         chartHolder.add(new ChartPanel(charts.trace()));
-        gui.setMode((TissueGui.ColourMode) colour.getSelectedItem());
-        landscapeAt = Double.NaN;
-        showLandscape(middleOfBranches());
+        applyColour();
+        landscapes.showMiddle(species());
         refresh();
         revalidate();
         SwingUtilities.invokeLater(this::fitCanvas);
@@ -285,6 +299,7 @@ public final class TissueWindow extends JFrame {
         status.setText(String.format(Locale.ROOT, "  t = %.2f h, %d cells", t.time(), t.cells().size()));
         proportions.setChart(FateProportionChart.create(t.series(), "Fate proportions"));
         charts.update(t);
+        legendStrip.repaint();
         describeSelection();
         display.repaint();
     }
@@ -307,36 +322,9 @@ public final class TissueWindow extends JFrame {
     private void landscapeForSelection() {
         Cell c = gui.selected();
         if (c != null) {
-            showLandscape(gui.tissue().spec().mapping().controlAt(gui.tissue().signalAt(c)));
+            landscapes.show(gui.tissue().spec().mapping().controlAt(gui.tissue().signalAt(c)), "clicked cell's local value",
+                    species());
         }
-    }
-
-    private double middleOfBranches() {
-        double lo = Double.POSITIVE_INFINITY;
-        double hi = Double.NEGATIVE_INFINITY;
-        for (Branch b : branches) {
-            for (var p : b.points()) {
-                lo = Math.min(lo, p.parameter());
-                hi = Math.max(hi, p.parameter());
-            }
-        }
-        return lo <= hi ? 0.5 * (lo + hi) : Double.NaN;
-    }
-
-    /** Draws the landscape at control value {@code value} (unless it is already shown). */
-    private void showLandscape(double value) {
-        if (landscape == null || Double.isNaN(value) || value == landscapeAt) {
-            if (landscape == null) {
-                landscapePanel.setChart(null);
-            }
-            return;
-        }
-        landscapeAt = value;
-        QuasiPotential u = landscape.apply(value);
-        List<String> species = gui.tissue().spec().circuit().network().speciesNames();
-        landscapePanel.setChart(GridMapChart.landscape(u.xs(), u.ys(), u.u(), LANDSCAPE_CEILING, species.get(0),
-                species.size() > 1 ? species.get(1) : "", String.format(Locale.ROOT, "Landscape at %s = %.3f",
-                        parameter, value)));
     }
 
     private void describeSelection() {
@@ -352,32 +340,37 @@ public final class TissueWindow extends JFrame {
                     gui.selectedId()));
             return;
         }
-        List<String> species = t.spec().circuit().network().speciesNames();
-        StringBuilder s = new StringBuilder();
-        s.append(String.format(Locale.ROOT, "cell %d, generation %d, mother %d, founder %d%n", c.id(), c.generation(),
-                c.parentId(), t.ancestry().founder(c.id())));
-        s.append(String.format(Locale.ROOT, "at (%.1f, %.1f) µm, age %.2f h of %.2f h%n", c.x(), c.y(), c.age(t.time()),
-                c.cycleTime()));
-        for (int i = 0; i < species.size(); i++) {
-            s.append(String.format(Locale.ROOT, "%s = %.3f%n", species.get(i), c.concentration(i)));
-        }
-        s.append(String.format(Locale.ROOT, "morphogen %.3f, %s = %.3f%n", t.signalAt(c), parameter,
-                t.spec().mapping().controlAt(t.signalAt(c))));
-        var extrinsic = t.spec().extrinsic();
-        for (int k = 0; k < extrinsic.size(); k++) {
-            s.append(String.format(Locale.ROOT, "own %s: × %.3f (inherited)%n", extrinsic.get(k).label(),
-                    extrinsic.get(k).factor(c.scores()[k])));
-        }
-        s.append("fate: ").append(c.fate() >= 0 ? t.spec().fates().fateNames().get(c.fate()) : "not yet classified");
-        if (c.fate() >= 0 && Double.isFinite(c.fateSince())) {
-            s.append(String.format(Locale.ROOT, " since t = %.2f h", c.fateSince()));
-        }
-        info.setText(s.toString());
+        info.setText(CellDescription.of(t, c, parameter));
     }
 
-    /** Switches the colour mode as if chosen in the "colour by" list. */
+    private List<String> species() {
+        return gui.tissue().spec().circuit().network().speciesNames();
+    }
+
+    /** Switches the colour mode as if chosen in the "colour by" list (species mode: the first species). */
     public void setColourMode(TissueGui.ColourMode mode) {
-        colour.setSelectedItem(mode);
+        for (int k = 0; k < colour.getItemCount(); k++) {
+            if (colour.getItemAt(k).mode() == mode) {
+                colour.setSelectedIndex(k);
+                return;
+            }
+        }
+    }
+
+    private void applyColour() {
+        ColourChoice choice = (ColourChoice) colour.getSelectedItem();
+        if (choice != null && gui != null) {
+            gui.setSpecies(choice.species());
+            gui.setMode(choice.mode());
+        }
+    }
+
+    /** Screen pixels per µm of the tissue at the current zoom (for the scale bar). */
+    private double pixelsPerMicron() {
+        if (display == null || gui == null) {
+            return 0;
+        }
+        return display.insideDisplay.width * display.getScale() / gui.tissue().spec().width();
     }
 
     /** Selects {@code cell} as if it had been clicked (for scripted screenshots and tests). */

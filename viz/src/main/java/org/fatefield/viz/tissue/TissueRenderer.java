@@ -143,7 +143,7 @@ public final class TissueRenderer {
         int barTop = row + 30;
         int barHeight = Math.max(60, Math.min(160, TOP + plotHeight - barTop));
         g.setFont(LABEL);
-        g.drawString(fieldName, x, barTop - 10);
+        g.drawString(fieldName + " (a.u.)", x, barTop - 10);
         for (int k = 0; k < barHeight; k++) {
             g.setColor(FatePalette.morphogen(1.0 - (double) k / (barHeight - 1)));
             g.fillRect(x, barTop + k, 18, 1);
