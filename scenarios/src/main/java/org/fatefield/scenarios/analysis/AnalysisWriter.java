@@ -1,5 +1,6 @@
 package org.fatefield.scenarios.analysis;
 
+import java.awt.Color;
 import java.io.IOException;
 import java.io.Writer;
 import java.util.ArrayList;
@@ -19,6 +20,7 @@ import org.fatefield.circuits.model.ReactionNetwork;
 import org.fatefield.circuits.study.AnalysisPlan;
 import org.fatefield.circuits.study.AnalysisResult;
 import org.fatefield.circuits.study.CircuitAnalysis;
+import org.fatefield.engine.fate.FateClassifier;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.output.RunTables;
 import org.fatefield.viz.analysis.BifurcationDiagramChart;
@@ -26,6 +28,8 @@ import org.fatefield.viz.analysis.BistableRegionChart;
 import org.fatefield.viz.analysis.GridMapChart;
 import org.fatefield.viz.analysis.PhasePortraitChart;
 import org.fatefield.viz.chart.ChartFiles;
+import org.fatefield.viz.chart.FigureFormat;
+import org.fatefield.viz.palette.FatePalette;
 import org.hipparchus.complex.Complex;
 import org.jfree.chart.JFreeChart;
 
@@ -38,10 +42,18 @@ public final class AnalysisWriter {
     private final AnalysisPlan plan;
     private final List<String> species;
     private final List<String> written = new ArrayList<>();
+    private final FateClassifier fates;
+    private final FigureFormat format;
 
-    /** A writer into {@code folder}. */
-    public AnalysisWriter(RunFolder folder, ReactionNetwork network, AnalysisPlan plan) {
+    /**
+     * A writer into {@code folder}; attractors are named and coloured by the fate {@code fates}
+     * gives them, and figures are written in {@code format}.
+     */
+    public AnalysisWriter(RunFolder folder, ReactionNetwork network, AnalysisPlan plan, FateClassifier fates,
+            FigureFormat format) {
         this.folder = folder;
+        this.fates = fates;
+        this.format = format;
         this.network = network;
         this.plan = plan;
         this.species = network.speciesNames();
@@ -76,18 +88,27 @@ public final class AnalysisWriter {
         figure("phase-portrait", PhasePortraitChart.create(network, analysis.parametersAt(plan.at()),
                 new double[species.size()], plan.xSpecies(), plan.ySpecies(), new double[2],
                 new double[] {upper[plan.xSpecies()], upper[plan.ySpecies()]}, result.steadyStates()));
-        String[] names = result.basins().attractors().stream().map(s -> describe(s.state())).toArray(String[]::new);
+        var attractors = result.basins().attractors();
+        String[] names = new String[attractors.size()];
+        Color[] colours = new Color[attractors.size()];
+        for (int k = 0; k < names.length; k++) {
+            int fate = fates.classify(attractors.get(k).state());
+            names[k] = fates.fateNames().get(fate) + " " + describe(attractors.get(k).state());
+            colours[k] = FatePalette.fate(fate, fates.fateCount());
+        }
+        String where = plan.parameter() + " = " + RunTables.number(plan.at())
+                + (plan.at() == 0.5 * (plan.min() + plan.max()) ? " (middle of the range)" : "");
         figure("basins", GridMapChart.basins(result.basins().xs(), result.basins().ys(), result.basins().attractor(),
-                names, xName, yName));
+                names, colours, xName + " (concentration)", yName + " (concentration)"));
         figure("landscape", GridMapChart.landscape(result.landscape().xs(), result.landscape().ys(),
-                result.landscape().u(), 8, xName, yName, "Quasi-potential landscape at " + plan.parameter() + " = "
-                        + RunTables.number(plan.at())));
+                result.landscape().u(), GridMapChart.LANDSCAPE_CEILING, xName + " (concentration)",
+                yName + " (concentration)", "Landscape at " + where));
         double[][] along = new double[result.parameterValues().length][];
         for (int k = 0; k < along.length; k++) {
             along[k] = result.alongParameter().get(k).u()[0];
         }
         figure("landscape-along-parameter", GridMapChart.landscape(result.alongParameter().get(0).xs(),
-                result.parameterValues(), along, 8, xName, plan.parameter(),
+                result.parameterValues(), along, GridMapChart.LANDSCAPE_CEILING, xName + " (concentration)", plan.parameter(),
                 "Landscape along " + plan.parameter() + " (one row per value)"));
     }
 
@@ -277,8 +298,8 @@ public final class AnalysisWriter {
     }
 
     private void figure(String name, JFreeChart chart) throws IOException {
-        folder.write(name + ".png", out -> ChartFiles.png(chart, 960, 640, out));
-        folder.write(name + ".svg", out -> ChartFiles.svg(chart, 960, 640, out));
+        folder.write(name + ".png", out -> ChartFiles.png(chart, 960, 640, format, out));
+        folder.write(name + ".svg", out -> ChartFiles.svg(chart, 960, 640, format, out));
         written.addAll(Arrays.asList(name + ".png", name + ".svg"));
     }
 }

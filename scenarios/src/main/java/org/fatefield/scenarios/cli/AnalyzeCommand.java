@@ -112,6 +112,9 @@ final class AnalyzeCommand implements Callable<Integer> {
     @Mixin
     private SharedOptions.Force force;
 
+    @Mixin
+    private FigureOptions figures;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
@@ -154,7 +157,8 @@ final class AnalyzeCommand implements Callable<Integer> {
                         + " where its rates stay finite, such as the coupling's range");
                 return FatefieldCommand.INVALID_INPUT;
             }
-            AnalysisWriter writer = new AnalysisWriter(RunFolder.open(folder), network, plan);
+            AnalysisWriter writer = new AnalysisWriter(RunFolder.open(folder), network, plan,
+                    loaded.tissue().fates(), figures.format());
             writer.write(result, analysis);
             PrintWriter o = spec.commandLine().getOut();
             int specials = result.branches().stream().mapToInt(b -> b.specials().size()).sum();

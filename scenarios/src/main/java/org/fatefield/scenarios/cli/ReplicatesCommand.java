@@ -6,10 +6,10 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.fatefield.scenarios.format.Scenario;
+import org.fatefield.scenarios.output.ReplicateSet;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.output.RunFolderReader;
 import org.fatefield.scenarios.output.RunLayout;
-import org.fatefield.scenarios.output.ReplicateSet;
 import org.fatefield.scenarios.output.RunRequest;
 import org.fatefield.scenarios.output.ScenarioRunner;
 import picocli.CommandLine.Command;
@@ -46,6 +46,9 @@ final class ReplicatesCommand implements Callable<Integer> {
     @Mixin
     private SharedOptions.Confirm confirm;
 
+    @Mixin
+    private FigureOptions figures;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
@@ -74,7 +77,8 @@ final class ReplicatesCommand implements Callable<Integer> {
                 Path folder = out.resolve(RunLayout.replicateFolder(s));
                 RunFolderReader done = RunFolderReader.of(folder);
                 if (!done.finished()) {
-                    ScenarioRunner.run(RunRequest.of(loaded, folder).withSeed(s).withThreads(workers).withForce(true));
+                    ScenarioRunner.run(RunRequest.of(loaded, folder).withSeed(s).withThreads(workers).withForce(true)
+                            .withFigures(figures.format()));
                 }
                 set.add(s, done.metrics());
                 err.printf("replicate %d/%d (seed %d) done%n", r + 1, runs, s);

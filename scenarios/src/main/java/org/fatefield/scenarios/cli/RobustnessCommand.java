@@ -8,11 +8,12 @@ import java.util.List;
 import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.apache.commons.csv.CSVPrinter;
-import org.fatefield.scenarios.format.Scenario;
-import org.fatefield.scenarios.output.RunFolder;
-import org.fatefield.scenarios.output.RunTables;
 import org.fatefield.engine.robustness.Perturbation;
 import org.fatefield.engine.robustness.RobustnessAnalysis;
+import org.fatefield.scenarios.format.Scenario;
+import org.fatefield.scenarios.output.AxisWords;
+import org.fatefield.scenarios.output.RunFolder;
+import org.fatefield.scenarios.output.RunTables;
 import org.fatefield.viz.chart.ChartFiles;
 import org.fatefield.viz.chart.SensitivityChart;
 import picocli.CommandLine.Command;
@@ -53,6 +54,9 @@ final class RobustnessCommand implements Callable<Integer> {
 
     @Mixin
     private SharedOptions.Threads threads;
+
+    @Mixin
+    private FigureOptions figures;
 
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
@@ -101,12 +105,15 @@ final class RobustnessCommand implements Callable<Integer> {
             double[] values = new double[shown.size()];
             double[] halves = new double[shown.size()];
             for (int i = 0; i < shown.size(); i++) {
-                names.add(shown.get(i).perturbation());
+                String name = shown.get(i).perturbation();
+                names.add(name.contains(".") ? AxisWords.key(name) : name);
                 values[i] = Double.isFinite(shown.get(i).sensitivity()) ? shown.get(i).sensitivity() : 0;
                 halves[i] = 0.5 * (shown.get(i).high95() - shown.get(i).low95());
             }
-            folder.write("robustness.png", o -> ChartFiles.png(SensitivityChart.create(chosen, fraction, names, values,
-                    halves), 960, Math.max(400, 60 + 28 * names.size()), o));
+            var chart = SensitivityChart.create(AxisWords.metric(chosen), fraction, names, values, halves);
+            int height = Math.max(400, 60 + 28 * names.size());
+            folder.write("robustness.png", o -> ChartFiles.png(chart, 960, height, figures.format(), o));
+            folder.write("robustness.svg", o -> ChartFiles.svg(chart, 960, height, figures.format(), o));
             spec.commandLine().getOut().printf("%d perturbations x 2 x %d replicates; results are in %s%n",
                     perturbations.size(), replicates, out.toAbsolutePath().normalize());
             return 0;

@@ -48,6 +48,9 @@ final class RunCommand implements Callable<Integer> {
     @Mixin
     private SharedOptions.Confirm confirm;
 
+    @Mixin
+    private FigureOptions figures;
+
     @Option(names = "--checkpoint-every", paramLabel = "HOURS", description = "save a checkpoint every HOURS of"
             + " simulated time, so a killed run can be resumed (default: never)")
     private Double checkpointEvery;
@@ -86,7 +89,7 @@ final class RunCommand implements Callable<Integer> {
             loaded = ScenarioArgument.load(scenario);
         } catch (ScenarioException e) {
             err.println(e.getMessage());
-            err.println("Nothing was run. Fix the lines above (see: fatefield keys), then run again.");
+            err.println("Nothing was run. Fix the lines above (see: fatefield scenario-help), then run again.");
             return FatefieldCommand.INVALID_INPUT;
         }
         if (!confirm.allows(spec, loaded)) {
@@ -134,7 +137,7 @@ final class RunCommand implements Callable<Integer> {
                     .withThreads(threads.resolveFor(loaded)).withForce(force.given()).withProgress(progress)
                     .withCheckpointSteps(every).withResume(resume).withFrameSteps(frameSteps)
                     .withSnapshots(!snapshots ? SnapshotFormat.NONE : vtk ? SnapshotFormat.TABLES_AND_VTK
-                            : SnapshotFormat.TABLES));
+                            : SnapshotFormat.TABLES).withFigures(figures.format()));
             if (!quiet) {
                 TimeSeries.Row last = tissue.series().last();
                 List<String> fates = tissue.series().fateNames();

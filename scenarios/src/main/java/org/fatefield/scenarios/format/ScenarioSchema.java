@@ -5,7 +5,7 @@ import java.util.Optional;
 
 /**
  * Every section and key of the scenario format, with units and defaults: the single source for
- * validation and for the reference page ({@code fatefield keys}).
+ * validation and for the reference page ({@code fatefield scenario-help}).
  *
  * <p>Units: length µm, time h, concentrations dimensionless (the circuit's own unit, which the
  * system size converts to molecules).

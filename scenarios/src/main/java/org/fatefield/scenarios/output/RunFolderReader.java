@@ -75,6 +75,20 @@ public final class RunFolderReader {
         return Files.exists(run.resolve(name));
     }
 
+    /** Cells in each of {@code fates} at the last record time ({@code timeseries.csv}'s last row). */
+    public long[] finalCounts(List<String> fates) throws IOException {
+        List<CSVRecord> records = RunTables.records(run.resolve(RunLayout.TIMESERIES));
+        long[] counts = new long[fates.size()];
+        if (records.isEmpty()) {
+            return counts;
+        }
+        CSVRecord last = records.get(records.size() - 1);
+        for (int f = 0; f < fates.size(); f++) {
+            counts[f] = Math.round(parse(last, "count_" + fates.get(f)));
+        }
+        return counts;
+    }
+
     /** {@code profile.csv} as fractions per fate, for {@code fates}. */
     public Profile profile(List<String> fates) throws IOException {
         List<CSVRecord> records = RunTables.records(run.resolve(RunLayout.PROFILE));

@@ -3,6 +3,7 @@ package org.fatefield.scenarios.output;
 import java.nio.file.Path;
 import java.util.Objects;
 import org.fatefield.scenarios.format.Scenario;
+import org.fatefield.viz.chart.FigureFormat;
 
 /**
  * What to run and how: the scenario, the seed, the output folder and the run's options, built
@@ -19,9 +20,10 @@ import org.fatefield.scenarios.format.Scenario;
  * @param resume          continue from the folder's checkpoint
  * @param frameSteps      steps between PNG frames, 0 for none
  * @param snapshots       what to write at every record time into {@code snapshots/}
+ * @param figures         resolution and size of the figures
  */
 public record RunRequest(Scenario scenario, Path out, long seed, int threads, boolean force, Progress progress,
-        long checkpointSteps, boolean resume, long frameSteps, SnapshotFormat snapshots) {
+        long checkpointSteps, boolean resume, long frameSteps, SnapshotFormat snapshots, FigureFormat figures) {
 
     /** Validates. */
     public RunRequest {
@@ -29,6 +31,7 @@ public record RunRequest(Scenario scenario, Path out, long seed, int threads, bo
         Objects.requireNonNull(out, "out");
         Objects.requireNonNull(progress, "progress");
         Objects.requireNonNull(snapshots, "snapshots");
+        Objects.requireNonNull(figures, "figures");
         if (seed < 0) {
             throw new IllegalArgumentException("seed must be 0 or greater, got " + seed);
         }
@@ -43,53 +46,60 @@ public record RunRequest(Scenario scenario, Path out, long seed, int threads, bo
 
     /** A run of {@code scenario} into {@code out} with its own seed, one thread, no extras, silent. */
     public static RunRequest of(Scenario scenario, Path out) {
-        return new RunRequest(scenario, out, scenario.seed(), 1, false, Progress.silent(), 0, false, 0, SnapshotFormat.NONE);
+        return new RunRequest(scenario, out, scenario.seed(), 1, false, Progress.silent(), 0, false, 0, SnapshotFormat.NONE,
+                FigureFormat.DEFAULT);
     }
 
     /** With master seed {@code value}. */
     public RunRequest withSeed(long value) {
         return new RunRequest(scenario, out, value, threads,
-                force, progress, checkpointSteps, resume, frameSteps, snapshots);
+                force, progress, checkpointSteps, resume, frameSteps, snapshots, figures);
     }
 
     /** Stepped on {@code value} threads. */
     public RunRequest withThreads(int value) {
         return new RunRequest(scenario, out, seed,
-                value, force, progress, checkpointSteps, resume, frameSteps, snapshots);
+                value, force, progress, checkpointSteps, resume, frameSteps, snapshots, figures);
     }
 
     /** Allowed (or not) to overwrite the run files of a folder that holds files. */
     public RunRequest withForce(boolean value) {
         return new RunRequest(scenario, out, seed, threads,
-                value, progress, checkpointSteps, resume, frameSteps, snapshots);
+                value, progress, checkpointSteps, resume, frameSteps, snapshots, figures);
     }
 
     /** Reporting progress to {@code value}. */
     public RunRequest withProgress(Progress value) {
         return new RunRequest(scenario, out, seed, threads,
-                force, value, checkpointSteps, resume, frameSteps, snapshots);
+                force, value, checkpointSteps, resume, frameSteps, snapshots, figures);
     }
 
     /** Checkpointing every {@code steps} steps (0: never). */
     public RunRequest withCheckpointSteps(long steps) {
-        return new RunRequest(scenario, out, seed, threads, force, progress, steps, resume, frameSteps, snapshots);
+        return new RunRequest(scenario, out, seed, threads, force, progress, steps, resume, frameSteps, snapshots, figures);
     }
 
     /** Continuing (or not) from the folder's checkpoint. */
     public RunRequest withResume(boolean value) {
         return new RunRequest(scenario, out, seed, threads,
-                force, progress, checkpointSteps, value, frameSteps, snapshots);
+                force, progress, checkpointSteps, value, frameSteps, snapshots, figures);
     }
 
     /** Writing a frame every {@code steps} steps (0: never). */
     public RunRequest withFrameSteps(long steps) {
         return new RunRequest(scenario, out, seed, threads,
-                force, progress, checkpointSteps, resume, steps, snapshots);
+                force, progress, checkpointSteps, resume, steps, snapshots, figures);
+    }
+
+    /** Writing figures in {@code value}. */
+    public RunRequest withFigures(FigureFormat value) {
+        return new RunRequest(scenario, out, seed, threads, force, progress, checkpointSteps, resume, frameSteps,
+                snapshots, value);
     }
 
     /** Writing {@code value} at every record time. */
     public RunRequest withSnapshots(SnapshotFormat value) {
         return new RunRequest(scenario, out, seed, threads,
-                force, progress, checkpointSteps, resume, frameSteps, value);
+                force, progress, checkpointSteps, resume, frameSteps, value, figures);
     }
 }

@@ -135,8 +135,8 @@ public final class ScenarioRunner {
                 scenario.tissue().growth().partition().mode().name().toLowerCase(Locale.ROOT)));
         String title = scenario.name() + ", seed " + seed;
         var proportions = FateProportionChart.create(tissue.series(), "Fate proportions: " + title);
-        folder.write(RunLayout.FATE_CHART, o -> ChartFiles.png(proportions, 960, 560, o));
-        folder.write(RunLayout.FATE_CHART_SVG, o -> ChartFiles.svg(proportions, 960, 560, o));
+        folder.write(RunLayout.FATE_CHART, o -> ChartFiles.png(proportions, 960, 560, request.figures(), o));
+        folder.write(RunLayout.FATE_CHART_SVG, o -> ChartFiles.svg(proportions, 960, 560, request.figures(), o));
         files.add(RunLayout.FATE_CHART);
         files.add(RunLayout.FATE_CHART_SVG);
         String tissueTitle = String.format(Locale.ROOT, "%s at t = %.1f h (%d cells)", title, tissue.time(),

@@ -56,7 +56,7 @@ final class HtmlPage {
                 + "</title>\n<style>body{font-family:sans-serif;max-width:980px;margin:2em auto;color:#222}"
                 + "img{max-width:100%}figure{margin:1.5em 0}figcaption{color:#555;font-size:90%}"
                 + "table{border-collapse:collapse;margin:1em 0}td,th{border:1px solid #ccc;padding:4px 10px;"
-                + "text-align:left}pre{background:#f6f6f2;padding:1em;overflow-x:auto}</style></head>\n<body><h1>"
+                + "text-align:left}pre{background:#f6f6f2;padding:1em;white-space:pre-wrap;overflow-wrap:anywhere}</style></head>\n<body><h1>"
                 + escape(title) + "</h1>\n" + body
                 + "<script>window.addEventListener('load',function(){var i=document.images,n=0;"
                 + "for(var k=0;k<i.length;k++){if(i[k].complete&&i[k].naturalWidth>0){n++;}}"

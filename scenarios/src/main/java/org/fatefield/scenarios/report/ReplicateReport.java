@@ -126,10 +126,10 @@ public final class ReplicateReport {
         page.preformatted(runs.get(0).scenarioText());
         page.heading("Provenance");
         JsonObject scenario = first.getAsJsonObject("scenario");
-        page.table(List.of("", ""), List.of(List.of("tissues", String.valueOf(rows.size())),
+        page.table(List.of("what", "value"), List.of(List.of("tissues", String.valueOf(rows.size())),
                 List.of("first seed", summary.get("first_seed").getAsString()),
-                List.of("tool version", first.get("tool_version").getAsString()),
-                List.of("java", first.get("java_version").getAsString()),
+                List.of("program version", first.get("tool_version").getAsString()),
+                List.of("Java version", first.get("java_version").getAsString()),
                 List.of("scenario SHA-256", scenario.get("sha256").getAsString())));
         return page.finish();
     }

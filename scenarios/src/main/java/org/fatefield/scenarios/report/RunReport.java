@@ -20,6 +20,7 @@ import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.format.ScenarioReader;
 import org.fatefield.scenarios.output.RunFolderReader;
 import org.fatefield.scenarios.output.RunLayout;
+import org.fatefield.scenarios.output.RunTables;
 import org.fatefield.viz.analysis.BifurcationDiagramChart;
 import org.fatefield.viz.analysis.GridMapChart;
 import org.fatefield.viz.chart.ChartFiles;
@@ -35,7 +36,6 @@ import org.jfree.chart.JFreeChart;
 public final class RunReport {
 
     /** Landscape values above this (in units of -ln P) share the top colour. */
-    private static final double LANDSCAPE_CEILING = 12;
 
     private RunReport() {
     }
@@ -72,6 +72,16 @@ public final class RunReport {
             page.image(f.caption(), f.png(), "png");
         }
         page.heading("Pattern");
+        long[] counts = folder.finalCounts(fates);
+        long total = java.util.Arrays.stream(counts).sum();
+        List<List<String>> tally = new ArrayList<>();
+        for (int f = 0; f < fates.size(); f++) {
+            tally.add(List.of(fates.get(f), Long.toString(counts[f]),
+                    total > 0 ? String.format(Locale.ROOT, "%.1f%%", 100.0 * counts[f] / total) : "–"));
+        }
+        tally.add(List.of("all cells", Long.toString(total), total > 0 ? "100%" : "–"));
+        page.paragraph("Cells at the end of the run:");
+        page.table(List.of("fate", "cells", "share of cells"), tally);
         List<List<String>> rows = new ArrayList<>();
         for (String fate : fates) {
             JsonObject b = metrics.getAsJsonObject("boundaries").getAsJsonObject(fate);
@@ -138,14 +148,17 @@ public final class RunReport {
         page.preformatted(scenarioText);
         page.heading("Provenance");
         List<List<String>> facts = new ArrayList<>();
-        for (String key : List.of("tool", "tool_version", "java_version", "java_vendor", "os", "seed", "started",
-                "wall_time_s", "simulated_time_h", "steps", "final_population")) {
-            facts.add(List.of(key, text(provenance.get(key))));
+        String[][] labels = {{"tool", "program"}, {"tool_version", "program version"}, {"java_version", "Java version"},
+            {"java_vendor", "Java vendor"}, {"os", "operating system"}, {"seed", "master seed"},
+            {"started", "started (UTC)"}, {"wall_time_s", "wall-clock time (s)"},
+            {"simulated_time_h", "simulated time (h)"}, {"steps", "time steps"}, {"final_population", "cells at the end"}};
+        for (String[] label : labels) {
+            facts.add(List.of(label[1], text(provenance.get(label[0]))));
         }
         JsonObject scenario = provenance.getAsJsonObject("scenario");
         facts.add(List.of("scenario source", text(scenario.get("source"))));
         facts.add(List.of("scenario SHA-256", text(scenario.get("sha256"))));
-        page.table(List.of("", ""), facts);
+        page.table(List.of("what", "value"), facts);
         return page.finish();
     }
 
@@ -175,12 +188,19 @@ public final class RunReport {
                 "RMS difference to the simulated fraction"), rows);
     }
 
+    /** A JSON number, NaN for null or absent. */
+    private static double number(JsonElement e) {
+        return e == null || e.isJsonNull() || !e.isJsonPrimitive() ? Double.NaN : e.getAsDouble();
+    }
+
     private static byte[] profile(RunFolderReader folder, List<String> fates, JsonObject metrics) throws IOException {
         RunFolderReader.Profile profile = folder.profile(fates);
-        JsonElement sim = metrics.getAsJsonObject("boundaries").getAsJsonObject(fates.get(fates.size() - 1))
-                .get("position_um");
-        double simulated = sim == null || sim.isJsonNull() ? Double.NaN : sim.getAsDouble();
-        return png(ProfileChart.create(fates, profile.x(), profile.fractions(), simulated,
+        double[] simulated = new double[fates.size()];
+        for (int f = 0; f < fates.size(); f++) {
+            simulated[f] = number(metrics.getAsJsonObject("boundaries").getAsJsonObject(fates.get(f)).get("position_um"));
+        }
+        double committed = number(metrics.get("committed_boundary_um"));
+        return png(ProfileChart.create(fates, profile.x(), profile.fractions(), simulated, committed,
                 RunFolderReader.predictedBoundaries(metrics), RunFolderReader.predictedFateCalls(metrics),
                 profile.predicted()));
     }
@@ -207,12 +227,13 @@ public final class RunReport {
                 png(BifurcationDiagramChart.create(circuit.branches(), 0, circuit.parameter(), species.get(0)))));
         DoubleFunction<QuasiPotential> landscape = circuit.landscape();
         if (landscape != null) {
-            double at = circuit.mostMultistable();
+            double at = circuit.middle();
             QuasiPotential u = landscape.apply(at);
-            String title = String.format(Locale.ROOT, "Landscape at %s = %.3f", circuit.parameter(), at);
+            String title = String.format(Locale.ROOT, "Landscape at %s = %s (middle of the range)", circuit.parameter(),
+                    RunTables.number(at));
             figures.add(new Figure(title + " (U = -ln P of the stationary distribution, one cell, no morphogen change)",
-                    png(GridMapChart.landscape(u.xs(), u.ys(), u.u(), LANDSCAPE_CEILING, species.get(0),
-                            species.get(1), title))));
+                    png(GridMapChart.landscape(u.xs(), u.ys(), u.u(), GridMapChart.LANDSCAPE_CEILING,
+                            species.get(0) + " (concentration)", species.get(1) + " (concentration)", title))));
         }
         return figures;
     }

@@ -12,6 +12,7 @@ import java.util.Map;
 import java.util.TreeSet;
 import org.apache.commons.csv.CSVPrinter;
 import org.fatefield.engine.metrics.SampleSummary;
+import org.fatefield.scenarios.output.AxisWords;
 import org.fatefield.scenarios.output.JsonFiles;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.output.RunTables;
@@ -146,8 +147,10 @@ public final class SweepCollector {
                 low[i] = stats[p][m][3];
                 high[i] = stats[p][m][4];
             }
-            var chart = keys == 1 ? SweepCharts.line(manifest.keys().get(0), metric, x, mean, low, high)
-                    : SweepCharts.map(manifest.keys().get(0), manifest.keys().get(1), metric, x, y, mean);
+            String first = AxisWords.key(manifest.keys().get(0));
+            String words = AxisWords.metric(metric);
+            var chart = keys == 1 ? SweepCharts.line(first, words, x, mean, low, high)
+                    : SweepCharts.map(first, AxisWords.key(manifest.keys().get(1)), words, x, y, mean);
             out.write("plot-" + metric + ".png", o -> ChartFiles.png(chart, 900, 560, o));
         }
     }

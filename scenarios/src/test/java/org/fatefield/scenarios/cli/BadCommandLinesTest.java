@@ -61,7 +61,10 @@ class BadCommandLinesTest {
                 new Case(2, "validate", "FILE"),
                 new Case(2, "frobnicate", "Did you mean"),
                 new Case(3, "run demo --out /proc/fatefield-cannot-write-here", "/proc/fatefield-cannot-write-here:"),
-                new Case(2, "keys extra", "extra"));
+                new Case(2, "scenario-help extra", "extra"),
+                new Case(2, "run demo --dpi 5 --out " + out, "--dpi"),
+                new Case(2, "analyze demo --figure-size 10x --out " + out, "WIDTHxHEIGHT"),
+                new Case(2, "analyze demo --figure-size 100000x300 --out " + out, "--figure-size"));
         return cases.stream().map(c -> DynamicTest.dynamicTest(c.line(), () -> assertTimeoutPreemptively(
                 Duration.ofSeconds(60), () -> {
                     HostileInputTest.Outcome outcome = HostileInputTest.fatefield(c.line().split(" "));

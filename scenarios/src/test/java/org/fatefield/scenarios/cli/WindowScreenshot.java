@@ -15,7 +15,8 @@ import org.fatefield.viz.live.TissueWindow;
 
 /**
  * Opens the live window on a short demo in a real (X) display, steps it, and saves a screenshot
- * of the window taken from the screen (and a second one coloured by commitment); prints the number of recorded rows. Run by the window
+ * of the window taken from the screen (and one each coloured by commitment, by the first species
+ * and by clone); prints the number of recorded rows. Run by the window
  * test in its own, non-headless JVM.
  */
 public final class WindowScreenshot {
@@ -52,6 +53,13 @@ public final class WindowScreenshot {
         Thread.sleep(1000);
         ImageIO.write(new Robot().createScreenCapture(bounds[0]), "png",
                 new File(args[0].replace(".png", "-commitment.png")));
+        for (TissueGui.ColourMode mode : new TissueGui.ColourMode[] {TissueGui.ColourMode.SPECIES,
+            TissueGui.ColourMode.CLONE}) {
+            SwingUtilities.invokeAndWait(() -> window[0].setColourMode(mode));
+            Thread.sleep(700);
+            ImageIO.write(new Robot().createScreenCapture(bounds[0]), "png",
+                    new File(args[0].replace(".png", "-" + mode.name().toLowerCase(java.util.Locale.ROOT) + ".png")));
+        }
         System.out.println("rows " + window[0].gui().tissue().series().rows().size());
         System.out.println("cells " + window[0].gui().tissue().cells().size());
         System.out.println("trace " + window[0].selectedTraceSamples());

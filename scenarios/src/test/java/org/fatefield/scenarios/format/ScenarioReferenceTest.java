@@ -15,6 +15,6 @@ class ScenarioReferenceTest {
         // Surefire runs in the module folder; the page lives beside this module's pom.
         String committed = Files.readString(Path.of("SCENARIO-FORMAT.md"), StandardCharsets.UTF_8);
         assertEquals(ScenarioReference.markdown(), committed,
-                "regenerate with: java -jar scenarios/target/fatefield.jar keys > scenarios/SCENARIO-FORMAT.md");
+                "regenerate with: java -jar scenarios/target/fatefield.jar scenario-help > scenarios/SCENARIO-FORMAT.md");
     }
 }

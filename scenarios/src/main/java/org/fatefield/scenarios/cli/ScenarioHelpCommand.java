@@ -1,0 +1,23 @@
+package org.fatefield.scenarios.cli;
+
+import java.util.concurrent.Callable;
+import org.fatefield.scenarios.format.ScenarioReference;
+import picocli.CommandLine.Command;
+import picocli.CommandLine;
+
+/** {@code fatefield scenario-help}: print the scenario format reference (every section and key). */
+@Command(name = "scenario-help", mixinStandardHelpOptions = true,
+        description = "Explain how to write a scenario file: every section and key with its unit, default, allowed"
+                + " values and meaning (Markdown; save it with > scenario-help.md).")
+final class ScenarioHelpCommand implements Callable<Integer> {
+
+    @CommandLine.Spec
+    private CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        spec.commandLine().getOut().print(ScenarioReference.markdown());
+        spec.commandLine().getOut().flush();
+        return 0;
+    }
+}
