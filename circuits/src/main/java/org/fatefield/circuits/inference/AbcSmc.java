@@ -9,8 +9,9 @@ import org.fatefield.circuits.random.RandomStreams;
 
 /**
  * Approximate Bayesian computation by sequential Monte Carlo (Toni, Welch, Strelkowa, Ipsen &amp;
- * Stumpf 2009, J. R. Soc. Interface 6:187) with the importance weights and kernel of population
- * Monte Carlo ABC (Beaumont, Cornuet, Marin &amp; Robert 2009, Biometrika 96:983) and an adaptive
+ * Stumpf 2009, J. R. Soc. Interface 6:187) with the importance weights of population Monte Carlo
+ * ABC (Beaumont, Cornuet, Marin &amp; Robert 2009, Biometrika 96:983), the locally adapted move of
+ * Filippi et al. (2013, see {@link PerturbationKernel}) and an adaptive
  * tolerance schedule: each tolerance is a quantile of the previous generation's accepted
  * distances (Drovandi &amp; Pettitt 2011, Biometrics 67:225; Del Moral, Doucet &amp; Jasra 2012,
  * Stat. Comput. 22:1009).
@@ -140,7 +141,8 @@ public final class AbcSmc {
         for (int m = 0; m < n; m++) {
             acc[m] = new Accumulator();
             if (previous != null && previous.get(m).size() > 0) {
-                kernels[m] = PerturbationKernel.of(previous.get(m).working(), previous.get(m).weights(),
+                Population last = previous.get(m);
+                kernels[m] = PerturbationKernel.local(last.working(), last.weights(), last.distances(), tolerance,
                         fallbackSpread(models.get(m)));
             }
         }
