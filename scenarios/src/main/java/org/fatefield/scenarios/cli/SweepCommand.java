@@ -2,7 +2,6 @@ package org.fatefield.scenarios.cli;
 
 import java.io.IOException;
 import java.io.PrintWriter;
-import java.net.URISyntaxException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -205,13 +204,7 @@ final class SweepCommand implements Runnable {
                 Manifest manifest = Manifest.read(folder);
                 int n = tasks != null ? tasks : Math.min(1000, manifest.runs().size());
                 SlurmScript script = new SlurmScript(n, time, memory, cpus, concurrent);
-                Path jar = Path.of(FatefieldCommand.class.getProtectionDomain().getCodeSource().getLocation().toURI());
-                String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
-                // From the packaged jar: java -jar; from classes (development, tests): the class path.
-                String launcher = Files.isRegularFile(jar)
-                        ? "\"" + java + "\" -jar \"" + jar.toAbsolutePath() + "\""
-                        : "\"" + java + "\" -Djava.awt.headless=true -cp \"" + System.getProperty("java.class.path")
-                                + "\" " + FatefieldCommand.class.getName();
+                String launcher = SlurmScript.launcher(FatefieldCommand.class);
                 Files.createDirectories(folder.resolve("logs"));
                 Files.writeString(folder.resolve("sweep.sbatch"), script.text(folder, launcher));
                 spec.commandLine().getOut().printf("Wrote %s (%d array tasks). Submit with: sbatch %s%n",
@@ -220,7 +213,7 @@ final class SweepCommand implements Runnable {
             } catch (IllegalArgumentException e) {
                 spec.commandLine().getErr().println(e.getMessage());
                 return FatefieldCommand.INVALID_INPUT;
-            } catch (IOException | URISyntaxException e) {
+            } catch (IOException | IllegalStateException e) {
                 spec.commandLine().getErr().println("Cannot write the script: " + e.getMessage());
                 return FatefieldCommand.OUTPUT_ERROR;
             }

@@ -23,6 +23,9 @@ public final class AxisWords {
     private static final Pattern COMMITTED = Pattern.compile("committed_boundary_um");
     private static final Pattern INDEXED = Pattern.compile("([a-z_]+)\\[(\\d+)]");
 
+    private static final Pattern POSITIONAL_ERROR = Pattern.compile("positional_error_(.+)_um");
+    private static final Pattern PROFILE_POINT = Pattern.compile("profile_(.+)_at_(.+)um");
+
     private AxisWords() {
     }
 
@@ -43,8 +46,17 @@ public final class AxisWords {
         if (COMMITTED.matcher(name).matches()) {
             return "committed boundary (µm along the gradient)";
         }
+        m = POSITIONAL_ERROR.matcher(name);
+        if (m.matches()) {
+            return m.group(1) + " positional error (sd across tissues, µm)";
+        }
+        m = PROFILE_POINT.matcher(name);
+        if (m.matches()) {
+            return "fraction " + m.group(1) + " at x = " + m.group(2) + " µm";
+        }
         return switch (name) {
             case "population" -> "cells at the end";
+            case "mixed_zone_width_um" -> "width of the mixed zone (µm)";
             case "predicted_boundary_um" -> "predicted bistability boundary (µm along the gradient)";
             case "sister_agreement" -> "sister-fate agreement (fraction of sister pairs)";
             default -> name;

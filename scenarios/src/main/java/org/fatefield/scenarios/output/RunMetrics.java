@@ -43,6 +43,19 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
 
     /** Computes the metrics of {@code tissue} at its end. */
     public static RunMetrics of(Tissue tissue) {
+        return of(tissue, true);
+    }
+
+    /**
+     * The metrics of {@code tissue} without the single-cell prediction (which simulates many
+     * lone cells for the whole run, and costs about twice the demo tissue): for sweeps and
+     * calibrations, whose tables do not use it.
+     */
+    public static RunMetrics pattern(Tissue tissue) {
+        return of(tissue, false);
+    }
+
+    private static RunMetrics of(Tissue tissue, boolean singleCell) {
         int fates = tissue.spec().fates().fateCount();
         FateProfile profile = FateProfile.of(tissue);
         Map<String, double[]> amplitudes = new LinkedHashMap<>();
@@ -55,7 +68,8 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
         return new RunMetrics(profile, LineageStatistics.of(tissue.cells(), tissue.ancestry(), fates),
                 PredictedBoundary.of(tissue.spec(), tissue.controlField()),
                 MixedZone.of(tissue.cells(), fates, profile, tissue.spec().width()),
-                SingleCellProfile.of(tissue.spec(), tissue.fields(), profile.centres(), tissue.seed(), tissue.threads()),
+                singleCell ? SingleCellProfile.of(tissue.spec(), tissue.fields(), profile.centres(), tissue.seed(),
+                        tissue.threads()) : SingleCellProfile.undefined("not computed for sweeps and calibrations"),
                 null, amplitudes);
     }
 

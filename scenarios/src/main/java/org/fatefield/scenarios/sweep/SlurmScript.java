@@ -1,5 +1,7 @@
 package org.fatefield.scenarios.sweep;
 
+import java.net.URISyntaxException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
 
@@ -26,6 +28,25 @@ public record SlurmScript(int tasks, String time, String memory, int cpus, int c
         if (!memory.matches("\\d+[KMGT]?")) {
             throw new IllegalArgumentException("--mem must look like 4G or 500M, got " + memory);
         }
+    }
+
+    /**
+     * The command line that starts this very tool on a cluster node: {@code java -jar} on the
+     * packaged jar, or the class path and {@code mainClass} when running from classes
+     * (development, tests).
+     */
+    public static String launcher(Class<?> mainClass) {
+        String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
+        Path jar;
+        try {
+            jar = Path.of(mainClass.getProtectionDomain().getCodeSource().getLocation().toURI());
+        } catch (URISyntaxException e) {
+            throw new IllegalStateException("cannot locate the running tool: " + e.getMessage(), e);
+        }
+        return Files.isRegularFile(jar)
+                ? "\"" + java + "\" -jar \"" + jar.toAbsolutePath() + "\""
+                : "\"" + java + "\" -Djava.awt.headless=true -cp \"" + System.getProperty("java.class.path") + "\" "
+                        + mainClass.getName();
     }
 
     /** The script for the sweep in {@code folder}, run with the tool at {@code jar}. */

@@ -2,14 +2,11 @@ package org.fatefield.scenarios.sweep;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.Optional;
 import org.fatefield.circuits.random.RandomStreams;
-import org.fatefield.scenarios.builtin.BuiltinScenarios;
 import org.fatefield.scenarios.format.Problem;
 import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.format.TextLimits;
@@ -17,7 +14,6 @@ import org.tomlj.Toml;
 import org.tomlj.TomlArray;
 import org.tomlj.TomlInvalidTypeException;
 import org.tomlj.TomlParseResult;
-import org.tomlj.TomlPosition;
 import org.tomlj.TomlTable;
 
 /**
@@ -47,8 +43,6 @@ import org.tomlj.TomlTable;
 public record SweepDefinition(String scenarioText, String scenarioLabel, String design, int points, int replicates,
         long seed, List<SweepParameter> parameters) {
 
-    /** Largest base scenario file a sweep reads (a scenario is a short text; this refuses /dev/zero). */
-    private static final long MAX_SCENARIO_BYTES = 1 << 20;
     /** Most points a design may have, and steps a parameter may take. */
     private static final long MAX_POINTS = 100_000;
     /** Most runs (points times replicates) one sweep may plan. */
@@ -89,36 +83,7 @@ public record SweepDefinition(String scenarioText, String scenarioLabel, String 
             }
         }
         String scenario = sweep.isString("scenario") ? sweep.getString("scenario") : null;
-        String text = null;
-        if (scenario == null) {
-            problems.add(sweep.contains("scenario") ? at(label, sweep, "scenario", "sweep.scenario",
-                    "must be text: a scenario file in the sweep's folder, or a built-in name")
-                    : new Problem(label, 0, 0, "sweep.scenario", null, "required: the base scenario file or built-in"));
-        } else {
-            Path folder = file.toAbsolutePath().getParent().normalize();
-            Path base = folder.resolve(scenario).normalize();
-            Optional<byte[]> builtin = BuiltinScenarios.bytes(scenario);
-            if (Path.of(scenario).isAbsolute() || !base.startsWith(folder)) {
-                problems.add(at(label, sweep, "scenario", "sweep.scenario", "must name a file in the sweep's folder"
-                        + " or below it (a sweep file cannot reach elsewhere), or a built-in scenario"));
-            } else if (Files.isRegularFile(base)) {
-                try {
-                    if (Files.size(base) > MAX_SCENARIO_BYTES) {
-                        problems.add(at(label, sweep, "scenario", "sweep.scenario", "is larger than "
-                                + MAX_SCENARIO_BYTES / 1024 + " KiB; a scenario file is a short text"));
-                    } else {
-                        text = Files.readString(base, StandardCharsets.UTF_8);
-                    }
-                } catch (IOException e) {
-                    problems.add(at(label, sweep, "scenario", "sweep.scenario", "cannot be read: " + e.getMessage()));
-                }
-            } else if (builtin.isPresent()) {
-                text = new String(builtin.get(), StandardCharsets.UTF_8);
-            } else {
-                problems.add(at(label, sweep, "scenario", "sweep.scenario", "no such file next to the sweep file and no"
-                        + " built-in of that name"));
-            }
-        }
+        String text = BaseScenarioText.read(label, file, sweep, "scenario", "sweep.scenario", problems);
         String design = sweep.isString("design") ? sweep.getString("design") : sweep.contains("design") ? "" : "grid";
         if (!List.of("grid", "latin-hypercube", "sobol").contains(design)) {
             problems.add(at(label, sweep, "design", "sweep.design", "must be one of \"grid\", \"latin-hypercube\","
@@ -230,9 +195,7 @@ public record SweepDefinition(String scenarioText, String scenarioLabel, String 
     }
 
     private static Problem at(String label, TomlTable table, String key, String path, String message) {
-        TomlPosition position = table.inputPositionOf(List.of(key));
-        return new Problem(label, position == null ? 0 : position.line(), position == null ? 0 : position.column(),
-                path, null, message);
+        return BaseScenarioText.at(label, table, key, path, message);
     }
 
     /** The sweep's points as parameter values, one array per point. */

@@ -63,6 +63,11 @@ public final class SweepRunner {
      * reporting progress to {@code log}.
      */
     public Outcome run(List<Manifest.Run> runs, int workers, PrintStream log) throws IOException {
+        return run(runs, workers, log, "sweep");
+    }
+
+    /** As {@link #run(List, int, PrintStream)}, with progress lines and bar named {@code label}. */
+    public Outcome run(List<Manifest.Run> runs, int workers, PrintStream log, String label) throws IOException {
         Files.createDirectories(folder.resolve(RESULTS));
         List<Manifest.Run> todo = new ArrayList<>();
         for (Manifest.Run run : runs) {
@@ -75,7 +80,7 @@ public final class SweepRunner {
         long start = System.nanoTime();
         boolean terminal = System.console() != null;
         Progress bar = terminal
-                ? Progress.forConsole("sweep", todo.size(), log)
+                ? Progress.forConsole(label, todo.size(), log)
                 : Progress.silent();
         ExecutorService executor = Executors.newFixedThreadPool(Math.max(1, workers));
         try {
@@ -93,8 +98,8 @@ public final class SweepRunner {
                         if (terminal) {
                             bar.update(n, todo.size());
                         } else {
-                            log.printf(Locale.ROOT, "sweep: %d/%d runs done (%s %s), %.0f s elapsed, about %.0f s left%n",
-                                    n, todo.size(), run.id(), ok ? "ok" : "FAILED", elapsed, eta);
+                            log.printf(Locale.ROOT, "%s: %d/%d runs done (%s %s), %.0f s elapsed, about %.0f s left%n",
+                                    label, n, todo.size(), run.id(), ok ? "ok" : "FAILED", elapsed, eta);
                             log.flush();
                         }
                     }
@@ -152,7 +157,9 @@ public final class SweepRunner {
             tissue.start();
             tissue.runToEnd();
             tissue.finish();
-            result.add("metrics", SweepMetrics.of(tissue, RunMetrics.of(tissue)));
+            RunMetrics metrics = RunMetrics.pattern(tissue);
+            result.add("metrics", SweepMetrics.of(tissue, metrics));
+            result.add("profile", SweepMetrics.profile(tissue, metrics));
             result.addProperty("complete", true);
             Files.deleteIfExists(folder.resolve(RESULTS).resolve(run.id() + ".failed.json"));
             write(resultFile(run), result);

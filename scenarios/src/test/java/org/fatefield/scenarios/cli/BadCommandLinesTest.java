@@ -64,7 +64,11 @@ class BadCommandLinesTest {
                 new Case(2, "scenario-help extra", "extra"),
                 new Case(2, "run demo --dpi 5 --out " + out, "--dpi"),
                 new Case(2, "analyze demo --figure-size 10x --out " + out, "WIDTHxHEIGHT"),
-                new Case(2, "analyze demo --figure-size 100000x300 --out " + out, "--figure-size"));
+                new Case(2, "analyze demo --figure-size 100000x300 --out " + out, "--figure-size"),
+                new Case(1, "calibrate " + tmp.resolve("nosuch.toml") + " --out " + out, "cannot read"),
+                new Case(2, "calibrate nosuch.toml --workers 0 --out " + out, "--workers"),
+                new Case(2, "calibrate nosuch.toml --slurm --slurm-time soon --out " + out, "--slurm-time"),
+                new Case(2, "calibrate nosuch.toml", "--out"));
         return cases.stream().map(c -> DynamicTest.dynamicTest(c.line(), () -> assertTimeoutPreemptively(
                 Duration.ofSeconds(60), () -> {
                     HostileInputTest.Outcome outcome = HostileInputTest.fatefield(c.line().split(" "));

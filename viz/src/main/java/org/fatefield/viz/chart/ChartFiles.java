@@ -33,6 +33,13 @@ public final class ChartFiles {
     private ChartFiles() {
     }
 
+    /** Something that draws itself into an area: a chart ({@code chart::draw}) or a grid of them. */
+    @FunctionalInterface
+    public interface Drawing {
+        /** Draws into {@code area} of {@code g}. */
+        void draw(Graphics2D g, Rectangle area);
+    }
+
     /** Writes {@code chart} as a PNG of {@code width x height} pixels at screen resolution. */
     public static void png(JFreeChart chart, int width, int height, OutputStream out) throws IOException {
         png(chart, width, height, FigureFormat.DEFAULT, out);
@@ -44,6 +51,12 @@ public final class ChartFiles {
      */
     public static void png(JFreeChart chart, int width, int height, FigureFormat format, OutputStream out)
             throws IOException {
+        png((Drawing) (g, area) -> chart.draw(g, area), width, height, format, out);
+    }
+
+    /** Writes {@code drawing} as a PNG, as {@link #png(JFreeChart, int, int, FigureFormat, OutputStream)}. */
+    public static void png(Drawing drawing, int width, int height, FigureFormat format, OutputStream out)
+            throws IOException {
         int w = format.widthOr(width);
         int h = format.heightOr(height);
         double scale = format.scale();
@@ -53,7 +66,7 @@ public final class ChartFiles {
         g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
         g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
         g.scale(scale, scale);
-        chart.draw(g, new Rectangle(0, 0, w, h));
+        drawing.draw(g, new Rectangle(0, 0, w, h));
         g.dispose();
         writePng(image, format.dpi(), out);
     }
@@ -92,11 +105,17 @@ public final class ChartFiles {
     /** Writes {@code chart} as an SVG laid out at {@code width x height} (or the format's size). */
     public static void svg(JFreeChart chart, int width, int height, FigureFormat format, OutputStream out)
             throws IOException {
+        svg((Drawing) (g, area) -> chart.draw(g, area), width, height, format, out);
+    }
+
+    /** Writes {@code drawing} as an SVG, as {@link #svg(JFreeChart, int, int, FigureFormat, OutputStream)}. */
+    public static void svg(Drawing drawing, int width, int height, FigureFormat format, OutputStream out)
+            throws IOException {
         int w = format.widthOr(width);
         int h = format.heightOr(height);
         SVGGraphics2D g = new SVGGraphics2D(w, h);
         g.setDefsKeyPrefix("ff");
-        chart.draw(g, new Rectangle(0, 0, w, h));
+        drawing.draw(g, new Rectangle(0, 0, w, h));
         String element = g.getSVGElement(null, true, new ViewBox(0, 0, w, h), null, null);
         String document = "<?xml version=\"1.0\"?>\n" + element + "\n";
         out.write(document.getBytes(StandardCharsets.UTF_8));

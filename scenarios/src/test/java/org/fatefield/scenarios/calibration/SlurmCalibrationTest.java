@@ -1,0 +1,82 @@
+package org.fatefield.scenarios.calibration;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.junit.jupiter.api.Assumptions.assumeTrue;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.concurrent.TimeUnit;
+import org.fatefield.scenarios.builtin.BuiltinScenarios;
+import org.fatefield.scenarios.cli.FatefieldCommandAccess;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * A calibration whose rounds run as array jobs on a real SLURM scheduler (the single-node cluster
+ * .ci/run starts) gives byte for byte the posterior of the same calibration on local workers.
+ * Skipped, saying why, where no scheduler answers; never skipped when FATEFIELD_REQUIRE_SLURM=1
+ * (as in CI).
+ */
+class SlurmCalibrationTest {
+
+    @TempDir
+    Path tmp;
+
+    private static boolean schedulerAnswers() {
+        try {
+            Process p = new ProcessBuilder("sinfo", "-h").redirectErrorStream(true).start();
+            return p.waitFor(20, TimeUnit.SECONDS) && p.exitValue() == 0;
+        } catch (IOException e) {
+            return false;
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            return false;
+        }
+    }
+
+    @Test
+    void slurmRoundsGiveTheSamePosteriorAsLocalWorkers() throws Exception {
+        boolean required = "1".equals(System.getenv("FATEFIELD_REQUIRE_SLURM"));
+        boolean available = schedulerAnswers();
+        if (!available && !required) {
+            System.err.println("SlurmCalibrationTest skipped: no SLURM scheduler answers sinfo here"
+                    + " (.ci/run starts one; set FATEFIELD_REQUIRE_SLURM=1 to make this a failure)");
+        }
+        assumeTrue(available || required, "no SLURM scheduler here");
+        assertTrue(available, "FATEFIELD_REQUIRE_SLURM=1 but no SLURM scheduler answers sinfo");
+
+        String tiny = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8)
+                .replace("duration = 48.0", "duration = 6.0").replace("founders = 120", "founders = 30");
+        Files.writeString(tmp.resolve("tiny.toml"), tiny);
+        Files.writeString(tmp.resolve("data.toml"), "[data]\n[[statistic]]\nname = \"population\"\nvalue = 45\n"
+                + "sd = 4\nunit = \"cells\"\n");
+        Path file = tmp.resolve("calibration.toml");
+        Files.writeString(file, """
+                [calibration]
+                scenario = "tiny.toml"
+                data = "data.toml"
+                particles = 6
+                generations = 2
+                predictive = 2
+                seed = 4
+                [[parameter]]
+                key = "division.cycle_mean"
+                prior = "uniform"
+                low = 4.0
+                high = 12.0
+                """);
+        Path local = tmp.resolve("local");
+        Path cluster = tmp.resolve("cluster");
+        assertEquals(0, FatefieldCommandAccess.run("calibrate", file.toString(), "--out", local.toString(),
+                "--workers", "2"));
+        assertEquals(0, FatefieldCommandAccess.run("calibrate", file.toString(), "--out", cluster.toString(),
+                "--slurm", "--slurm-tasks", "3", "--slurm-time", "00:10:00", "--slurm-mem", "1G"));
+        assertTrue(Files.exists(cluster.resolve("rounds/g00-r000-m0/sweep.sbatch")), "rounds went through sbatch");
+        assertEquals(Files.readString(local.resolve("posterior.csv")), Files.readString(cluster.resolve("posterior.csv")));
+        assertEquals(Files.readString(local.resolve("predictive.csv")),
+                Files.readString(cluster.resolve("predictive.csv")));
+    }
+}
