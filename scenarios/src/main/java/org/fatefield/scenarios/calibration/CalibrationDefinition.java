@@ -18,7 +18,6 @@ import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.format.ScenarioReader;
 import org.fatefield.scenarios.format.TextLimits;
 import org.fatefield.scenarios.sweep.BaseScenarioText;
-import org.tomlj.Toml;
 import org.tomlj.TomlArray;
 import org.tomlj.TomlParseResult;
 import org.tomlj.TomlTable;
@@ -79,15 +78,8 @@ public record CalibrationDefinition(String label, String text, List<CalibrationM
         } catch (IOException e) {
             throw new ScenarioException(List.of(new Problem(label, 0, 0, "", null, "cannot read: " + e.getMessage())));
         }
-        int[] deep = TextLimits.tooDeep(text);
-        if (deep != null) {
-            throw new ScenarioException(List.of(new Problem(label, deep[0], deep[1], "", null, "arrays or inline"
-                    + " tables nest more than " + TextLimits.MAX_NESTING + " deep here")));
-        }
-        TomlParseResult toml = Toml.parse(text);
-        if (toml.hasErrors()) {
-            toml.errors().forEach(e -> problems.add(new Problem(label, e.position().line(), e.position().column(), "",
-                    null, "not valid TOML: " + e.getMessage())));
+        TomlParseResult toml = TextLimits.parseToml(label, text, problems);
+        if (toml == null) {
             throw new ScenarioException(problems);
         }
         for (String key : toml.keySet()) {
@@ -176,7 +168,7 @@ public record CalibrationDefinition(String label, String text, List<CalibrationM
 
     private static CalibrationModel model(String label, Path file, TomlTable table, TomlArray parameters,
             String path, String parameterPath, String name, List<Problem> problems) {
-        String scenarioText = BaseScenarioText.read(label, file, table, "scenario", path + ".scenario", problems);
+        String scenarioText = BaseScenarioText.read(label, file, "calibration", table, "scenario", path + ".scenario", problems);
         if (parameters.isEmpty()) {
             problems.add(new Problem(label, 0, 0, parameterPath, null, "at least one [[" + parameterPath
                     + "]] to calibrate is needed"));

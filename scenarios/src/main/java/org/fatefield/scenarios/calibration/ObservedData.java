@@ -15,7 +15,6 @@ import org.fatefield.scenarios.format.Suggestions;
 import org.fatefield.scenarios.format.TextLimits;
 import org.fatefield.scenarios.output.RunTables;
 import org.fatefield.scenarios.sweep.BaseScenarioText;
-import org.tomlj.Toml;
 import org.tomlj.TomlArray;
 import org.tomlj.TomlParseResult;
 import org.tomlj.TomlTable;
@@ -63,16 +62,8 @@ public record ObservedData(String label, String description, List<Observation> o
             problems.add(new Problem(label, 0, 0, "", null, "cannot read the data file: " + e.getMessage()));
             return null;
         }
-        int[] deep = TextLimits.tooDeep(text);
-        if (deep != null) {
-            problems.add(new Problem(label, deep[0], deep[1], "", null, "arrays or inline tables nest more than "
-                    + TextLimits.MAX_NESTING + " deep here"));
-            return null;
-        }
-        TomlParseResult toml = Toml.parse(text);
-        if (toml.hasErrors()) {
-            toml.errors().forEach(e -> problems.add(new Problem(label, e.position().line(), e.position().column(), "",
-                    null, "not valid TOML: " + e.getMessage())));
+        TomlParseResult toml = TextLimits.parseToml(label, text, problems);
+        if (toml == null) {
             return null;
         }
         int before = problems.size();

@@ -8,6 +8,9 @@ import java.nio.file.FileSystemException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.util.List;
+import org.tomlj.Toml;
+import org.tomlj.TomlParseResult;
 
 /**
  * Limits on input text, checked before a parser sees it, so that untrusted files end in a
@@ -118,5 +121,25 @@ public final class TextLimits {
 
     private static String triple(char quote) {
         return String.valueOf(quote).repeat(3);
+    }
+
+    /**
+     * Parses a short TOML text (a sweep, calibration or data file), refusing nesting deeper than
+     * {@link #MAX_NESTING}; null, with every problem added, if it is not valid.
+     */
+    public static TomlParseResult parseToml(String label, String text, List<Problem> problems) {
+        int[] deep = tooDeep(text);
+        if (deep != null) {
+            problems.add(new Problem(label, deep[0], deep[1], "", null, "arrays or inline tables nest more than "
+                    + MAX_NESTING + " deep here"));
+            return null;
+        }
+        TomlParseResult toml = Toml.parse(text);
+        if (toml.hasErrors()) {
+            toml.errors().forEach(e -> problems.add(new Problem(label, e.position().line(), e.position().column(), "",
+                    null, "not valid TOML: " + e.getMessage())));
+            return null;
+        }
+        return toml;
     }
 }

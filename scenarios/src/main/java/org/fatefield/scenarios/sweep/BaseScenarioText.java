@@ -24,24 +24,25 @@ public final class BaseScenarioText {
     }
 
     /**
-     * The text of the scenario named at {@code key} of {@code table}, read next to {@code file};
-     * null, with a problem added, if it is missing, not text, outside the folder or unreadable.
+     * The text of the scenario named at {@code key} of {@code table}, read next to {@code file}
+     * (a file of {@code kind}: "sweep", "calibration"); null, with a problem added, if it is
+     * missing, not text, outside the folder or unreadable.
      */
-    public static String read(String label, Path file, TomlTable table, String key, String path,
+    public static String read(String label, Path file, String kind, TomlTable table, String key, String path,
             List<Problem> problems) {
         String scenario = table.isString(key) ? table.getString(key) : null;
         if (scenario == null) {
             problems.add(table.contains(key) ? at(label, table, key, path,
-                    "must be text: a scenario file in this file's folder, or a built-in name")
-                    : new Problem(label, 0, 0, path, null, "required: the scenario file or built-in name"));
+                    "must be text: a scenario file in the " + kind + "'s folder, or a built-in name")
+                    : new Problem(label, 0, 0, path, null, "required: the base scenario file or built-in"));
             return null;
         }
         Path folder = file.toAbsolutePath().getParent().normalize();
         Path base = folder.resolve(scenario).normalize();
         Optional<byte[]> builtin = BuiltinScenarios.bytes(scenario);
         if (Path.of(scenario).isAbsolute() || !base.startsWith(folder)) {
-            problems.add(at(label, table, key, path, "must name a file in this file's folder or below it (it cannot"
-                    + " reach elsewhere), or a built-in scenario"));
+            problems.add(at(label, table, key, path, "must name a file in the " + kind + "'s folder or below it (a "
+                    + kind + " file cannot reach elsewhere), or a built-in scenario"));
         } else if (Files.isRegularFile(base)) {
             try {
                 if (Files.size(base) > MAX_SCENARIO_BYTES) {
@@ -56,7 +57,8 @@ public final class BaseScenarioText {
         } else if (builtin.isPresent()) {
             return new String(builtin.get(), StandardCharsets.UTF_8);
         } else {
-            problems.add(at(label, table, key, path, "no such file next to this file and no built-in of that name"));
+            problems.add(at(label, table, key, path, "no such file next to the " + kind + " file and no built-in of"
+                    + " that name"));
         }
         return null;
     }

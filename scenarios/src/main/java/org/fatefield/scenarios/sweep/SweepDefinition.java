@@ -83,7 +83,7 @@ public record SweepDefinition(String scenarioText, String scenarioLabel, String 
             }
         }
         String scenario = sweep.isString("scenario") ? sweep.getString("scenario") : null;
-        String text = BaseScenarioText.read(label, file, sweep, "scenario", "sweep.scenario", problems);
+        String text = BaseScenarioText.read(label, file, "sweep", sweep, "scenario", "sweep.scenario", problems);
         String design = sweep.isString("design") ? sweep.getString("design") : sweep.contains("design") ? "" : "grid";
         if (!List.of("grid", "latin-hypercube", "sobol").contains(design)) {
             problems.add(at(label, sweep, "design", "sweep.design", "must be one of \"grid\", \"latin-hypercube\","

@@ -2,16 +2,16 @@ package org.fatefield.scenarios.calibration;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
-import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.TimeUnit;
 import org.fatefield.scenarios.builtin.BuiltinScenarios;
 import org.fatefield.scenarios.cli.FatefieldCommandAccess;
+import org.fatefield.scenarios.sweep.RequiredSlurm;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.Timeout;
 import org.junit.jupiter.api.io.TempDir;
 
 /**
@@ -25,28 +25,10 @@ class SlurmCalibrationTest {
     @TempDir
     Path tmp;
 
-    private static boolean schedulerAnswers() {
-        try {
-            Process p = new ProcessBuilder("sinfo", "-h").redirectErrorStream(true).start();
-            return p.waitFor(20, TimeUnit.SECONDS) && p.exitValue() == 0;
-        } catch (IOException e) {
-            return false;
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            return false;
-        }
-    }
-
     @Test
+    @Timeout(value = 10, unit = TimeUnit.MINUTES)
     void slurmRoundsGiveTheSamePosteriorAsLocalWorkers() throws Exception {
-        boolean required = "1".equals(System.getenv("FATEFIELD_REQUIRE_SLURM"));
-        boolean available = schedulerAnswers();
-        if (!available && !required) {
-            System.err.println("SlurmCalibrationTest skipped: no SLURM scheduler answers sinfo here"
-                    + " (.ci/run starts one; set FATEFIELD_REQUIRE_SLURM=1 to make this a failure)");
-        }
-        assumeTrue(available || required, "no SLURM scheduler here");
-        assertTrue(available, "FATEFIELD_REQUIRE_SLURM=1 but no SLURM scheduler answers sinfo");
+        RequiredSlurm.check("SlurmCalibrationTest");
 
         String tiny = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8)
                 .replace("duration = 48.0", "duration = 6.0").replace("founders = 120", "founders = 30");

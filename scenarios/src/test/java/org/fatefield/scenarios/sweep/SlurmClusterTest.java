@@ -1,18 +1,14 @@
 package org.fatefield.scenarios.sweep;
 
-import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.concurrent.TimeUnit;
 import org.fatefield.scenarios.builtin.BuiltinScenarios;
 import org.fatefield.scenarios.cli.FatefieldCommandAccess;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 
 /**
@@ -25,28 +21,9 @@ class SlurmClusterTest {
     @TempDir
     Path tmp;
 
-    private static boolean schedulerAnswers() {
-        try {
-            Process p = new ProcessBuilder("sinfo", "-h").redirectErrorStream(true).start();
-            return p.waitFor(20, TimeUnit.SECONDS) && p.exitValue() == 0;
-        } catch (IOException e) {
-            return false;
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            return false;
-        }
-    }
-
     @Test
     void arrayJobGivesTheSameTableAsALocalRun() throws Exception {
-        boolean required = "1".equals(System.getenv("FATEFIELD_REQUIRE_SLURM"));
-        boolean available = schedulerAnswers();
-        if (!available && !required) {
-            System.err.println("SlurmClusterTest skipped: no SLURM scheduler answers sinfo here"
-                    + " (.ci/run starts one; set FATEFIELD_REQUIRE_SLURM=1 to make this a failure)");
-        }
-        assumeTrue(available || required, "no SLURM scheduler here");
-        assertTrue(available, "FATEFIELD_REQUIRE_SLURM=1 but no SLURM scheduler answers sinfo");
+        RequiredSlurm.check("SlurmClusterTest");
 
         String demo = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8)
                 .replace("duration = 48.0", "duration = 4.0").replace("founders = 120", "founders = 30");
