@@ -112,4 +112,33 @@ class CalibrationDefinitionTest {
                 """, DATA.replace("unit = \"um\"", "unit = \"mm\""))));
         assertTrue(unit.getMessage().contains("unit \"mm\" does not fit: this statistic is in um"), unit.getMessage());
     }
+
+    @Test
+    void aMeasuredProfileBecomesOnePointPerRowAndFateAndABadRowIsNamed() throws Exception {
+        String calibration = """
+                [calibration]
+                scenario = "demo"
+                data = "data.toml"
+                [[parameter]]
+                key = "morphogen.decay"
+                prior = "uniform"
+                low = 0.1
+                high = 0.5
+                """;
+        Files.writeString(tmp.resolve("profile.csv"), "x_um,fraction_photocyte,sd_photocyte\n100,0.4,0.05\n200,,0.05\n"
+                + "300,0.1,0.02\n");
+        CalibrationDefinition d = CalibrationDefinition.read(write(calibration, DATA + "[profile]\nfile = \"profile.csv\"\n"));
+        assertEquals(3, d.data().observations().size(), "one statistic and two profile points (an empty cell is no point)");
+        Observation last = d.data().observations().get(2);
+        assertEquals("photocyte", last.fate());
+        assertEquals(300.0, last.x(), 0.0);
+        assertEquals(0.1, last.value(), 0.0);
+        assertEquals(0.02, last.sd(), 0.0);
+
+        Files.writeString(tmp.resolve("profile.csv"), "x_um,fraction_photocyte,sd_photocyte\n100,1.5,0.05\n");
+        ScenarioException e = assertThrows(ScenarioException.class, () -> CalibrationDefinition.read(write(calibration,
+                DATA + "[profile]\nfile = \"profile.csv\"\n")));
+        assertTrue(e.getMessage().contains("profile.csv:2") && e.getMessage().contains("the fraction from 0 to 1"),
+                e.getMessage());
+    }
 }
