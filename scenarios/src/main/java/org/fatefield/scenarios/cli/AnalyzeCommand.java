@@ -115,6 +115,9 @@ final class AnalyzeCommand implements Callable<Integer> {
     @Mixin
     private FigureOptions figures;
 
+    @Mixin
+    private SharedOptions.Settings settings;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
@@ -124,7 +127,7 @@ final class AnalyzeCommand implements Callable<Integer> {
                 "--system-size", systemSize, "must be a finite number greater than 0");
         SharedOptions.require(spec, at == null || Double.isFinite(at), "--at", at, "must be a finite number");
         PrintWriter err = spec.commandLine().getErr();
-        Scenario loaded = ScenarioArgument.loadOrReport(scenario, spec.commandLine().getErr());
+        Scenario loaded = ScenarioArgument.loadOrReport(scenario, settings.overrides(), spec.commandLine().getErr());
         if (loaded == null) {
             return FatefieldCommand.INVALID_INPUT;
         }

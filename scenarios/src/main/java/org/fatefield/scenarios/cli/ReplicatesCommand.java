@@ -49,13 +49,16 @@ final class ReplicatesCommand implements Callable<Integer> {
     @Mixin
     private FigureOptions figures;
 
+    @Mixin
+    private SharedOptions.Settings settings;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
     @Override
     public Integer call() {
         PrintWriter err = spec.commandLine().getErr();
-        Scenario loaded = ScenarioArgument.loadOrReport(scenario, spec.commandLine().getErr());
+        Scenario loaded = ScenarioArgument.loadOrReport(scenario, settings.overrides(), spec.commandLine().getErr());
         if (loaded == null) {
             return FatefieldCommand.INVALID_INPUT;
         }

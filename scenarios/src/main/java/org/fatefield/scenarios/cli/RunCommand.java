@@ -77,6 +77,9 @@ final class RunCommand implements Callable<Integer> {
     /** Estimated snapshot size above which --yes is needed. */
     private static final double SNAPSHOT_CONFIRM_BYTES = 2e9;
 
+    @Mixin
+    private SharedOptions.Settings settings;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
@@ -86,7 +89,7 @@ final class RunCommand implements Callable<Integer> {
         PrintWriter outWriter = spec.commandLine().getOut();
         Scenario loaded;
         try {
-            loaded = ScenarioArgument.load(scenario);
+            loaded = ScenarioArgument.load(scenario, settings.overrides());
         } catch (ScenarioException e) {
             err.println(e.getMessage());
             err.println("Nothing was run. Fix the lines above (see: fatefield scenario-help), then run again.");

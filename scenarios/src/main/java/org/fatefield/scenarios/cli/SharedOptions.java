@@ -2,8 +2,10 @@ package org.fatefield.scenarios.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import org.fatefield.circuits.random.RandomStreams;
+import org.fatefield.scenarios.format.Overrides;
 import org.fatefield.engine.tissue.WorkEstimate;
 import org.fatefield.scenarios.format.Scenario;
 import picocli.CommandLine.Model.CommandSpec;
@@ -42,6 +44,40 @@ final class SharedOptions {
         /** The seed given, or {@code scenarioSeed}. */
         long orElse(long scenarioSeed) {
             return value != null ? value : scenarioSeed;
+        }
+    }
+
+    /**
+     * {@code --set KEY=VALUE} (repeatable): scenario values replaced from the command line, laid
+     * over the file and checked exactly like its own values, and recorded in the run's provenance.
+     */
+    static final class Settings {
+
+        @Spec(Spec.Target.MIXEE)
+        private CommandSpec spec;
+
+        @Option(names = "--set", paramLabel = "KEY=VALUE", description = "replace a scenario value, such as --set"
+                + " morphogen.decay=0.3 or --set 'circuit.noise=\"none\"' (repeatable; key paths as in validation"
+                + " messages and fatefield scenario-help)")
+        private List<String> given = new ArrayList<>();
+
+        /** The overrides given (none by default); a malformed one is a usage error naming it. */
+        Overrides overrides() {
+            Overrides value = Overrides.none();
+            for (String setting : given) {
+                int equals = setting.indexOf('=');
+                if (equals <= 0) {
+                    throw new ParameterException(spec.commandLine(), "--set takes KEY=VALUE, such as --set"
+                            + " morphogen.decay=0.3; got '" + setting + "'");
+                }
+                try {
+                    value = value.with(setting.substring(0, equals).trim(),
+                            Overrides.parseValue(setting.substring(equals + 1)));
+                } catch (IllegalArgumentException e) {
+                    throw new ParameterException(spec.commandLine(), "--set " + setting + ": " + e.getMessage());
+                }
+            }
+            return value;
         }
     }
 

@@ -9,6 +9,7 @@ import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Parameters;
 
 /** {@code fatefield validate}: check scenario files and report every problem at once. */
@@ -21,6 +22,9 @@ final class ValidateCommand implements Callable<Integer> {
     @Parameters(arity = "1..*", paramLabel = "FILE", description = "scenario files, or built-in names")
     private List<String> files;
 
+    @Mixin
+    private SharedOptions.Settings settings;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
@@ -31,7 +35,7 @@ final class ValidateCommand implements Callable<Integer> {
         int status = 0;
         for (String file : files) {
             try {
-                Scenario scenario = ScenarioArgument.load(file);
+                Scenario scenario = ScenarioArgument.load(file, settings.overrides());
                 out.printf("%s: valid (%s: %d founders, %.4g h in steps of %.4g h, %d fates)%n", file, scenario.name(),
                         scenario.tissue().growth().initialCells(), scenario.tissue().timing().duration(),
                         scenario.tissue().timing().step(), scenario.tissue().fates().fateCount());

@@ -28,6 +28,11 @@ public final class ScenarioReader {
 
     /** Reads and validates the file at {@code path}. */
     public static Scenario read(Path path) throws ScenarioException {
+        return read(path, Overrides.none());
+    }
+
+    /** Reads and validates the file at {@code path} with {@code overrides} laid over it. */
+    public static Scenario read(Path path, Overrides overrides) throws ScenarioException {
         byte[] bytes;
         try {
             bytes = TextLimits.read(path, TextLimits.MAX_TOML_BYTES, "a scenario file is a short text");
@@ -37,7 +42,7 @@ public final class ScenarioReader {
         }
         String fallbackName = path.getFileName().toString().replaceFirst("\\.toml$", "");
         Path folder = path.toAbsolutePath().getParent();
-        return parse(path.toString(), fallbackName, bytes, folder);
+        return parse(path.toString(), fallbackName, bytes, folder, overrides);
     }
 
     /** Validates scenario text that cannot include a circuit file (no folder to find it in). */

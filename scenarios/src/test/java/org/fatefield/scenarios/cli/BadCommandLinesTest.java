@@ -68,7 +68,10 @@ class BadCommandLinesTest {
                 new Case(1, "calibrate " + tmp.resolve("nosuch.toml") + " --out " + out, "cannot read"),
                 new Case(2, "calibrate nosuch.toml --workers 0 --out " + out, "--workers"),
                 new Case(2, "calibrate nosuch.toml --slurm --slurm-time soon --out " + out, "--slurm-time"),
-                new Case(2, "calibrate nosuch.toml", "--out"));
+                new Case(2, "calibrate nosuch.toml", "--out"),
+                new Case(2, "run demo --set morphogen.decay --out " + out, "KEY=VALUE"),
+                new Case(1, "run demo --set morphogen.decai=0.3 --out " + out, "did you mean 'decay'"),
+                new Case(1, "analyze demo --set morphogen.decay=-1 --out " + out, "morphogen.decay"));
         return cases.stream().map(c -> DynamicTest.dynamicTest(c.line(), () -> assertTimeoutPreemptively(
                 Duration.ofSeconds(60), () -> {
                     HostileInputTest.Outcome outcome = HostileInputTest.fatefield(c.line().split(" "));

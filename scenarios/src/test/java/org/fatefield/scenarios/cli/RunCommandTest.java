@@ -306,4 +306,18 @@ class RunCommandTest {
             assertFalse(Files.exists(out), c[1] + ": nothing was created");
         }
     }
+
+    @Test
+    void setReplacesScenarioValuesAndTheRunRecordsIt() throws IOException {
+        Path out = tmp.resolve("set");
+        Outcome o = fatefield("run", "demo", "--set", "run.duration=3.0", "--set", "tissue.founders=20", "--out",
+                out.toString(), "--quiet");
+        assertEquals(0, o.code(), o.err());
+        String json = Files.readString(out.resolve("run.json"));
+        assertTrue(json.contains("run.duration = 3.0") && json.contains("tissue.founders = 20"), json);
+        List<String> lines = Files.readAllLines(out.resolve("timeseries.csv"));
+        String last = lines.get(lines.size() - 1);
+        assertEquals(3.0, Double.parseDouble(last.substring(0, last.indexOf(','))), 1e-9, "the run ends at 3 h");
+        assertEquals("20", lines.get(1).split(",")[4], "20 founders: " + lines.get(1));
+    }
 }
