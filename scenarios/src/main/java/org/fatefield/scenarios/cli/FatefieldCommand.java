@@ -13,7 +13,7 @@ import picocli.CommandLine;
             "Research software: not for clinical decisions.", ""},
         subcommands = {RunCommand.class, ViewCommand.class, ReplicatesCommand.class, SweepCommand.class, RobustnessCommand.class, AnalyzeCommand.class, ReportCommand.class,
             CalibrateCommand.class, ValidateCommand.class, ScenarioHelpCommand.class, BenchCommand.class,
-            CommandLine.HelpCommand.class},
+            CommandLine.HelpCommand.class, picocli.AutoComplete.GenerateCompletion.class},
         footer = {"", "Start with:  fatefield run demo --out demo-output",
             "How to write a scenario:  fatefield scenario-help"})
 public final class FatefieldCommand implements Runnable {
@@ -86,7 +86,8 @@ public final class FatefieldCommand implements Runnable {
     static final class Version implements CommandLine.IVersionProvider {
         @Override
         public String[] getVersion() {
-            return new String[] {"fatefield " + RunProvenance.toolVersion(),
+            return new String[] {"fatefield " + RunProvenance.toolVersion() + " (build " + RunProvenance.buildCommit()
+                    + ")",
                 "Java " + System.getProperty("java.version") + " (" + System.getProperty("java.vendor") + ")"};
         }
     }

@@ -2,8 +2,11 @@ package org.fatefield.scenarios.output;
 
 import com.google.gson.JsonArray;
 import com.google.gson.JsonObject;
+import java.io.IOException;
+import java.io.InputStream;
 import java.time.Instant;
 import java.util.List;
+import java.util.Properties;
 import org.fatefield.engine.record.TimeSeries;
 import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.scenarios.format.Scenario;
@@ -12,6 +15,28 @@ import org.fatefield.scenarios.format.Scenario;
 public final class RunProvenance {
 
     private RunProvenance() {
+    }
+
+    /**
+     * The commit the tool was built from (abbreviated, with "-dirty" if the working tree had
+     * uncommitted changes), from the build.properties the build writes; "unknown" for a build
+     * outside a git checkout.
+     */
+    public static String buildCommit() {
+        try (InputStream in = RunProvenance.class.getResourceAsStream("/org/fatefield/scenarios/build.properties")) {
+            if (in == null) {
+                return "unknown";
+            }
+            Properties p = new Properties();
+            p.load(in);
+            String id = p.getProperty("git.commit.id.abbrev", "");
+            if (id.isEmpty() || id.startsWith("$")) {
+                return "unknown";
+            }
+            return id + ("true".equals(p.getProperty("git.dirty")) ? "-dirty" : "");
+        } catch (IOException e) {
+            return "unknown";
+        }
     }
 
     /** The tool's version from the jar manifest, or "development" when run from classes. */
@@ -32,6 +57,7 @@ public final class RunProvenance {
         JsonObject root = new JsonObject();
         root.addProperty("tool", "fatefield");
         root.addProperty("tool_version", toolVersion());
+        root.addProperty("build_commit", buildCommit());
         root.addProperty("java_version", System.getProperty("java.version"));
         root.addProperty("java_vendor", System.getProperty("java.vendor"));
         root.addProperty("os", System.getProperty("os.name") + " " + System.getProperty("os.arch"));

@@ -315,9 +315,19 @@ class RunCommandTest {
         assertEquals(0, o.code(), o.err());
         String json = Files.readString(out.resolve("run.json"));
         assertTrue(json.contains("run.duration = 3.0") && json.contains("tissue.founders = 20"), json);
+        assertTrue(json.contains("\"build_commit\""), json);
         List<String> lines = Files.readAllLines(out.resolve("timeseries.csv"));
         String last = lines.get(lines.size() - 1);
         assertEquals(3.0, Double.parseDouble(last.substring(0, last.indexOf(','))), 1e-9, "the run ends at 3 h");
         assertEquals("20", lines.get(1).split(",")[4], "20 founders: " + lines.get(1));
+    }
+
+    @Test
+    void versionNamesTheBuildCommit() {
+        Outcome o = fatefield("--version");
+        assertEquals(0, o.code());
+        // The build writes build.properties from git; outside a checkout the commit is "unknown".
+        String commit = Files.exists(Path.of("..", ".git")) ? "[0-9a-f]{7,}(-dirty)?" : "unknown";
+        assertTrue(o.out().matches("(?s)fatefield \\S+ \\(build " + commit + "\\).*"), o.out());
     }
 }
