@@ -5,6 +5,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import org.fatefield.circuits.analysis.SwitchingSettings;
 import org.fatefield.circuits.model.ReactionNetwork;
@@ -14,6 +15,7 @@ import org.fatefield.circuits.study.CircuitAnalysis;
 import org.fatefield.engine.coupling.SignalCoupling;
 import org.fatefield.scenarios.analysis.AnalysisWriter;
 import org.fatefield.scenarios.format.Scenario;
+import org.fatefield.scenarios.output.Provenance;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.output.RunLayout;
 import org.hipparchus.exception.MathIllegalStateException;
@@ -163,6 +165,7 @@ final class AnalyzeCommand implements Callable<Integer> {
             AnalysisWriter writer = new AnalysisWriter(RunFolder.open(folder), network, plan,
                     loaded.tissue().fates(), figures.format());
             writer.write(result, analysis);
+            Provenance.write(RunFolder.open(folder), "analyze", 1, Map.of(loaded.source(), loaded.sha256()));
             PrintWriter o = spec.commandLine().getOut();
             int specials = result.branches().stream().mapToInt(b -> b.specials().size()).sum();
             o.printf("Analysed %s along %s in [%s, %s]: %s at %s = %s, %s, %s.%n", loaded.name(), plan.parameter(),

@@ -3,7 +3,9 @@ package org.fatefield.scenarios.cli;
 import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.LinkedHashMap;
 import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import org.fatefield.circuits.inference.Generation;
 import org.fatefield.circuits.inference.Population;
@@ -14,6 +16,8 @@ import org.fatefield.scenarios.calibration.LocalBackend;
 import org.fatefield.scenarios.calibration.RoundBackend;
 import org.fatefield.scenarios.calibration.SlurmBackend;
 import org.fatefield.scenarios.format.ScenarioException;
+import org.fatefield.scenarios.output.Provenance;
+import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.sweep.SlurmScript;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -99,6 +103,15 @@ final class CalibrateCommand implements Callable<Integer> {
         try {
             Calibration.Outcome outcome = Calibration.run(definition, out.path(), backend, System.err,
                     figures.format());
+            Map<String, String> inputs = new LinkedHashMap<>();
+            inputs.put(definition.label(), Provenance.sha256(definition.text()));
+            inputs.put(definition.data().label(), Provenance.sha256(definition.data().text()));
+            if (definition.data().profileText() != null) {
+                inputs.put(definition.data().profileName(), Provenance.sha256(definition.data().profileText()));
+            }
+            definition.models().forEach(m -> inputs.put(m.scenarioLabel(), m.base().sha256()));
+            Provenance.write(RunFolder.open(out.path()), "calibrate", slurm ? 0 : workers != null ? workers
+                    : Runtime.getRuntime().availableProcessors(), inputs);
             print(definition, outcome);
             return 0;
         } catch (IOException e) {

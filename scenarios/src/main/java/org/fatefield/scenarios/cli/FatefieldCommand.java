@@ -2,6 +2,7 @@ package org.fatefield.scenarios.cli;
 
 import java.io.PrintWriter;
 import org.fatefield.engine.tissue.SimulationFailure;
+import org.fatefield.scenarios.output.Provenance;
 import org.fatefield.scenarios.output.RunProvenance;
 import picocli.CommandLine.Command;
 import picocli.CommandLine;
@@ -41,11 +42,13 @@ public final class FatefieldCommand implements Runnable {
 
     /** Runs the command line on the standard streams and returns its exit code. */
     public static int execute(String... args) {
+        Provenance.recordCommandLine(args);
         return commandLine().execute(args);
     }
 
     /** Runs the command line with its output and errors sent to the given writers. */
     public static int execute(PrintWriter out, PrintWriter err, String... args) {
+        Provenance.recordCommandLine(args);
         return commandLine().setOut(out).setErr(err).execute(args);
     }
 

@@ -4,8 +4,10 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import org.fatefield.scenarios.format.Scenario;
+import org.fatefield.scenarios.output.Provenance;
 import org.fatefield.scenarios.output.ReplicateSet;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.output.RunFolderReader;
@@ -88,6 +90,7 @@ final class ReplicatesCommand implements Callable<Integer> {
                 err.flush();
             }
             set.write(RunFolder.open(out));
+            Provenance.write(RunFolder.open(out), "replicates", workers, Map.of(loaded.source(), loaded.sha256()));
             PrintWriter o = spec.commandLine().getOut();
             o.printf("%d replicates of %s; results are in %s%n", runs, loaded.name(), out.toAbsolutePath().normalize());
             o.flush();

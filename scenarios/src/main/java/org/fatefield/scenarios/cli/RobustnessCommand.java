@@ -6,12 +6,14 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import org.apache.commons.csv.CSVPrinter;
 import org.fatefield.engine.robustness.Perturbation;
 import org.fatefield.engine.robustness.RobustnessAnalysis;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.output.AxisWords;
+import org.fatefield.scenarios.output.Provenance;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.output.RunTables;
 import org.fatefield.viz.chart.ChartFiles;
@@ -91,6 +93,7 @@ final class RobustnessCommand implements Callable<Integer> {
                         err.flush();
                     });
             RunFolder folder = RunFolder.open(out);
+            Provenance.write(folder, "robustness", workers, Map.of(loaded.source(), loaded.sha256()));
             folder.writeText("robustness.csv", w -> {
                 CSVPrinter printer = RunTables.printer(w);
                 printer.printRecord("perturbation", "metric", "sensitivity", "ci95_low", "ci95_high", "pairs");

@@ -13,6 +13,7 @@ import org.fatefield.scenarios.format.Overrides;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.format.ScenarioReader;
+import org.fatefield.scenarios.output.Provenance;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.sweep.Manifest;
 import org.fatefield.scenarios.sweep.SlurmScript;
@@ -92,6 +93,8 @@ final class SweepCommand implements Runnable {
                 // The base and its includes, together: every run reads them from the sweep folder.
                 base.copyInto(SweepRunner.BASE, (name, text) -> folder.writeText(name, w -> w.write(text)));
                 folder.writeText(Manifest.NAME, manifest::write);
+                Provenance.write(folder, "sweep plan", 1, Map.of(file.toString(), Provenance.sha256(Files.readString(file)),
+                        sweep.scenarioLabel(), base.sha256()));
                 spec.commandLine().getOut().printf("Planned %d runs (%d points x %d replicates) in %s%n",
                         manifest.runs().size(), manifest.runs().size() / sweep.replicates(), sweep.replicates(),
                         out.toAbsolutePath().normalize());

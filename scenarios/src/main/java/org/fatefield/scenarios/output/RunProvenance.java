@@ -6,6 +6,7 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.time.Instant;
 import java.util.List;
+import java.util.Map;
 import java.util.Properties;
 import org.fatefield.engine.record.TimeSeries;
 import org.fatefield.engine.tissue.Tissue;
@@ -85,6 +86,7 @@ public final class RunProvenance {
         JsonArray written = new JsonArray();
         files.forEach(written::add);
         root.add("files", written);
+        root.add("provenance", Provenance.of("run", tissue.threads(), Map.of(scenario.source(), scenario.sha256())));
         return JsonFiles.text(root);
     }
 }
