@@ -19,14 +19,14 @@ import org.fatefield.scenarios.sweep.SlurmScript;
 public final class SlurmBackend implements RoundBackend {
 
     private final SlurmScript limits;
-    private final String launcher;
+    private final SlurmScript.Launcher launcher;
     private final PrintStream log;
 
     /**
      * With the per-task limits of {@code limits} (its task count is the most array tasks per
      * round), starting the tool with {@code launcher} on the nodes.
      */
-    public SlurmBackend(SlurmScript limits, String launcher, PrintStream log) {
+    public SlurmBackend(SlurmScript limits, SlurmScript.Launcher launcher, PrintStream log) {
         this.limits = limits;
         this.launcher = launcher;
         this.log = log;
@@ -38,7 +38,7 @@ public final class SlurmBackend implements RoundBackend {
         for (Path folder : folders) {
             int runs = Manifest.read(folder).runs().size();
             SlurmScript script = new SlurmScript(Math.max(1, Math.min(limits.tasks(), runs)), limits.time(),
-                    limits.memory(), limits.cpus(), limits.concurrent());
+                    limits.memory(), limits.cpus(), limits.concurrent(), limits.partition(), limits.account());
             Files.createDirectories(folder.resolve("logs"));
             Path file = folder.resolve("sweep.sbatch");
             Files.writeString(file, script.text(folder, launcher), StandardCharsets.UTF_8);

@@ -70,6 +70,14 @@ final class CalibrateCommand implements Callable<Integer> {
             description = "memory per task (default: ${DEFAULT-VALUE})")
     private String memory;
 
+    @Option(names = "--slurm-partition", paramLabel = "NAME", defaultValue = "",
+            description = "SLURM partition (default: the cluster's default)")
+    private String partition;
+
+    @Option(names = "--slurm-account", paramLabel = "NAME", defaultValue = "",
+            description = "SLURM account to charge (default: yours)")
+    private String account;
+
     @Mixin
     private FigureOptions figures;
 
@@ -85,13 +93,14 @@ final class CalibrateCommand implements Callable<Integer> {
         RoundBackend backend;
         try {
             backend = slurm
-                    ? new SlurmBackend(new SlurmScript(tasks, time, memory, 1, 0), SlurmScript.launcher(
+                    ? new SlurmBackend(new SlurmScript(tasks, time, memory, 1, 0, partition, account), SlurmScript.launcher(
                             FatefieldCommand.class), System.err)
                     : new LocalBackend(workers != null ? workers : Runtime.getRuntime().availableProcessors(),
                             System.err);
         } catch (IllegalArgumentException e) {
             throw new CommandLine.ParameterException(spec.commandLine(), e.getMessage().replace("--time", "--slurm-time")
-                    .replace("--mem", "--slurm-mem"));
+                    .replace("--mem", "--slurm-mem").replace("--partition", "--slurm-partition")
+                    .replace("--account", "--slurm-account"));
         }
         CalibrationDefinition definition;
         try {

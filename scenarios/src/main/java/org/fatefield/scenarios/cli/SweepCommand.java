@@ -198,6 +198,14 @@ final class SweepCommand implements Runnable {
                 description = "most tasks at once, 0 for no limit (default: ${DEFAULT-VALUE})")
         private int concurrent;
 
+        @Option(names = "--partition", paramLabel = "NAME", defaultValue = "",
+                description = "SLURM partition (default: the cluster's default)")
+        private String partition;
+
+        @Option(names = "--account", paramLabel = "NAME", defaultValue = "",
+                description = "SLURM account to charge (default: yours)")
+        private String account;
+
         @CommandLine.Spec
         private CommandLine.Model.CommandSpec spec;
 
@@ -206,8 +214,8 @@ final class SweepCommand implements Runnable {
             try {
                 Manifest manifest = Manifest.read(folder);
                 int n = tasks != null ? tasks : Math.min(1000, manifest.runs().size());
-                SlurmScript script = new SlurmScript(n, time, memory, cpus, concurrent);
-                String launcher = SlurmScript.launcher(FatefieldCommand.class);
+                SlurmScript script = new SlurmScript(n, time, memory, cpus, concurrent, partition, account);
+                SlurmScript.Launcher launcher = SlurmScript.launcher(FatefieldCommand.class);
                 Files.createDirectories(folder.resolve("logs"));
                 Files.writeString(folder.resolve("sweep.sbatch"), script.text(folder, launcher));
                 spec.commandLine().getOut().printf("Wrote %s (%d array tasks). Submit with: sbatch %s%n",
