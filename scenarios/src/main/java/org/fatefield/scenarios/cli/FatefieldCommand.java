@@ -13,7 +13,7 @@ import picocli.CommandLine;
             + " whose parameters a diffusing morphogen sets, and measures the fates that come out.",
             "Research software: not for clinical decisions.", ""},
         subcommands = {RunCommand.class, ViewCommand.class, ReplicatesCommand.class, SweepCommand.class, RobustnessCommand.class, AnalyzeCommand.class, ReportCommand.class,
-            CalibrateCommand.class, ValidateCommand.class, ScenarioHelpCommand.class, BenchCommand.class,
+            CalibrateCommand.class, ExportSbmlCommand.class, ValidateCommand.class, ScenarioHelpCommand.class, BenchCommand.class,
             CommandLine.HelpCommand.class, picocli.AutoComplete.GenerateCompletion.class},
         footer = {"", "Start with:  fatefield run demo --out demo-output",
             "How to write a scenario:  fatefield scenario-help"})

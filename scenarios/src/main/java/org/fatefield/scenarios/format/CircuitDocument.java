@@ -34,22 +34,32 @@ record CircuitDocument(String label, TomlTable toml, ScenarioChecker locator, by
             return null;
         }
         Path target = folder.resolve(name).normalize();
-        if (Path.of(name).isAbsolute() || !target.startsWith(folder.normalize()) || !name.endsWith(".toml")) {
+        boolean sbml = isSbml(name);
+        if (Path.of(name).isAbsolute() || !target.startsWith(folder.normalize()) || !(name.endsWith(".toml") || sbml)) {
             problems.add(new Problem(scenarioLabel, scenario.inputPositionOf("circuit.file").line(), 0, "circuit.file",
-                    "\"" + name + "\"", "must name a .toml file in this scenario's folder or below it"));
+                    "\"" + name + "\"", "must name a .toml circuit file or an SBML file (.xml, .sbml) in this"
+                            + " scenario's folder or below it"));
             return null;
         }
         byte[] bytes;
         try {
-            bytes = TextLimits.read(target, TextLimits.MAX_TOML_BYTES, "a circuit file is a short text");
+            bytes = TextLimits.read(target, sbml ? TextLimits.MAX_TABLE_BYTES : TextLimits.MAX_TOML_BYTES,
+                    "a circuit file is a short text");
         } catch (IOException e) {
             problems.add(new Problem(scenarioLabel, scenario.inputPositionOf("circuit.file").line(), 0, "circuit.file",
                     "\"" + name + "\"", "cannot read the circuit file " + target + ": " + TextLimits.describe(e)));
             return null;
         }
         String label = target.toString();
+        String text = new String(bytes, StandardCharsets.UTF_8);
+        if (sbml) {
+            text = SbmlCircuits.toToml(bytes, label, problems);
+            if (text == null) {
+                return null;
+            }
+        }
         ScenarioChecker checker = new ScenarioChecker(label, ScenarioChecker.Scope.CIRCUIT_FILE);
-        TomlParseResult parsed = checker.parse(new String(bytes, StandardCharsets.UTF_8));
+        TomlParseResult parsed = checker.parse(text);
         if (parsed == null) {
             problems.addAll(checker.problems());
             return null;
@@ -61,6 +71,14 @@ record CircuitDocument(String label, TomlTable toml, ScenarioChecker locator, by
         return !missing.isEmpty() || !checker.problems().isEmpty() ? null
                 : new CircuitDocument(label, toml, checker, bytes);
     }
+
+    /** True if a circuit file name is an SBML file ({@code .xml} or {@code .sbml}). */
+    static boolean isSbml(String name) {
+        return name.endsWith(".xml") || name.endsWith(".sbml");
+    }
+
+    /** [circuit] keys a scenario may give beside an SBML circuit file: how to simulate it, which SBML does not say. */
+    static final List<String> SBML_SETTINGS = List.of("noise", "system_size");
 
     /** True if an override of {@code path} belongs in an included circuit file (every circuit key but the include). */
     static boolean belongsToCircuitFile(String path) {

@@ -82,6 +82,16 @@ public final class Overrides {
         }
     }
 
+    /** These overrides followed by {@code later} (whose values win where both set a path). */
+    public Overrides and(Overrides later) {
+        Map<String, Object> copy = new LinkedHashMap<>(values);
+        later.values.forEach((path, value) -> {
+            copy.remove(path);
+            copy.put(path, value);
+        });
+        return new Overrides(copy);
+    }
+
     /** Only the overrides whose path {@code test} accepts. */
     public Overrides matching(Predicate<String> test) {
         Map<String, Object> kept = new LinkedHashMap<>();

@@ -115,9 +115,12 @@ final class ScenarioChecker {
             return;
         }
         TomlTable circuit = toml.getTable("circuit");
+        boolean sbml = circuit.isString("file") && CircuitDocument.isSbml(circuit.getString("file"));
         for (String key : circuit.keySet()) {
             if (key.equals("file")) {
                 checkValue(section.key("file").orElseThrow(), circuit, key, "circuit.file");
+            } else if (sbml && CircuitDocument.SBML_SETTINGS.contains(key)) {
+                checkValue(section.key(key).orElseThrow(), circuit, key, "circuit." + key);
             } else if (!circuit.isTable(key) && !circuit.isArray(key)) {
                 problems.add(at(circuit, key, "circuit." + key, render(circuit.get(key)),
                         "belongs in the circuit file named by circuit.file, not in the scenario"));

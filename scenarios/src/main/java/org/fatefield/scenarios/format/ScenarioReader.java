@@ -85,8 +85,17 @@ public final class ScenarioReader {
         missing.forEach(m -> problems.add(new Problem(label, 0, 0, "", null, m)));
         CircuitDocument circuit = new CircuitDocument(label, toml, checker, bytes);
         if (checker.circuitIncluded() && problems.isEmpty()) {
+            Overrides forFile = Overrides.none();
+            if (CircuitDocument.isSbml(toml.getString("circuit.file"))) {
+                // How to simulate an SBML circuit is said in the scenario; it goes onto the circuit read from SBML.
+                for (String key : CircuitDocument.SBML_SETTINGS) {
+                    if (toml.contains("circuit." + key)) {
+                        forFile = forFile.with("circuit." + key, toml.get("circuit." + key));
+                    }
+                }
+            }
             circuit = CircuitDocument.include(label, toml, folder, problems,
-                    overrides.matching(CircuitDocument::belongsToCircuitFile));
+                    forFile.and(overrides.matching(CircuitDocument::belongsToCircuitFile)));
             if (circuit == null) {
                 throw new ScenarioException(sorted(problems));
             }

@@ -122,8 +122,10 @@ public final class ScenarioSchema {
                     "growth and division"),
             new Section("circuit", false, true, List.of(
                     Key.of("file", KeyType.TEXT, "", "none",
-                            "a circuit file (TOML holding [circuit] and its sub-sections) in this scenario's folder;"
-                                    + " when given, [circuit] holds nothing else"),
+                            "a circuit file in this scenario's folder: TOML holding [circuit] and its sub-sections,"
+                                    + " or an SBML Level 3 core model (.xml or .sbml; read as a custom circuit, see"
+                                    + " the README); when given, [circuit] holds nothing else but, beside an SBML"
+                                    + " file, noise and system_size"),
                     Key.choice("type", null, List.of(SWITCH, TOGGLE, HILL_NETWORK, CUSTOM),
                             "the circuit family: the two-gene self-activating switch, the toggle (the same without"
                                     + " self-activation; [circuit.kinetics] without the self_ keys), a general n-gene"
