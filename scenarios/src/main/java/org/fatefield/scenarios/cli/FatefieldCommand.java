@@ -82,7 +82,20 @@ public final class FatefieldCommand implements Runnable {
 
     /** Entry point. */
     public static void main(String[] args) {
-        System.exit(execute(args));
+        int code;
+        try {
+            code = execute(args);
+        } catch (OutOfMemoryError e) {
+            System.err.println("fatefield ran out of memory (Java heap " + Runtime.getRuntime().maxMemory() / (1 << 20)
+                    + " MB). Give Java more, such as java -Xmx8g -jar fatefield.jar ..., or make the run smaller;"
+                    + " `fatefield validate` estimates the memory a scenario needs. Finished files are kept.");
+            code = INTERNAL_ERROR;
+        } catch (LinkageError e) {
+            System.err.println("fatefield could not load a part of itself (" + e.getMessage() + "): the jar is"
+                    + " incomplete; rebuild it with mvn -q -B package -DskipTests");
+            code = INTERNAL_ERROR;
+        }
+        System.exit(code);
     }
 
     /** Reports the version from the jar manifest. */
