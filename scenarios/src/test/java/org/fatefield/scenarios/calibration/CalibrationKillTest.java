@@ -3,12 +3,10 @@ package org.fatefield.scenarios.calibration;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
-import org.fatefield.scenarios.builtin.BuiltinScenarios;
 import org.fatefield.scenarios.cli.FatefieldCommandAccess;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -25,11 +23,7 @@ class CalibrationKillTest {
 
     @Test
     void aKilledCalibrationResumesToTheSamePosterior() throws Exception {
-        String tiny = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8)
-                .replace("duration = 48.0", "duration = 6.0").replace("founders = 120", "founders = 30");
-        Files.writeString(tmp.resolve("tiny.toml"), tiny);
-        Files.writeString(tmp.resolve("data.toml"), "[data]\n[[statistic]]\nname = \"population\"\nvalue = 45\n"
-                + "sd = 4\nunit = \"cells\"\n");
+        TinyCalibration.write(tmp);
         Path file = tmp.resolve("calibration.toml");
         Files.writeString(file, """
                 [calibration]
@@ -41,11 +35,7 @@ class CalibrationKillTest {
                 predictive = 4
                 seed = 21
                 [[parameter]]
-                key = "division.cycle_mean"
-                prior = "uniform"
-                low = 4.0
-                high = 12.0
-                """);
+                """ + TinyCalibration.CYCLE_PARAMETER);
         Path straight = tmp.resolve("straight");
         assertEquals(0, FatefieldCommandAccess.run("calibrate", file.toString(), "--out", straight.toString(),
                 "--workers", "1"));

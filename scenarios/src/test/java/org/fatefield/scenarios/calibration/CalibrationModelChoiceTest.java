@@ -4,10 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import com.google.gson.JsonArray;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import org.fatefield.scenarios.builtin.BuiltinScenarios;
 import org.fatefield.scenarios.cli.FatefieldCommandAccess;
 import org.fatefield.scenarios.output.JsonFiles;
 import org.junit.jupiter.api.Test;
@@ -26,19 +24,9 @@ class CalibrationModelChoiceTest {
 
     @Test
     void twoIdenticalHypothesesGetEqualProbabilityWithinTheirMonteCarloError() throws Exception {
-        String tiny = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8)
-                .replace("duration = 48.0", "duration = 6.0").replace("founders = 120", "founders = 30");
-        Files.writeString(tmp.resolve("tiny.toml"), tiny);
-        Files.writeString(tmp.resolve("twin.toml"), tiny);
-        Files.writeString(tmp.resolve("data.toml"), "[data]\n[[statistic]]\nname = \"population\"\nvalue = 45\n"
-                + "sd = 4\nunit = \"cells\"\n");
-        String parameter = """
-                [[model.parameter]]
-                key = "division.cycle_mean"
-                prior = "uniform"
-                low = 4.0
-                high = 12.0
-                """;
+        TinyCalibration.write(tmp);
+        Files.copy(tmp.resolve("tiny.toml"), tmp.resolve("twin.toml"));
+        String parameter = "[[model.parameter]]\n" + TinyCalibration.CYCLE_PARAMETER;
         Path file = tmp.resolve("choice.toml");
         Files.writeString(file, "[calibration]\ndata = \"data.toml\"\nparticles = 30\ngenerations = 3\npredictive = 0\n"
                 + "seed = 17\n[[model]]\nname = \"first\"\nscenario = \"tiny.toml\"\n" + parameter

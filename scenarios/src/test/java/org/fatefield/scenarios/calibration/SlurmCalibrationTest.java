@@ -3,11 +3,9 @@ package org.fatefield.scenarios.calibration;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.TimeUnit;
-import org.fatefield.scenarios.builtin.BuiltinScenarios;
 import org.fatefield.scenarios.cli.FatefieldCommandAccess;
 import org.fatefield.scenarios.sweep.RequiredSlurm;
 import org.junit.jupiter.api.Test;
@@ -30,11 +28,7 @@ class SlurmCalibrationTest {
     void slurmRoundsGiveTheSamePosteriorAsLocalWorkers() throws Exception {
         RequiredSlurm.check("SlurmCalibrationTest");
 
-        String tiny = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8)
-                .replace("duration = 48.0", "duration = 6.0").replace("founders = 120", "founders = 30");
-        Files.writeString(tmp.resolve("tiny.toml"), tiny);
-        Files.writeString(tmp.resolve("data.toml"), "[data]\n[[statistic]]\nname = \"population\"\nvalue = 45\n"
-                + "sd = 4\nunit = \"cells\"\n");
+        TinyCalibration.write(tmp);
         Path file = tmp.resolve("calibration.toml");
         Files.writeString(file, """
                 [calibration]
@@ -45,11 +39,7 @@ class SlurmCalibrationTest {
                 predictive = 2
                 seed = 4
                 [[parameter]]
-                key = "division.cycle_mean"
-                prior = "uniform"
-                low = 4.0
-                high = 12.0
-                """);
+                """ + TinyCalibration.CYCLE_PARAMETER);
         Path local = tmp.resolve("local");
         Path cluster = tmp.resolve("cluster");
         assertEquals(0, FatefieldCommandAccess.run("calibrate", file.toString(), "--out", local.toString(),
