@@ -29,9 +29,11 @@ import picocli.CommandLine;
 @Command(name = "sweep", mixinStandardHelpOptions = true,
         description = {"Vary scenario values over many runs, on one machine or as cluster array jobs.",
             "A sweep file (TOML) has [sweep] with scenario (a file next to it or a built-in), design (grid,"
-                    + " latin-hypercube, sobol), points, replicates and seed, and one [[parameter]] per varied"
+                    + " latin-hypercube, sobol, table), points, replicates and seed, and one [[parameter]] per varied"
                     + " value: key (a scenario key path such as morphogen.source[1].rate or coupling[1].gain)"
-                    + " with values = [...] or low, high, steps and scale (linear or log)."},
+                    + " with values = [...] or low, high, steps and scale (linear or log).",
+            "design = \"table\" takes the points from table = \"<file>.csv\" next to the sweep file instead: its"
+                    + " header names the keys, each row is one point."},
         subcommands = {SweepCommand.Plan.class, SweepCommand.Run.class, SweepCommand.Slurm.class,
             SweepCommand.Collect.class})
 final class SweepCommand implements Runnable {

@@ -22,7 +22,8 @@ import org.tomlj.TomlTable;
  * <pre>
  * [sweep]
  * scenario = "base.toml"          # file next to the sweep file, or a built-in name
- * design = "grid"                 # grid | latin-hypercube | sobol
+ * design = "grid"                 # grid | latin-hypercube | sobol | table
+ * table = "design.csv"            # design = "table": header = keys, one row per point
  * points = 16                     # points of a latin-hypercube or sobol design
  * replicates = 3                  # tissues per point, each with its own seed
  * seed = 1                        # master seed
@@ -39,9 +40,10 @@ import org.tomlj.TomlTable;
  * @param replicates     tissues per point
  * @param seed           master seed
  * @param parameters     varied values
+ * @param table          the points of a table design (empty for the others)
  */
 public record SweepDefinition(String scenarioText, String scenarioLabel, String design, int points, int replicates,
-        long seed, List<SweepParameter> parameters) {
+        long seed, List<SweepParameter> parameters, List<double[]> table) {
 
     /** Most points a design may have, and steps a parameter may take. */
     private static final long MAX_POINTS = 100_000;
@@ -77,24 +79,35 @@ public record SweepDefinition(String scenarioText, String scenarioLabel, String 
         }
         TomlTable sweep = toml.getTableOrEmpty("sweep");
         for (String key : sweep.keySet()) {
-            if (!List.of("scenario", "design", "points", "replicates", "seed").contains(key)) {
-                problems.add(at(label, sweep, key, "sweep." + key, "unknown key; keys are scenario, design, points,"
+            if (!List.of("scenario", "design", "points", "replicates", "seed", "table").contains(key)) {
+                problems.add(at(label, sweep, key, "sweep." + key, "unknown key; keys are scenario, design, table, points,"
                         + " replicates, seed"));
             }
         }
         String scenario = sweep.isString("scenario") ? sweep.getString("scenario") : null;
         String text = BaseScenarioText.read(label, file, "sweep", sweep, "scenario", "sweep.scenario", problems);
         String design = sweep.isString("design") ? sweep.getString("design") : sweep.contains("design") ? "" : "grid";
-        if (!List.of("grid", "latin-hypercube", "sobol").contains(design)) {
+        if (!List.of("grid", "latin-hypercube", "sobol", "table").contains(design)) {
             problems.add(at(label, sweep, "design", "sweep.design", "must be one of \"grid\", \"latin-hypercube\","
-                    + " \"sobol\""));
+                    + " \"sobol\", \"table\""));
         }
         long points = wholeNumber(label, sweep, "points", 8, 1, MAX_POINTS, problems);
         long replicates = wholeNumber(label, sweep, "replicates", 1, 1, 10_000, problems);
         long seed = wholeNumber(label, sweep, "seed", 1, 0, RandomStreams.MAX_SEED, problems);
         List<SweepParameter> parameters = new ArrayList<>();
         TomlArray array = toml.getArrayOrEmpty("parameter");
-        if (array.isEmpty()) {
+        DesignTable table = null;
+        if (design.equals("table")) {
+            table = DesignTable.read(label, file, sweep, MAX_POINTS, problems);
+            if (!array.isEmpty()) {
+                problems.add(new Problem(label, 0, 0, "parameter", null, "a table design takes its keys from the"
+                        + " table's header; remove the [[parameter]] sections"));
+            }
+            if (table != null) {
+                parameters.addAll(table.parameters());
+                points = table.rows().size();
+            }
+        } else if (array.isEmpty()) {
             problems.add(new Problem(label, 0, 0, "parameter", null, "at least one [[parameter]] to vary is needed"));
         }
         for (int i = 0; i < array.size(); i++) {
@@ -119,7 +132,8 @@ public record SweepDefinition(String scenarioText, String scenarioLabel, String 
         if (!problems.isEmpty()) {
             throw new ScenarioException(problems);
         }
-        return new SweepDefinition(text, scenario, design, (int) points, (int) replicates, seed, parameters);
+        return new SweepDefinition(text, scenario, design, (int) points, (int) replicates, seed, parameters,
+                table == null ? List.of() : table.rows());
     }
 
     /** Points of a full grid over {@code parameters}: the product of their value counts. */
@@ -203,6 +217,10 @@ public record SweepDefinition(String scenarioText, String scenarioLabel, String 
         List<double[]> out = new ArrayList<>();
         if (design.equals("grid")) {
             return Designs.grid(parameters);
+        }
+        if (design.equals("table")) {
+            table.forEach(row -> out.add(row.clone()));
+            return out;
         }
         List<double[]> unit = design.equals("sobol") ? Designs.sobol(points, parameters.size())
                 : Designs.latinHypercube(points, parameters.size(),
