@@ -120,6 +120,9 @@ final class AnalyzeCommand implements Callable<Integer> {
     @Mixin
     private SharedOptions.Settings settings;
 
+    @Mixin
+    private SharedOptions.Quiet quiet;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
@@ -149,8 +152,9 @@ final class AnalyzeCommand implements Callable<Integer> {
             try {
                 long start = System.nanoTime();
                 result = analysis.run(stage -> {
-                    err.printf(Locale.ROOT, "analyze: %s (%.1f s)%n", stage, (System.nanoTime() - start) / 1e9);
-                    err.flush();
+                    PrintWriter log = quiet.progress(err);
+                    log.printf(Locale.ROOT, "analyze: %s (%.1f s)%n", stage, (System.nanoTime() - start) / 1e9);
+                    log.flush();
                 });
             } catch (IllegalArgumentException e) {
                 err.println("Cannot analyse " + loaded.name() + ": " + e.getMessage());

@@ -81,6 +81,9 @@ final class CalibrateCommand implements Callable<Integer> {
     @Mixin
     private FigureOptions figures;
 
+    @Mixin
+    private SharedOptions.Quiet quiet;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
@@ -94,9 +97,9 @@ final class CalibrateCommand implements Callable<Integer> {
         try {
             backend = slurm
                     ? new SlurmBackend(new SlurmScript(tasks, time, memory, 1, 0, partition, account), SlurmScript.launcher(
-                            FatefieldCommand.class), System.err)
+                            FatefieldCommand.class), quiet.progress(System.err))
                     : new LocalBackend(workers != null ? workers : Runtime.getRuntime().availableProcessors(),
-                            System.err);
+                            quiet.progress(System.err));
         } catch (IllegalArgumentException e) {
             throw new CommandLine.ParameterException(spec.commandLine(), e.getMessage().replace("--time", "--slurm-time")
                     .replace("--mem", "--slurm-mem").replace("--partition", "--slurm-partition")
@@ -110,7 +113,7 @@ final class CalibrateCommand implements Callable<Integer> {
             return FatefieldCommand.INVALID_INPUT;
         }
         try {
-            Calibration.Outcome outcome = Calibration.run(definition, out.path(), backend, System.err,
+            Calibration.Outcome outcome = Calibration.run(definition, out.path(), backend, quiet.progress(System.err),
                     figures.format());
             Map<String, String> inputs = new LinkedHashMap<>();
             inputs.put(definition.label(), Provenance.sha256(definition.text()));

@@ -54,6 +54,9 @@ final class ReplicatesCommand implements Callable<Integer> {
     @Mixin
     private SharedOptions.Settings settings;
 
+    @Mixin
+    private SharedOptions.Quiet quiet;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
@@ -86,7 +89,7 @@ final class ReplicatesCommand implements Callable<Integer> {
                             .withFigures(figures.format()));
                 }
                 set.add(s, done.metrics());
-                err.printf("replicate %d/%d (seed %d) done%n", r + 1, runs, s);
+                quiet.progress(err).printf("replicate %d/%d (seed %d) done%n", r + 1, runs, s);
                 err.flush();
             }
             set.write(RunFolder.open(out));

@@ -60,6 +60,9 @@ final class RobustnessCommand implements Callable<Integer> {
     @Mixin
     private FigureOptions figures;
 
+    @Mixin
+    private SharedOptions.Quiet quiet;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
@@ -88,7 +91,7 @@ final class RobustnessCommand implements Callable<Integer> {
             long start = System.nanoTime();
             List<RobustnessAnalysis.Sensitivity> result = RobustnessAnalysis.run(loaded.tissue(), perturbations,
                     fraction, replicates, loaded.seed(), workers, (done, total) -> {
-                        err.printf(Locale.ROOT, "robustness: %d/%d tissues done (%.1f s)%n", done, total,
+                        quiet.progress(err).printf(Locale.ROOT, "robustness: %d/%d tissues done (%.1f s)%n", done, total,
                                 (System.nanoTime() - start) / 1e9);
                         err.flush();
                     });

@@ -1,6 +1,9 @@
 package org.fatefield.scenarios.cli;
 
+import java.io.OutputStream;
+import java.io.PrintStream;
 import java.io.PrintWriter;
+import java.io.Writer;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -78,6 +81,26 @@ final class SharedOptions {
                 }
             }
             return value;
+        }
+    }
+
+    /**
+     * {@code --quiet}: no progress lines on standard error, only errors (for scripts and cluster
+     * logs); the results and the final summary line are the same.
+     */
+    static final class Quiet {
+
+        @Option(names = "--quiet", description = "print no progress, only errors")
+        private boolean quiet;
+
+        /** Where progress goes: {@code err}, or nowhere when quiet. */
+        PrintStream progress(PrintStream err) {
+            return quiet ? new PrintStream(OutputStream.nullOutputStream()) : err;
+        }
+
+        /** As {@link #progress(PrintStream)} for a writer. */
+        PrintWriter progress(PrintWriter err) {
+            return quiet ? new PrintWriter(Writer.nullWriter()) : err;
         }
     }
 

@@ -21,6 +21,7 @@ import org.fatefield.scenarios.sweep.SweepCollector;
 import org.fatefield.scenarios.sweep.SweepDefinition;
 import org.fatefield.scenarios.sweep.SweepRunner;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine;
@@ -129,6 +130,9 @@ final class SweepCommand implements Runnable {
         @Option(names = "--shard", paramLabel = "I/N", description = "run only every N-th run starting at the I-th")
         private String shard;
 
+        @Mixin
+        private SharedOptions.Quiet quiet;
+
         @CommandLine.Spec
         private CommandLine.Model.CommandSpec spec;
 
@@ -143,7 +147,7 @@ final class SweepCommand implements Runnable {
                 int[] share = shard(shard, System.getenv());
                 List<Manifest.Run> runs = runner.manifest().shard(share[0], share[1]);
                 int k = workers != null ? workers : Runtime.getRuntime().availableProcessors();
-                SweepRunner.Outcome outcome = runner.run(runs, k, System.err);
+                SweepRunner.Outcome outcome = runner.run(runs, k, quiet.progress(System.err));
                 spec.commandLine().getOut().printf("Shard %d/%d: %d already done, %d finished now, %d failed%n",
                         share[0], share[1], outcome.skipped(), outcome.finished(), outcome.failed());
                 return outcome.failed() > 0 ? FatefieldCommand.INVALID_INPUT : 0;
