@@ -43,6 +43,10 @@ class ExamplesTest {
     @Test
     void theExampleSweepPlansRunsAndCollects() throws Exception {
         Path sweep = Path.of("examples", "sweeps", "glim-decay-sweep.toml");
+        assertEquals(0, FatefieldCommandAccess.run("validate", sweep.toString(),
+                Path.of("examples", "calibration", "glassfin-calibration.toml").toString(),
+                Path.of("examples", "calibration", "partition-choice.toml").toString()), "validate reads sweep and"
+                        + " calibration files");
         Path out = tmp.resolve("sweep");
         assertEquals(0, FatefieldCommandAccess.run("sweep", "plan", sweep.toString(), "--out", out.toString()));
         assertEquals(0, FatefieldCommandAccess.run("sweep", "run", out.toString(), "--workers", "2"));
