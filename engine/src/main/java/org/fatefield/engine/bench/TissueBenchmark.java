@@ -1,8 +1,10 @@
 package org.fatefield.engine.bench;
 
 import java.util.Arrays;
+import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.coupling.CouplingLaw;
 import org.fatefield.engine.division.CycleTimeDistribution;
+import org.fatefield.engine.field.MorphogenField;
 import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.tissue.GrowthSpec;
 import org.fatefield.engine.tissue.Timing;
@@ -23,8 +25,13 @@ public final class TissueBenchmark {
      * @param tickRate        full tick (field, cells, division check, mechanics) in cell-steps per second
      * @param cellStepRate    the cell loop alone (signal, parameters, circuit, ageing) in cell-steps per second
      * @param bareRate        the bare loop in cell-steps per second
+     * @param fieldRate       the field stage alone (every field, one step), in cell-steps per second
+     * @param bareFieldRate   its bare baseline ({@link BareFieldLoop}), in cell-steps per second
+     * @param mechanicsRate   the mechanics stage alone (one relaxation), in cell-steps per second
+     * @param bareMechanicsRate its bare baseline ({@link BareMechanicsLoop}), in cell-steps per second
      */
-    public record Result(int cells, double tickRate, double cellStepRate, double bareRate) {
+    public record Result(int cells, double tickRate, double cellStepRate, double bareRate, double fieldRate,
+            double bareFieldRate, double mechanicsRate, double bareMechanicsRate) {
 
         /** Cell loop over bare loop: 1 means no overhead. */
         public double ratio() {
@@ -78,6 +85,15 @@ public final class TissueBenchmark {
         double[] tick = new double[repeats];
         double[] cellsOnly = new double[repeats];
         double[] bareLoop = new double[repeats];
+        double[] fieldOnly = new double[repeats];
+        double[] bareField = new double[repeats];
+        double[] mechanicsOnly = new double[repeats];
+        double[] bareMechanics = new double[repeats];
+        MorphogenField primary = tissue.fields().get(0);
+        BareFieldLoop fieldLoop = new BareFieldLoop(primary.columns(), primary.rows(),
+                primary.spec().diffusion() * dt / primary.subStepsFor(dt) / (primary.spacing() * primary.spacing()),
+                1 - primary.spec().decay() * dt / primary.subStepsFor(dt), primary.subStepsFor(dt));
+        BareMechanicsLoop mechanicsLoop = bareMechanics(tissue, spec);
         double sink = 0;
         for (int r = -1; r < repeats; r++) {
             // A collection before each timing, so that garbage left by one part is not charged to the next.
@@ -88,7 +104,7 @@ public final class TissueBenchmark {
             System.gc();
             long t1b = System.nanoTime();
             for (int s = 0; s < steps; s++) {
-                tissue.stepCellsOnly();
+                tissue.stepOnly(Tissue.Stage.CELLS);
             }
             long t2 = System.nanoTime();
             System.gc();
@@ -98,18 +114,59 @@ public final class TissueBenchmark {
             }
             long t3 = System.nanoTime();
             sink += bare.checksum();
+            long[] t = new long[8];
+            t[0] = System.nanoTime();
+            for (int s = 0; s < steps; s++) {
+                tissue.stepOnly(Tissue.Stage.FIELDS);
+            }
+            t[1] = System.nanoTime();
+            for (int s = 0; s < steps; s++) {
+                fieldLoop.step();
+            }
+            t[2] = System.nanoTime();
+            System.gc();
+            t[3] = System.nanoTime();
+            for (int s = 0; s < steps; s++) {
+                tissue.stepOnly(Tissue.Stage.MECHANICS);
+            }
+            t[4] = System.nanoTime();
+            for (int s = 0; s < steps; s++) {
+                mechanicsLoop.step(dt);
+            }
+            t[5] = System.nanoTime();
+            sink += fieldLoop.checksum() + mechanicsLoop.checksum();
             if (r >= 0) {
                 double work = (double) cells * steps;
                 tick[r] = work / ((t1 - t0) / 1e9);
                 cellsOnly[r] = work / ((t2 - t1b) / 1e9);
                 bareLoop[r] = work / ((t3 - t2b) / 1e9);
+                fieldOnly[r] = work / ((t[1] - t[0]) / 1e9);
+                bareField[r] = work / ((t[2] - t[1]) / 1e9);
+                mechanicsOnly[r] = work / ((t[4] - t[3]) / 1e9);
+                bareMechanics[r] = work / ((t[5] - t[4]) / 1e9);
             }
         }
         if (Double.isNaN(sink)) {
             throw new IllegalStateException("benchmark state became NaN");
         }
         tissue.finish();
-        return new Result(tissue.cells().size(), median(tick), median(cellsOnly), median(bareLoop));
+        return new Result(tissue.cells().size(), median(tick), median(cellsOnly), median(bareLoop), median(fieldOnly),
+                median(bareField), median(mechanicsOnly), median(bareMechanics));
+    }
+
+    /** The bare mechanics loop on the tissue's own cells, with their positions and radii. */
+    private static BareMechanicsLoop bareMechanics(Tissue tissue, TissueSpec spec) {
+        int n = tissue.cells().size();
+        double[] x = new double[n];
+        double[] y = new double[n];
+        double[] r = new double[n];
+        for (int i = 0; i < n; i++) {
+            Cell c = tissue.cells().get(i);
+            x[i] = c.x();
+            y[i] = c.y();
+            r[i] = c.radius(spec.growth().cellRadius());
+        }
+        return new BareMechanicsLoop(x, y, r, spec.growth().repulsionRate());
     }
 
     /**

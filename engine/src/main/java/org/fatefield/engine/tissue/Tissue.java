@@ -198,12 +198,24 @@ public final class Tissue extends SimState {
         series.add(new TimeSeries.Row(time(), counts, population.size(), field.mean()));
     }
 
+    /** One stage of the tick, for benchmarks that time it alone. */
+    public enum Stage { CELLS, FIELDS, MECHANICS }
+
     /**
-     * Steps only the cells (signal, parameters, circuit, ageing), without time advancing or
-     * division: for benchmarks that separate the cell loop from the rest of the tick.
+     * Runs one stage of a tick (the cells: signal, parameters, circuit, ageing; every field; or
+     * one mechanics relaxation) without time advancing or division: for benchmarks only.
      */
-    public void stepCellsOnly() {
-        stepCells(spec.timing().step(), time() + spec.timing().step());
+    public void stepOnly(Stage stage) {
+        double dt = spec.timing().step();
+        switch (stage) {
+            case CELLS -> stepCells(dt, time() + dt);
+            case FIELDS -> {
+                for (MorphogenField f : fields) {
+                    f.advance(dt, pool);
+                }
+            }
+            case MECHANICS -> mechanics.relax(population, dt, pool);
+        }
     }
 
     /**

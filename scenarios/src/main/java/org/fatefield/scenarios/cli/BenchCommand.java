@@ -1,6 +1,7 @@
 package org.fatefield.scenarios.cli;
 
 import java.io.PrintWriter;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.fatefield.circuits.model.SelfActivatingSwitch;
@@ -88,6 +89,8 @@ final class BenchCommand implements Callable<Integer> {
                 Runtime.getRuntime().availableProcessors(), repeats, steps, density, area);
         out.printf("%10s %8s %16s %16s %16s %10s %10s%n", "cells", "threads", "full tick /s", "cell loop /s",
                 "bare loop /s", "loop/bare", "speed-up");
+        List<TissueBenchmark.Result> results = new ArrayList<>();
+        List<Integer> threadsOf = new ArrayList<>();
         for (int cells : sizes) {
             double single = Double.NaN;
             for (int threads : threadCounts) {
@@ -99,10 +102,24 @@ final class BenchCommand implements Callable<Integer> {
                 out.printf("%10d %8d %16.4g %16.4g %16.4g %10.2f %10.2f%n", r.cells(), threads, r.tickRate(),
                         r.cellStepRate(), r.bareRate(), r.ratio(), r.tickRate() / single);
                 out.flush();
+                results.add(r);
+                threadsOf.add(threads);
             }
         }
         out.println("Rates are cell-steps per second. loop/bare = 1 means no overhead over the one-thread bare loop;"
                 + " speed-up is the full tick against the first thread count.");
+        out.println();
+        out.printf("%10s %8s %14s %14s %10s %14s %14s %10s%n", "cells", "threads", "field /s", "bare field /s",
+                "field/bare", "mechanics /s", "bare mech. /s", "mech/bare");
+        for (int i = 0; i < results.size(); i++) {
+            TissueBenchmark.Result r = results.get(i);
+            out.printf("%10d %8d %14.4g %14.4g %10.2f %14.4g %14.4g %10.2f%n", r.cells(), threadsOf.get(i), r.fieldRate(),
+                    r.bareFieldRate(), r.fieldRate() / r.bareFieldRate(), r.mechanicsRate(), r.bareMechanicsRate(),
+                    r.mechanicsRate() / r.bareMechanicsRate());
+        }
+        out.println("Each stage timed alone on the same tissue, per cell-step. Bare field: the same grid and sub-steps"
+                + " as plain arrays (one thread); bare mechanics: the same pair arithmetic over a neighbour list built"
+                + " once (one thread, no bucket rebuild, no cell objects).");
         if (memoryCells > 0) {
             out.printf("Heap per live cell at %d cells (cells, states, streams, field and buffers): %.0f bytes%n",
                     memoryCells, TissueBenchmark.bytesPerCell(loaded.tissue(), memoryCells, area));
