@@ -93,8 +93,13 @@ final class ValidateCommand implements Callable<Integer> {
             return "scenario";
         }
         try {
-            TomlParseResult toml = Toml.parse(new String(TextLimits.read(path, TextLimits.MAX_TOML_BYTES, "a short"
-                    + " text"), StandardCharsets.UTF_8));
+            String text = new String(TextLimits.read(path, TextLimits.MAX_TOML_BYTES, "a short text"),
+                    StandardCharsets.UTF_8);
+            if (TextLimits.tooDeep(text) != null) {
+                // A nesting bomb: the scenario reader reports it without parsing.
+                return "scenario";
+            }
+            TomlParseResult toml = Toml.parse(text);
             if (toml.contains("sweep") && !toml.contains("tissue")) {
                 return "sweep";
             }
