@@ -137,13 +137,7 @@ final class PerturbationKernel {
 
     /** A proposal: a centre drawn by weight, moved by the normal kernel. */
     double[] propose(UniformRandomProvider random, ZigguratSampler.NormalizedGaussian gaussian) {
-        double r = random.nextDouble();
-        int j = 0;
-        double cumulative = weights[0];
-        while (r >= cumulative && j < weights.length - 1) {
-            j++;
-            cumulative += weights[j];
-        }
+        int j = Population.pick(weights, random.nextDouble());
         int k = centres[0].length;
         double[] z = new double[k];
         for (int a = 0; a < k; a++) {

@@ -32,6 +32,23 @@ public record Population(int model, double[][] theta, double[][] working, double
         return sum > 0 ? 1 / sum : 0;
     }
 
+    /** The particle a uniform draw {@code u} in [0, 1) picks by weight (inverse of the weights' cumulative sum). */
+    public int pick(double u) {
+        return pick(weights, u);
+    }
+
+    /** The index {@code u} in [0, 1) picks from normalised {@code weights} by their cumulative sum. */
+    static int pick(double[] weights, double u) {
+        double cumulative = 0;
+        for (int j = 0; j < weights.length; j++) {
+            cumulative += weights[j];
+            if (u < cumulative) {
+                return j;
+            }
+        }
+        return weights.length - 1;
+    }
+
     /** Weighted mean of parameter {@code a} on the natural scale. */
     public double mean(int a) {
         double m = 0;

@@ -3,21 +3,18 @@ package org.fatefield.scenarios.calibration;
 import com.google.gson.JsonObject;
 import java.io.IOException;
 import java.io.PrintStream;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
+import java.util.TreeMap;
 import org.fatefield.circuits.inference.AbcModel;
 import org.fatefield.circuits.inference.AbcSmc;
 import org.fatefield.circuits.inference.Generation;
 import org.fatefield.circuits.inference.ScaledDistance;
 import org.fatefield.scenarios.output.JsonFiles;
+import org.fatefield.scenarios.output.Provenance;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.viz.chart.FigureFormat;
 
@@ -152,26 +149,18 @@ public final class Calibration {
 
     /** SHA-256 over the calibration file, the data (and profile) and every model's scenario and includes. */
     static String checksum(CalibrationDefinition d) {
-        try {
-            MessageDigest digest = MessageDigest.getInstance("SHA-256");
-            List<String> parts = new ArrayList<>(List.of(d.text(), d.data().text(),
-                    d.data().profileText() == null ? "" : d.data().profileText()));
-            for (CalibrationModel m : d.models()) {
-                parts.add(m.base().text());
-                for (Map.Entry<String, String> e : new java.util.TreeMap<>(m.base().includes()).entrySet()) {
-                    parts.add(e.getKey());
-                    parts.add(e.getValue());
-                }
-            }
-            for (String p : parts) {
-                byte[] bytes = p.getBytes(StandardCharsets.UTF_8);
-                digest.update(Long.toString(bytes.length).getBytes(StandardCharsets.UTF_8));
-                digest.update((byte) ':');
-                digest.update(bytes);
-            }
-            return HexFormat.of().formatHex(digest.digest());
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 is required of every Java platform", e);
+        List<String> parts = new ArrayList<>(List.of(d.text(), d.data().text(),
+                d.data().profileText() == null ? "" : d.data().profileText()));
+        for (CalibrationModel m : d.models()) {
+            parts.add(m.base().text());
+            new TreeMap<>(m.base().includes()).forEach((name, text) -> {
+                parts.add(name);
+                parts.add(text);
+            });
         }
+        // Each part prefixed by its length, so that no two different lists of parts hash alike.
+        StringBuilder all = new StringBuilder();
+        parts.forEach(p -> all.append(p.length()).append(':').append(p));
+        return Provenance.sha256(all.toString());
     }
 }

@@ -43,7 +43,7 @@ final class PredictiveCheck {
             }
             UniformRandomProvider random = RandomStreams.of(definition.settings().seed()).stream(-1_000 - p.model());
             for (int i = 0; i < draws; i++) {
-                int j = pick(p.weights(), random.nextDouble());
+                int j = p.pick(random.nextDouble());
                 batch.add(new Candidate(p.model(), 0, 0, i, p.theta()[j].clone(), random.nextLong() >>> 11));
             }
         }
@@ -119,16 +119,5 @@ final class PredictiveCheck {
         int lo = (int) Math.floor(h);
         int hi = Math.min(sorted.length - 1, lo + 1);
         return sorted[lo] + (h - lo) * (sorted[hi] - sorted[lo]);
-    }
-
-    private static int pick(double[] weights, double r) {
-        double cumulative = 0;
-        for (int j = 0; j < weights.length; j++) {
-            cumulative += weights[j];
-            if (r < cumulative) {
-                return j;
-            }
-        }
-        return weights.length - 1;
     }
 }

@@ -5,6 +5,7 @@ import java.io.PrintWriter;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.Callable;
 import org.fatefield.engine.metrics.FateReach;
@@ -14,7 +15,6 @@ import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.format.TextLimits;
 import org.fatefield.scenarios.sweep.SweepDefinition;
-import org.tomlj.Toml;
 import org.tomlj.TomlParseResult;
 import picocli.CommandLine;
 import picocli.CommandLine.Command;
@@ -95,11 +95,11 @@ final class ValidateCommand implements Callable<Integer> {
         try {
             String text = new String(TextLimits.read(path, TextLimits.MAX_TOML_BYTES, "a short text"),
                     StandardCharsets.UTF_8);
-            if (TextLimits.tooDeep(text) != null) {
-                // A nesting bomb: the scenario reader reports it without parsing.
+            // Unreadable or too deeply nested: the scenario reader reports why.
+            TomlParseResult toml = TextLimits.parseToml(file, text, new ArrayList<>());
+            if (toml == null) {
                 return "scenario";
             }
-            TomlParseResult toml = Toml.parse(text);
             if (toml.contains("sweep") && !toml.contains("tissue")) {
                 return "sweep";
             }

@@ -10,7 +10,6 @@ import org.fatefield.circuits.random.RandomStreams;
 import org.fatefield.scenarios.format.Problem;
 import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.format.TextLimits;
-import org.tomlj.Toml;
 import org.tomlj.TomlArray;
 import org.tomlj.TomlInvalidTypeException;
 import org.tomlj.TomlParseResult;
@@ -54,22 +53,15 @@ public record SweepDefinition(String scenarioText, String scenarioLabel, String 
     public static SweepDefinition read(Path file) throws ScenarioException {
         String label = file.toString();
         List<Problem> problems = new ArrayList<>();
-        TomlParseResult toml;
+        String fileText;
         try {
-            String text = new String(TextLimits.read(file, TextLimits.MAX_TOML_BYTES, "a sweep file is a short text"),
+            fileText = new String(TextLimits.read(file, TextLimits.MAX_TOML_BYTES, "a sweep file is a short text"),
                     StandardCharsets.UTF_8);
-            int[] deep = TextLimits.tooDeep(text);
-            if (deep != null) {
-                throw new ScenarioException(List.of(new Problem(label, deep[0], deep[1], "", null, "arrays or inline"
-                        + " tables nest more than " + TextLimits.MAX_NESTING + " deep here")));
-            }
-            toml = Toml.parse(text);
         } catch (IOException e) {
             throw new ScenarioException(List.of(new Problem(label, 0, 0, "", null, "cannot read: " + e.getMessage())));
         }
-        if (toml.hasErrors()) {
-            toml.errors().forEach(e -> problems.add(new Problem(label, e.position().line(), e.position().column(), "",
-                    null, "not valid TOML: " + e.getMessage())));
+        TomlParseResult toml = TextLimits.parseToml(label, fileText, problems);
+        if (toml == null) {
             throw new ScenarioException(problems);
         }
         for (String key : toml.keySet()) {
