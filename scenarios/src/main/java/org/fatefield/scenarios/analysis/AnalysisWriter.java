@@ -123,14 +123,16 @@ public final class AnalysisWriter {
     private void steadyStates(List<SteadyState> states) throws IOException {
         List<String> header = new ArrayList<>(List.of(plan.parameter()));
         header.addAll(species);
-        header.addAll(List.of("type", "stable", "eigenvalues"));
+        header.addAll(List.of("type", "stable"));
+        header.addAll(eigenvalueHeader());
         table("steady-states.csv", header, rows -> {
             for (SteadyState s : states) {
                 List<String> row = new ArrayList<>(List.of(RunTables.number(plan.at())));
                 for (double v : s.state()) {
                     row.add(RunTables.number(v));
                 }
-                row.addAll(List.of(s.type().label(), Boolean.toString(s.isStable()), eigenvalues(s.eigenvalues())));
+                row.addAll(List.of(s.type().label(), Boolean.toString(s.isStable())));
+                row.addAll(eigenvalues(s.eigenvalues()));
                 rows.add(row);
             }
         });
@@ -139,7 +141,7 @@ public final class AnalysisWriter {
     private void branches(List<Branch> branches) throws IOException {
         List<String> header = new ArrayList<>(List.of("branch", "point", plan.parameter()));
         header.addAll(species);
-        header.addAll(List.of("stable", "leading_eigenvalue_re", "leading_eigenvalue_im"));
+        header.addAll(List.of("stable", "leading_eigenvalue_re_per_h", "leading_eigenvalue_im_per_h"));
         table("branches.csv", header, rows -> {
             for (Branch b : branches) {
                 int k = 0;
@@ -158,7 +160,8 @@ public final class AnalysisWriter {
         List<String> special = new ArrayList<>(List.of("branch", "type", plan.parameter()));
         special.addAll(species);
         // The imaginary part of the critical eigenvalue pair at a Hopf point: an angular frequency.
-        special.addAll(List.of("frequency_rad_per_h", "criticality", "normal_form_coefficient", "eigenvalues"));
+        special.addAll(List.of("frequency_rad_per_h", "criticality", "normal_form_coefficient"));
+        special.addAll(eigenvalueHeader());
         table("special-points.csv", special, rows -> {
             for (Branch b : branches) {
                 for (SpecialPoint s : b.specials()) {
@@ -168,7 +171,8 @@ public final class AnalysisWriter {
                         row.add(RunTables.number(v));
                     }
                     row.addAll(List.of(RunTables.number(s.frequency()), s.criticality().label(),
-                            RunTables.number(s.coefficient()), eigenvalues(s.eigenvalues())));
+                            RunTables.number(s.coefficient())));
+                    row.addAll(eigenvalues(s.eigenvalues()));
                     rows.add(row);
                 }
             }
@@ -207,9 +211,9 @@ public final class AnalysisWriter {
                 for (int i = 0; i < map.xs().length; i++) {
                     int a = map.attractor()[j][i];
                     List<String> row = new ArrayList<>(List.of(RunTables.number(map.xs()[i]),
-                            RunTables.number(map.ys()[j]), Integer.toString(a)));
+                            RunTables.number(map.ys()[j]), a < 0 ? RunTables.MISSING : Integer.toString(a)));
                     for (int s = 0; s < species.size(); s++) {
-                        row.add(a < 0 ? "NaN" : RunTables.number(map.attractors().get(a).state()[s]));
+                        row.add(a < 0 ? RunTables.MISSING : RunTables.number(map.attractors().get(a).state()[s]));
                     }
                     rows.add(row);
                 }
@@ -220,23 +224,27 @@ public final class AnalysisWriter {
     private void landscape(AnalysisResult result) throws IOException {
         String x = species.get(plan.xSpecies());
         String y = species.get(plan.ySpecies());
-        table("landscape.csv", List.of("section", plan.parameter(), x, y, "visits", "U"), rows -> {
-            addLandscape(rows, "plane", plan.at(), result.landscape(), true);
-            for (int k = 0; k < result.parameterValues().length; k++) {
-                addLandscape(rows, "along-parameter", result.parameterValues()[k], result.alongParameter().get(k), false);
+        QuasiPotential plane = result.landscape();
+        table("landscape.csv", List.of(plan.parameter(), x, y, "visits", "U"), rows -> {
+            for (int j = 0; j < plane.ys().length; j++) {
+                for (int i = 0; i < plane.xs().length; i++) {
+                    rows.add(List.of(RunTables.number(plan.at()), RunTables.number(plane.xs()[i]),
+                            RunTables.number(plane.ys()[j]), Long.toString(plane.counts()[j][i]),
+                            RunTables.number(plane.u()[j][i])));
+                }
             }
         });
-    }
-
-    private static void addLandscape(List<List<String>> rows, String section, double value, QuasiPotential q,
-            boolean plane) {
-        for (int j = 0; j < q.ys().length; j++) {
-            for (int i = 0; i < q.xs().length; i++) {
-                rows.add(List.of(section, RunTables.number(value), RunTables.number(q.xs()[i]),
-                        plane ? RunTables.number(q.ys()[j]) : "", Long.toString(q.counts()[j][i]),
-                        RunTables.number(q.u()[j][i])));
+        table("landscape-along-parameter.csv", List.of(plan.parameter(), x, "visits", "U"), rows -> {
+            for (int k = 0; k < result.parameterValues().length; k++) {
+                QuasiPotential q = result.alongParameter().get(k);
+                for (int j = 0; j < q.ys().length; j++) {
+                    for (int i = 0; i < q.xs().length; i++) {
+                        rows.add(List.of(RunTables.number(result.parameterValues()[k]), RunTables.number(q.xs()[i]),
+                                Long.toString(q.counts()[j][i]), RunTables.number(q.u()[j][i])));
+                    }
+                }
             }
-        }
+        });
     }
 
     private void firstPassages(AnalysisResult result) throws IOException {
@@ -270,13 +278,27 @@ public final class AnalysisWriter {
                 });
     }
 
-    private static String eigenvalues(Complex[] values) {
-        List<String> parts = new ArrayList<>();
-        for (Complex c : values) {
-            double im = c.getImaginary();
-            parts.add(RunTables.number(c.getReal()) + (im == 0 ? "" : (im > 0 ? "+" : "-") + RunTables.number(Math.abs(im)) + "i"));
+    /** {@code eigenvalue_<k>_re_per_h, eigenvalue_<k>_im_per_h} for k = 1 to the number of species. */
+    private List<String> eigenvalueHeader() {
+        List<String> out = new ArrayList<>();
+        for (int k = 1; k <= species.size(); k++) {
+            out.add("eigenvalue_" + k + "_re_per_h");
+            out.add("eigenvalue_" + k + "_im_per_h");
         }
-        return String.join(" ", parts);
+        return out;
+    }
+
+    /** The Jacobian's eigenvalues in 1/h, largest real part first (ties: larger imaginary part first). */
+    private static List<String> eigenvalues(Complex[] values) {
+        Complex[] sorted = values.clone();
+        Arrays.sort(sorted, (a, b) -> a.getReal() != b.getReal() ? Double.compare(b.getReal(), a.getReal())
+                : Double.compare(b.getImaginary(), a.getImaginary()));
+        List<String> out = new ArrayList<>();
+        for (Complex c : sorted) {
+            out.add(RunTables.number(c.getReal()));
+            out.add(RunTables.number(c.getImaginary()));
+        }
+        return out;
     }
 
     private interface Rows {

@@ -33,7 +33,7 @@ import org.tomlj.TomlTable;
  * unit = "um"                       # optional; must agree with the name
  *
  * [profile]
- * file = "profile.csv"              # columns x_um, fraction_&lt;fate&gt;, sd_&lt;fate&gt;
+ * file = "profile.csv"              # long: columns x_um, fate, fraction, sd
  * </pre>
  *
  * @param label        the file as named
@@ -45,6 +45,8 @@ import org.tomlj.TomlTable;
  */
 public record ObservedData(String label, String description, List<Observation> observations, String text,
         String profileText, String profileName) {
+
+    private static final List<String> PROFILE_COLUMNS = List.of("x_um", "fate", "fraction", "sd");
 
     /** Copies. */
     public ObservedData {
@@ -148,51 +150,46 @@ public record ObservedData(String label, String description, List<Observation> o
         return o instanceof Long l ? Double.valueOf(l) : o instanceof Double d ? d : null;
     }
 
-    /** Profile points from the CSV: one observation per row and fate with a fraction and sd. */
+    /**
+     * Profile points from the CSV, long like a run's {@code profile.csv}: columns {@code x_um},
+     * {@code fate}, {@code fraction} and {@code sd}, one row per position and fate; a row with an
+     * empty fraction is a position not measured for that fate.
+     */
     private static List<Observation> profile(String name, String text, List<Problem> problems) {
         List<Observation> out = new ArrayList<>();
         try (CSVParser parser = RunTables.parser(new StringReader(text))) {
             List<String> header = parser.getHeaderNames();
-            if (!header.contains("x_um")) {
-                problems.add(new Problem(name, 1, 0, "", null, "the profile needs a column x_um (position along the"
-                        + " gradient, µm) and, per fate, fraction_<fate> and sd_<fate>"));
+            List<String> missing = PROFILE_COLUMNS.stream().filter(c -> !header.contains(c)).toList();
+            if (!missing.isEmpty()) {
+                problems.add(new Problem(name, 1, 0, "", null, "missing column" + (missing.size() > 1 ? "s " : " ")
+                        + String.join(", ", missing) + ": the profile has one row per position and fate, with columns"
+                        + " x_um (position along the gradient, µm), fate, fraction (0 to 1) and sd (its uncertainty)"));
                 return out;
             }
-            List<String> fates = new ArrayList<>();
-            for (String h : header) {
-                if (h.startsWith("fraction_")) {
-                    String fate = h.substring("fraction_".length());
-                    if (!header.contains("sd_" + fate)) {
-                        problems.add(new Problem(name, 1, 0, "", null, "column " + h + " has no sd_" + fate
-                                + " column with its uncertainties"));
-                    } else {
-                        fates.add(fate);
-                    }
-                }
-            }
-            if (fates.isEmpty()) {
-                problems.add(new Problem(name, 1, 0, "", null, "no fraction_<fate> column"));
-            }
             for (CSVRecord r : parser) {
-                for (String fate : fates) {
-                    try {
-                        double x = Double.parseDouble(r.get("x_um"));
-                        String fraction = r.get("fraction_" + fate).trim();
-                        if (fraction.isEmpty()) {
-                            continue;
-                        }
-                        double value = Double.parseDouble(fraction);
-                        double sd = Double.parseDouble(r.get("sd_" + fate));
-                        if (!Double.isFinite(x) || !(value >= 0 && value <= 1) || !(sd > 0) || !Double.isFinite(sd)) {
-                            throw new NumberFormatException("x must be finite, the fraction from 0 to 1, sd above 0");
-                        }
-                        out.add(new Observation(String.format(Locale.ROOT, "profile_%s_at_%gum", fate, x), value, sd,
-                                "1", fate, x));
-                    } catch (NumberFormatException e) {
-                        problems.add(new Problem(name, (int) r.getRecordNumber() + 1, 0, "", null, "row "
-                                + r.getRecordNumber() + ", fate " + fate + ": " + e.getMessage()));
+                String fate = r.get("fate").trim();
+                try {
+                    String fraction = r.get("fraction").trim();
+                    if (fraction.isEmpty()) {
+                        continue;
                     }
+                    double x = Double.parseDouble(r.get("x_um"));
+                    double value = Double.parseDouble(fraction);
+                    double sd = Double.parseDouble(r.get("sd"));
+                    if (fate.isEmpty() || !Double.isFinite(x) || !(value >= 0 && value <= 1) || !(sd > 0)
+                            || !Double.isFinite(sd)) {
+                        throw new NumberFormatException("the fate must be named, x finite, the fraction from 0 to 1"
+                                + " and sd above 0");
+                    }
+                    out.add(new Observation(String.format(Locale.ROOT, "profile_%s_at_%gum", fate, x), value, sd,
+                            "1", fate, x));
+                } catch (NumberFormatException e) {
+                    problems.add(new Problem(name, (int) r.getRecordNumber() + 1, 0, "", null, "row "
+                            + r.getRecordNumber() + (fate.isEmpty() ? "" : ", fate " + fate) + ": " + e.getMessage()));
                 }
+            }
+            if (out.isEmpty() && problems.isEmpty()) {
+                problems.add(new Problem(name, 1, 0, "", null, "no measured fraction: every row's fraction is empty"));
             }
         } catch (IOException | IllegalStateException | IllegalArgumentException e) {
             problems.add(new Problem(name, 0, 0, "", null, "not a readable CSV table: " + e.getMessage()));
@@ -206,8 +203,8 @@ public record ObservedData(String label, String description, List<Observation> o
         for (Observation o : observations) {
             if (o.profilePoint()) {
                 if (!fates.contains(o.fate())) {
-                    problems.add(new Problem(profileName, 0, 0, "", null, "fraction_" + o.fate() + ": the scenario"
-                            + " has no fate " + o.fate() + "; its fates are " + String.join(", ", fates)));
+                    problems.add(new Problem(profileName, 0, 0, "", null, "fate " + o.fate() + ": the scenario"
+                            + " has no such fate" + "; its fates are " + String.join(", ", fates)));
                 }
                 continue;
             }

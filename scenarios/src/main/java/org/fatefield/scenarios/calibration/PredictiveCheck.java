@@ -11,6 +11,7 @@ import org.fatefield.circuits.inference.Generation;
 import org.fatefield.circuits.inference.Population;
 import org.fatefield.circuits.random.RandomStreams;
 import org.fatefield.scenarios.output.AxisWords;
+import org.fatefield.scenarios.output.MetricRows;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.output.RunTables;
 import org.fatefield.viz.calibration.PredictiveCheckChart;
@@ -20,8 +21,8 @@ import org.fatefield.viz.chart.FigureFormat;
 /**
  * The posterior predictive check (Gelman, Meng &amp; Stern 1996, Statistica Sinica 6:733): new
  * tissues from particles drawn by weight from the final population, their statistics beside the
- * data. Writes {@code predictive.csv} (every predictive tissue's statistics),
- * {@code predictive-summary.csv} (per model and statistic: observed value and uncertainty,
+ * data. Writes {@code predictive.csv} (long, as {@link MetricRows}: a row per predictive tissue
+ * and statistic), {@code predictive-summary.csv} (per model, metric and fate: observed value and uncertainty,
  * predictive median and central 95%, and the fraction of predictive tissues below the
  * observation) and {@code predictive.png}/{@code .svg}.
  */
@@ -52,16 +53,16 @@ final class PredictiveCheck {
         folder.writeText("predictive.csv", w -> {
             CSVPrinter csv = RunTables.printer(w);
             List<String> header = new ArrayList<>(List.of("model", "draw"));
-            observations.forEach(o -> header.add(o.name()));
+            header.addAll(MetricRows.COLUMNS);
             csv.printRecord(header);
             for (int i = 0; i < batch.size(); i++) {
-                List<String> row = new ArrayList<>(List.of(definition.models().get(batch.get(i).model()).name(),
-                        Integer.toString(batch.get(i).index() + 1)));
+                String model = definition.models().get(batch.get(i).model()).name();
+                String draw = Integer.toString(batch.get(i).index() + 1);
                 for (int s = 0; s < observations.size(); s++) {
-                    double v = stats[i] == null ? Double.NaN : stats[i][s];
-                    row.add(Double.isFinite(v) ? RunTables.number(v) : "");
+                    List<String> row = new ArrayList<>(List.of(model, draw));
+                    row.addAll(MetricRows.tail(observations.get(s).name(), stats[i] == null ? Double.NaN : stats[i][s]));
+                    csv.printRecord(row);
                 }
-                csv.printRecord(row);
             }
             csv.flush();
         });
@@ -69,7 +70,7 @@ final class PredictiveCheck {
         List<double[]> bars = new ArrayList<>();
         folder.writeText("predictive-summary.csv", w -> {
             CSVPrinter csv = RunTables.printer(w);
-            csv.printRecord("model", "statistic", "unit", "observed", "sd", "predictive_median", "predictive_q025",
+            csv.printRecord("model", "metric", "fate", "observed", "sd", "predictive_median", "predictive_q025",
                     "predictive_q975", "fraction_below_observed", "tissues");
             for (int m = 0; m < definition.models().size(); m++) {
                 for (int s = 0; s < observations.size(); s++) {
@@ -78,7 +79,8 @@ final class PredictiveCheck {
                     double[] q = values.length == 0 ? new double[] {Double.NaN, Double.NaN, Double.NaN}
                             : new double[] {quantile(values, 0.5), quantile(values, 0.025), quantile(values, 0.975)};
                     long below = Arrays.stream(values).filter(v -> v < o.value()).count();
-                    csv.printRecord(definition.models().get(m).name(), o.name(), StatisticNames.unit(o.name()),
+                    MetricRows.Metric name = MetricRows.split(o.name());
+                    csv.printRecord(definition.models().get(m).name(), name.metric(), name.fate(),
                             RunTables.number(o.value()), RunTables.number(o.sd()), cell(q[0]), cell(q[1]), cell(q[2]),
                             values.length == 0 ? "" : RunTables.number((double) below / values.length), values.length);
                     labels.add((definition.models().size() > 1 ? definition.models().get(m).name() + ": " : "")

@@ -24,9 +24,9 @@ import picocli.CommandLine;
 @Command(name = "replicates", mixinStandardHelpOptions = true,
         description = {"Run a scenario on consecutive seeds and measure how precise its pattern is.",
             "Each replicate tissue gets its own run folder (seed-<N>); replicates.csv lists every run's boundary"
-                    + " positions and widths, replicates.json their means and standard deviations (the positional"
-                    + " error) beside the predicted fate-call boundary and, with morphogen amplitude_cv, the"
-                    + " positional error the gradient predicts. Runs already finished (with run.json) are kept,"
+                    + " positions and widths (a row per seed, metric and fate), replicates.json their means and"
+                    + " standard deviations (the positional error) beside the predicted fate-call boundary and,"
+                    + " with morphogen amplitude_cv, the positional error the gradient predicts. Runs already finished (with run.json) are kept,"
                     + " so an interrupted set resumes."})
 final class ReplicatesCommand implements Callable<Integer> {
 

@@ -13,6 +13,7 @@ import org.fatefield.engine.robustness.Perturbation;
 import org.fatefield.engine.robustness.RobustnessAnalysis;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.output.AxisWords;
+import org.fatefield.scenarios.output.MetricRows;
 import org.fatefield.scenarios.output.Provenance;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.output.RunTables;
@@ -99,9 +100,10 @@ final class RobustnessCommand implements Callable<Integer> {
             Provenance.write(folder, "robustness", workers, Map.of(loaded.source(), loaded.sha256()));
             folder.writeText("robustness.csv", w -> {
                 CSVPrinter printer = RunTables.printer(w);
-                printer.printRecord("perturbation", "metric", "sensitivity", "ci95_low", "ci95_high", "pairs");
+                printer.printRecord("perturbation", "metric", "fate", "sensitivity", "ci95_low", "ci95_high", "pairs");
                 for (RobustnessAnalysis.Sensitivity s : result) {
-                    printer.printRecord(s.perturbation(), s.metric(), RunTables.number(s.sensitivity()),
+                    MetricRows.Metric metric = MetricRows.split(s.metric());
+                    printer.printRecord(s.perturbation(), metric.metric(), metric.fate(), RunTables.number(s.sensitivity()),
                             RunTables.number(s.low95()), RunTables.number(s.high95()), s.replicates());
                 }
                 printer.flush();

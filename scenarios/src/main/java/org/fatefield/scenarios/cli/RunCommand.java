@@ -26,7 +26,7 @@ import picocli.CommandLine;
 /** {@code fatefield run}: simulate a scenario and write its run folder. */
 @Command(name = "run", mixinStandardHelpOptions = true,
         description = {"Simulate a scenario and write its results to a folder.",
-            "Writes timeseries.csv, cells.csv, fate-proportions.png, tissue.png and, last, run.json."})
+            "Writes timeseries.csv, population.csv, cells.csv, fate-proportions.png, tissue.png and, last, run.json."})
 final class RunCommand implements Callable<Integer> {
 
     @Parameters(index = "0", paramLabel = "SCENARIO",

@@ -67,7 +67,8 @@ public final class ScenarioSchema {
             new Section("run", false, false, List.of(
                     Key.positive("duration", "h", "48", "simulated time"),
                     Key.positive("step", "h", "0.01", "time step of circuits and mechanics (the field sub-steps as it needs)"),
-                    Key.positive("record_every", "h", "0.5", "time between rows of timeseries.csv (at least one step)"),
+                    Key.positive("record_every", "h", "0.5", "time between record times of timeseries.csv and"
+                            + " population.csv (at least one step)"),
                     Key.integer("seed", "1", 0, 9.007199254740991E15,
                             "master random seed; --seed on the command line overrides it")),
                     "how long to simulate and how often to record"),
@@ -217,7 +218,7 @@ public final class ScenarioSchema {
                             + " its own life, is timed at every step (first_entry_time_h in lineage.csv, first_passage"
                             + " in metrics.json); empty for none"),
                     Key.integer("predicted_cells", "200", 0, 100000, "single cells simulated at each position along"
-                            + " the gradient for the noise-based predicted fate profile (predicted_fraction_<fate> in"
+                            + " the gradient for the noise-based predicted fate profile (predicted_fraction in"
                             + " profile.csv, predicted_profile in metrics.json); 0 for none")),
                     "how a cell's state is read as a fate"),
             new Section("fates.rule", true, true, List.of(

@@ -45,8 +45,8 @@ public record FirstPassageSummary(String fate, long cells, long entered, long ce
                 if (Long.parseLong(r.get("parent_id")) < 0) {
                     continue;
                 }
-                double birth = Double.parseDouble(r.get("birth_time_h"));
-                double entry = Double.parseDouble(r.get("first_entry_time_h"));
+                double birth = RunTables.parseNumber(r.get("birth_time_h"));
+                double entry = RunTables.parseNumber(r.get("first_entry_time_h"));
                 if (Double.isFinite(entry)) {
                     double t = entry - birth;
                     times.add(new double[] {t, 1});
@@ -54,8 +54,8 @@ public record FirstPassageSummary(String fate, long cells, long entered, long ce
                     sum += t;
                     sumSq += t * t;
                 } else {
-                    double division = Double.parseDouble(r.get("division_time_h"));
-                    double death = Double.parseDouble(r.get("death_time_h"));
+                    double division = RunTables.parseNumber(r.get("division_time_h"));
+                    double death = RunTables.parseNumber(r.get("death_time_h"));
                     double end = Double.isFinite(division) ? division : Double.isFinite(death) ? death : endTime;
                     times.add(new double[] {end - birth, 0});
                 }

@@ -171,12 +171,12 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
                 StandardCharsets.UTF_8); CSVParser parser = RunTables.parser(in)) {
             for (CSVRecord r : parser) {
                 long id = Long.parseLong(r.get("id"));
-                long parent = Long.parseLong(r.get("parent_id"));
+                long parent = RunTables.parseId(r.get("parent_id"));
                 String fate = r.get("fate_at_end").isEmpty() ? r.get("fate_at_division") : r.get("fate_at_end");
                 label.put(id, "c" + id + "_" + fate.replaceAll("[^A-Za-z0-9_-]", "_"));
-                double birth = Double.parseDouble(r.get("birth_time_h"));
-                double division = Double.parseDouble(r.get("division_time_h"));
-                double death = Double.parseDouble(r.get("death_time_h"));
+                double birth = RunTables.parseNumber(r.get("birth_time_h"));
+                double division = RunTables.parseNumber(r.get("division_time_h"));
+                double death = RunTables.parseNumber(r.get("death_time_h"));
                 double last = !Double.isNaN(division) ? division : !Double.isNaN(death) ? death : end;
                 length.put(id, last - birth);
                 if (parent < 0) {

@@ -87,20 +87,15 @@ public final class ReplicateSet {
         folder.writeText(RunLayout.REPLICATES_TABLE, w -> {
             CSVPrinter printer = RunTables.printer(w);
             List<String> header = new ArrayList<>(List.of("seed"));
-            for (String f : fates) {
-                header.add("boundary_" + f + "_um");
-                header.add("width_" + f + "_um");
-            }
-            header.add("committed_boundary_um");
+            header.addAll(MetricRows.COLUMNS);
             printer.printRecord(header);
             for (int r = 0; r < seeds.size(); r++) {
-                List<String> row = new ArrayList<>(List.of(Long.toString(seeds.get(r))));
+                String seed = Long.toString(seeds.get(r));
                 for (int f = 0; f < fates.size(); f++) {
-                    row.add(RunTables.number(boundaries.get(r)[f]));
-                    row.add(RunTables.number(widths.get(r)[f]));
+                    printer.printRecord(seed, "boundary_um", fates.get(f), RunTables.number(boundaries.get(r)[f]));
+                    printer.printRecord(seed, "width_um", fates.get(f), RunTables.number(widths.get(r)[f]));
                 }
-                row.add(RunTables.number(committed.get(r)));
-                printer.printRecord(row);
+                printer.printRecord(seed, "committed_boundary_um", "", RunTables.number(committed.get(r)));
             }
             printer.flush();
         });

@@ -7,7 +7,10 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import org.apache.commons.csv.CSVRecord;
 import org.fatefield.engine.metrics.FateProfile;
 
@@ -75,56 +78,85 @@ public final class RunFolderReader {
         return Files.exists(run.resolve(name));
     }
 
-    /** Cells in each of {@code fates} at the last record time ({@code timeseries.csv}'s last row). */
+    /** Cells in each of {@code fates} at the last record time ({@code timeseries.csv}'s last rows). */
     public long[] finalCounts(List<String> fates) throws IOException {
-        List<CSVRecord> records = RunTables.records(run.resolve(RunLayout.TIMESERIES));
+        Path file = run.resolve(RunLayout.TIMESERIES);
+        List<CSVRecord> records = RunTables.records(file);
         long[] counts = new long[fates.size()];
         if (records.isEmpty()) {
             return counts;
         }
-        CSVRecord last = records.get(records.size() - 1);
-        for (int f = 0; f < fates.size(); f++) {
-            counts[f] = Math.round(parse(last, "count_" + fates.get(f)));
+        String last = records.get(records.size() - 1).get("time_h");
+        for (CSVRecord r : records) {
+            int f = fates.indexOf(r.get("fate"));
+            if (r.get("time_h").equals(last) && f >= 0) {
+                counts[f] = Math.round(parse(file, r, "cells"));
+            }
         }
         return counts;
     }
 
-    /** {@code profile.csv} as fractions per fate, for {@code fates}. */
+    /**
+     * {@code profile.csv} as fractions per fate, for {@code fates}: bins in the order of their
+     * first row, fate rows looked up by name.
+     */
     public Profile profile(List<String> fates) throws IOException {
-        List<CSVRecord> records = RunTables.records(run.resolve(RunLayout.PROFILE));
-        double[] x = new double[records.size()];
-        double[][] fractions = new double[fates.size()][records.size()];
-        boolean hasPrediction = !records.isEmpty() && records.get(0).isMapped("predicted_fraction_" + fates.get(0));
-        double[][] predicted = hasPrediction ? new double[fates.size()][records.size()] : null;
-        for (int b = 0; b < records.size(); b++) {
-            x[b] = parse(records.get(b), "x_um");
-            for (int f = 0; f < fates.size(); f++) {
-                fractions[f][b] = parse(records.get(b), "fraction_" + fates.get(f));
-                if (hasPrediction) {
-                    predicted[f][b] = parse(records.get(b), "predicted_fraction_" + fates.get(f));
-                }
-            }
-        }
-        return new Profile(x, fractions, predicted);
+        Bins bins = bins(fates);
+        return new Profile(bins.x, bins.fractions, bins.hasPrediction ? bins.predicted : null);
     }
 
     /**
      * {@code profile.csv} as a {@link FateProfile} over a tissue {@code width} µm wide (counts
-     * rebuilt from the fractions), so its boundaries are measured exactly as a live run's.
+     * read per fate), so its boundaries are measured exactly as a live run's.
      */
     public FateProfile fateProfile(List<String> fates, double width) throws IOException {
-        List<CSVRecord> rows = RunTables.records(run.resolve(RunLayout.PROFILE));
-        int[] counts = new int[rows.size()];
-        int[][] byFate = new int[fates.size()][rows.size()];
-        for (int b = 0; b < rows.size(); b++) {
-            CSVRecord row = rows.get(b);
-            counts[b] = (int) parse(row, "cells");
-            for (int f = 0; f < fates.size(); f++) {
-                double fraction = parse(row, "fraction_" + fates.get(f));
-                byFate[f][b] = Double.isNaN(fraction) ? 0 : (int) Math.round(fraction * counts[b]);
+        Bins bins = bins(fates);
+        int[] counts = new int[bins.x.length];
+        for (int[] byBin : bins.cells) {
+            for (int b = 0; b < counts.length; b++) {
+                counts[b] += byBin[b];
             }
         }
-        return FateProfile.fromCounts(width, counts, byFate);
+        return FateProfile.fromCounts(width, counts, bins.cells);
+    }
+
+    /** The long {@code profile.csv} gathered into arrays per fate and bin. */
+    private record Bins(double[] x, int[][] cells, double[][] fractions, double[][] predicted, boolean hasPrediction) {
+    }
+
+    private Bins bins(List<String> fates) throws IOException {
+        Path file = run.resolve(RunLayout.PROFILE);
+        List<CSVRecord> rows = RunTables.records(file);
+        Map<String, Integer> binOf = new LinkedHashMap<>();
+        for (CSVRecord r : rows) {
+            binOf.putIfAbsent(r.get("x_um"), binOf.size());
+        }
+        int n = binOf.size();
+        double[] x = new double[n];
+        int[][] cells = new int[fates.size()][n];
+        double[][] fractions = new double[fates.size()][n];
+        double[][] predicted = new double[fates.size()][n];
+        for (double[] row : fractions) {
+            Arrays.fill(row, Double.NaN);
+        }
+        for (double[] row : predicted) {
+            Arrays.fill(row, Double.NaN);
+        }
+        boolean hasPrediction = false;
+        for (CSVRecord r : rows) {
+            int b = binOf.get(r.get("x_um"));
+            x[b] = parse(file, r, "x_um");
+            int f = fates.indexOf(r.get("fate"));
+            if (f < 0) {
+                throw new IOException(file + " line " + r.getRecordNumber() + ": fate '" + r.get("fate")
+                        + "' is not one of the scenario's fates " + fates);
+            }
+            cells[f][b] = (int) parse(file, r, "cells");
+            fractions[f][b] = parse(file, r, "fraction");
+            predicted[f][b] = parse(file, r, "predicted_fraction");
+            hasPrediction |= !Double.isNaN(predicted[f][b]);
+        }
+        return new Bins(x, cells, fractions, predicted, hasPrediction);
     }
 
     /** Predicted boundary positions (µm) listed in the run's metrics, skipping those off the tissue. */
@@ -159,12 +191,12 @@ public final class RunFolderReader {
         return out.stream().mapToDouble(Double::doubleValue).toArray();
     }
 
-    private double parse(CSVRecord row, String column) throws IOException {
+    private static double parse(Path file, CSVRecord row, String column) throws IOException {
         try {
-            return Double.parseDouble(row.get(column));
+            return RunTables.parseNumber(row.get(column));
         } catch (IllegalArgumentException e) {
-            throw new IOException(run.resolve(RunLayout.PROFILE) + " line " + row.getRecordNumber() + ": column "
-                    + column + " is missing or not a number (" + e.getMessage() + ")", e);
+            throw new IOException(file + " line " + row.getRecordNumber() + ": column " + column
+                    + " is missing or not a number (" + e.getMessage() + ")", e);
         }
     }
 }

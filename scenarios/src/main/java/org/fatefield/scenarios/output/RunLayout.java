@@ -12,8 +12,10 @@ import java.nio.file.Path;
  */
 public final class RunLayout {
 
-    /** Fate counts over time. */
+    /** Fate counts over time, one row per record time and fate. */
     public static final String TIMESERIES = "timeseries.csv";
+    /** Live cells and mean morphogen over time. */
+    public static final String POPULATION = "population.csv";
     /** The live cells at the end. */
     public static final String CELLS = "cells.csv";
     /** Every cell ever born, streamed during the run. */

@@ -82,22 +82,15 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
     public List<String> write(RunFolder folder, List<String> fateNames, long seed, String partition) throws IOException {
         folder.writeText(RunLayout.PROFILE, w -> {
             CSVPrinter printer = RunTables.printer(w);
-            List<String> header = new ArrayList<>(List.of("x_um", "cells"));
-            fateNames.forEach(f -> header.add("fraction_" + f));
-            if (single.defined()) {
-                fateNames.forEach(f -> header.add("predicted_fraction_" + f));
-            }
-            printer.printRecord(header);
+            printer.printRecord("x_um", "fate", "cells", "fraction", "predicted_fraction");
             for (int b = 0; b < profile.centres().length; b++) {
-                List<String> row = new ArrayList<>(List.of(RunTables.number(profile.centres()[b]),
-                        Integer.toString(profile.counts()[b])));
                 for (int f = 0; f < fateNames.size(); f++) {
-                    row.add(RunTables.number(profile.fractions()[f][b]));
+                    double fraction = profile.fractions()[f][b];
+                    long cells = Double.isNaN(fraction) ? 0 : Math.round(fraction * profile.counts()[b]);
+                    printer.printRecord(RunTables.number(profile.centres()[b]), fateNames.get(f), Long.toString(cells),
+                            RunTables.number(fraction),
+                            single.defined() ? RunTables.number(single.fractions()[f][b]) : RunTables.MISSING);
                 }
-                for (int f = 0; single.defined() && f < fateNames.size(); f++) {
-                    row.add(RunTables.number(single.fractions()[f][b]));
-                }
-                printer.printRecord(row);
             }
             printer.flush();
         });
@@ -111,15 +104,11 @@ public record RunMetrics(FateProfile profile, LineageStatistics lineage, Predict
         });
         folder.writeText(RunLayout.CLONES, w -> {
             CSVPrinter printer = RunTables.printer(w);
-            List<String> header = new ArrayList<>(List.of("founder_id"));
-            fateNames.forEach(f -> header.add("cells_" + f));
-            printer.printRecord(header);
+            printer.printRecord("founder_id", "fate", "cells");
             for (Map.Entry<Long, int[]> e : lineage.clones().entrySet()) {
-                List<String> row = new ArrayList<>(List.of(Long.toString(e.getKey())));
-                for (int count : e.getValue()) {
-                    row.add(Integer.toString(count));
+                for (int f = 0; f < fateNames.size(); f++) {
+                    printer.printRecord(Long.toString(e.getKey()), fateNames.get(f), Integer.toString(e.getValue()[f]));
                 }
-                printer.printRecord(row);
             }
             printer.flush();
         });

@@ -36,6 +36,8 @@ public final class RunTables {
     private static final CSVFormat READ_FORMAT = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true)
             .get();
     private static final MathContext DIGITS = new MathContext(10);
+    /** The one code for a missing or undefined value in every table: an empty cell. */
+    public static final String MISSING = "";
 
     /** Columns of {@code lineage.csv}. */
     public static final List<String> LINEAGE_HEADER = List.of("id", "parent_id", "generation", "birth_time_h",
@@ -43,6 +45,32 @@ public final class RunTables {
             "lineage_commitment_time_h", "death_time_h", "birth_volume", "final_volume", "first_entry_time_h");
 
     private RunTables() {
+    }
+
+    /**
+     * A number as {@link #number} wrote it: an empty cell is NaN (missing).
+     *
+     * @throws NumberFormatException if the text is neither empty nor a number
+     */
+    public static double parseNumber(String text) {
+        String t = text.trim();
+        if (t.isEmpty()) {
+            return Double.NaN;
+        }
+        if (t.equals("Inf")) {
+            return Double.POSITIVE_INFINITY;
+        }
+        return t.equals("-Inf") ? Double.NEGATIVE_INFINITY : Double.parseDouble(t);
+    }
+
+    /** A cell id, or an empty cell for none (a founder's parent, written {@code -1} inside the engine). */
+    public static String id(long id) {
+        return id < 0 ? MISSING : Long.toString(id);
+    }
+
+    /** An id as {@link #id} wrote it: -1 for an empty cell. */
+    public static long parseId(String text) {
+        return text.isEmpty() ? -1 : Long.parseLong(text);
     }
 
     /** A printer of Fatefield's CSV dialect on {@code out} (flush it; closing it closes {@code out}). */
@@ -71,7 +99,7 @@ public final class RunTables {
 
     /** One row of {@code lineage.csv}; fate indices are named from {@code fates} (empty for none). */
     public static List<String> lineageRow(LineageRecord r, List<String> fates) {
-        return List.of(Long.toString(r.id()), Long.toString(r.parentId()), Integer.toString(r.generation()),
+        return List.of(Long.toString(r.id()), id(r.parentId()), Integer.toString(r.generation()),
                 number(r.birthTime()), number(r.divisionTime()), number(r.birthX()), number(r.birthY()),
                 fateName(r.fateAtDivision(), fates), fateName(r.fateAtEnd(), fates), number(ownCommitment(r)),
                 number(r.commitmentTime()), number(r.deathTime()), number(r.birthVolume()), number(r.finalVolume()), number(r.firstEntryTime()));
@@ -90,28 +118,31 @@ public final class RunTables {
     }
 
     /**
-     * {@code timeseries.csv}: {@code time_h}, one {@code count_<fate>} column per fate,
-     * {@code population}, {@code mean_morphogen}.
+     * {@code timeseries.csv}, long: one row per record time and fate, {@code time_h, fate, cells,
+     * fraction} (fraction of the live cells; empty when there are none).
      */
     public static void writeTimeSeries(TimeSeries series, Writer out) throws IOException {
-        List<String> header = new ArrayList<>();
-        header.add("time_h");
-        for (String fate : series.fateNames()) {
-            header.add("count_" + fate);
-        }
-        header.add("population");
-        header.add("mean_morphogen");
         CSVPrinter printer = printer(out);
-        printer.printRecord(header);
+        printer.printRecord("time_h", "fate", "cells", "fraction");
+        List<String> fates = series.fateNames();
         for (TimeSeries.Row row : series.rows()) {
-            List<String> values = new ArrayList<>();
-            values.add(number(row.time()));
-            for (int count : row.fateCounts()) {
-                values.add(Integer.toString(count));
+            for (int f = 0; f < fates.size(); f++) {
+                printer.printRecord(number(row.time()), fates.get(f), Integer.toString(row.fateCounts()[f]),
+                        number(row.population() == 0 ? Double.NaN : row.fraction(f)));
             }
-            values.add(Integer.toString(row.population()));
-            values.add(number(row.meanMorphogen()));
-            printer.printRecord(values);
+        }
+        printer.flush();
+    }
+
+    /**
+     * {@code population.csv}: one row per record time, {@code time_h, cells} (live cells) and
+     * {@code mean_morphogen} (the control field's mean over the tissue, its own units).
+     */
+    public static void writePopulation(TimeSeries series, Writer out) throws IOException {
+        CSVPrinter printer = printer(out);
+        printer.printRecord("time_h", "cells", "mean_morphogen");
+        for (TimeSeries.Row row : series.rows()) {
+            printer.printRecord(number(row.time()), Integer.toString(row.population()), number(row.meanMorphogen()));
         }
         printer.flush();
     }
@@ -133,7 +164,7 @@ public final class RunTables {
         for (Cell cell : tissue.cellsById()) {
             List<String> values = new ArrayList<>();
             values.add(Long.toString(cell.id()));
-            values.add(Long.toString(cell.parentId()));
+            values.add(id(cell.parentId()));
             values.add(Integer.toString(cell.generation()));
             values.add(number(cell.x()));
             values.add(number(cell.y()));
@@ -182,10 +213,17 @@ public final class RunTables {
         return spec.mapping().couplings().get(0).label();
     }
 
-    /** A number with ten significant digits and no trailing zeros; NaN as "NaN". */
+    /**
+     * A number with ten significant digits and no trailing zeros; an undefined value (NaN) as an
+     * empty cell, the table convention for missing; infinities as {@code Inf} and {@code -Inf},
+     * which R and pandas both read.
+     */
     public static String number(double value) {
-        if (!Double.isFinite(value)) {
-            return Double.toString(value);
+        if (Double.isNaN(value)) {
+            return MISSING;
+        }
+        if (Double.isInfinite(value)) {
+            return value > 0 ? "Inf" : "-Inf";
         }
         if (value == 0.0) {
             return "0";

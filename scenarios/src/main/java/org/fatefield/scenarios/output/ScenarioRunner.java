@@ -18,7 +18,7 @@ import org.fatefield.viz.chart.FateProportionChart;
 import org.fatefield.viz.tissue.TissueRenderer;
 
 /**
- * Runs a scenario to the end and writes its run folder: {@code timeseries.csv},
+ * Runs a scenario to the end and writes its run folder: {@code timeseries.csv}, {@code population.csv},
  * {@code cells.csv}, {@code lineage.csv} (streamed during the run), {@code lineage.nwk}, the
  * metrics of {@link RunMetrics}, {@code fate-proportions.png}, {@code tissue.png} and, last,
  * {@code run.json} (so a folder with {@code run.json} holds a finished run).
@@ -123,6 +123,8 @@ public final class ScenarioRunner {
         files.add(RunLayout.TREES);
         folder.writeText(RunLayout.TIMESERIES, w -> RunTables.writeTimeSeries(tissue.series(), w));
         files.add(RunLayout.TIMESERIES);
+        folder.writeText(RunLayout.POPULATION, w -> RunTables.writePopulation(tissue.series(), w));
+        files.add(RunLayout.POPULATION);
         folder.writeText(RunLayout.CELLS, w -> RunTables.writeCells(tissue, w));
         files.add(RunLayout.CELLS);
         RunMetrics metrics = RunMetrics.of(tissue);

@@ -76,7 +76,7 @@ public final class Snapshots {
         CSVPrinter printer = RunTables.printer(out);
         printer.printRecord(header);
         for (Cell cell : tissue.cellsById()) {
-            List<String> row = new ArrayList<>(List.of(time, Long.toString(cell.id()), Long.toString(cell.parentId()),
+            List<String> row = new ArrayList<>(List.of(time, Long.toString(cell.id()), RunTables.id(cell.parentId()),
                     RunTables.number(cell.x()), RunTables.number(cell.y()), RunTables.number(cell.volume())));
             // A cell born since the last classification takes its fate from its state now.
             RunTables.addCellState(tissue, cell, fates.get(spec.fates().classify(cell.liveState())), row);

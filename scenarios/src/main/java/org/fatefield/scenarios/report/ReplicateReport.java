@@ -7,10 +7,13 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 import org.apache.commons.csv.CSVRecord;
 import org.fatefield.scenarios.output.JsonFiles;
+import org.fatefield.scenarios.output.MetricRows;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.output.RunFolderReader;
 import org.fatefield.scenarios.output.RunLayout;
@@ -38,15 +41,16 @@ public final class ReplicateReport {
     /** The report of the replicate set {@code set}; also writes each replicate's own report. */
     public static String html(Path set) throws IOException {
         JsonObject summary = JsonFiles.read(set.resolve(RunLayout.REPLICATES_SUMMARY));
-        List<CSVRecord> rows = RunTables.records(set.resolve(RunLayout.REPLICATES_TABLE));
+        List<CSVRecord> records = RunTables.records(set.resolve(RunLayout.REPLICATES_TABLE));
+        Map<String, Map<String, String>> rows = bySeed(records);
         if (rows.isEmpty()) {
             throw new IOException(set.resolve(RunLayout.REPLICATES_TABLE) + " lists no runs: has the replicate set"
                     + " started?");
         }
         List<RunFolderReader> runs = new ArrayList<>();
         List<RunReport.Figure> circuit = null;
-        for (CSVRecord row : rows) {
-            Path run = set.resolve(RunLayout.replicateFolder(Long.parseLong(row.get("seed"))));
+        for (String seed : rows.keySet()) {
+            Path run = set.resolve(RunLayout.replicateFolder(Long.parseLong(seed)));
             RunFolderReader reader = RunFolderReader.of(run);
             if (circuit == null) {
                 circuit = RunReport.circuitFigures(reader.scenarioText(), run);
@@ -70,14 +74,15 @@ public final class ReplicateReport {
         for (RunFolderReader run : runs) {
             profiles.add(run.profile(fates));
         }
+        List<Map<String, String>> tissues = new ArrayList<>(rows.values());
         for (int f = 0; f < fates.size(); f++) {
             String fate = fates.get(f);
             double[][] fractions = new double[runs.size()][];
             double[] boundaries = new double[runs.size()];
             for (int r = 0; r < runs.size(); r++) {
                 fractions[r] = profiles.get(r).fractions()[f];
-                String value = rows.get(r).get("boundary_" + fate + "_um");
-                boundaries[r] = value.isEmpty() ? Double.NaN : Double.parseDouble(value);
+                boundaries[r] = RunTables.parseNumber(tissues.get(r).getOrDefault(MetricRows.join("boundary_um", fate),
+                        ""));
             }
             ByteArrayOutputStream png = new ByteArrayOutputStream();
             ChartFiles.png(ReplicateProfileChart.create(fate, profiles.get(0).x(), fractions, boundaries, predicted),
@@ -108,13 +113,12 @@ public final class ReplicateReport {
                 + " 2007), from the morphogen's tissue-to-tissue amplitude_cv; it is not defined (–) without amplitude"
                 + " variability. Expression noise adds to the simulated SD.");
         page.heading("Tissues");
-        List<String> header = new ArrayList<>(rows.get(0).getParser().getHeaderNames());
+        List<String> header = new ArrayList<>(List.of("seed"));
+        tissues.forEach(t -> t.keySet().stream().filter(k -> !header.contains(k)).forEach(header::add));
         List<List<String>> table = new ArrayList<>();
-        for (CSVRecord row : rows) {
-            List<String> cells = new ArrayList<>();
-            for (String h : header) {
-                cells.add(row.get(h));
-            }
+        for (Map.Entry<String, Map<String, String>> tissue : rows.entrySet()) {
+            List<String> cells = new ArrayList<>(List.of(tissue.getKey()));
+            header.stream().skip(1).forEach(h -> cells.add(tissue.getValue().getOrDefault(h, "")));
             table.add(cells);
         }
         page.table(header, table);
@@ -136,5 +140,15 @@ public final class ReplicateReport {
 
     private static String number(JsonElement e) {
         return e == null || e.isJsonNull() ? "–" : String.format(Locale.ROOT, "%.1f", e.getAsDouble());
+    }
+
+    /** The long {@code replicates.csv} as seed to compound metric name to value, in file order. */
+    private static Map<String, Map<String, String>> bySeed(List<CSVRecord> records) {
+        Map<String, Map<String, String>> out = new LinkedHashMap<>();
+        for (CSVRecord r : records) {
+            out.computeIfAbsent(r.get("seed"), k -> new LinkedHashMap<>())
+                    .put(MetricRows.join(r.get("metric"), r.get("fate")), r.get("value"));
+        }
+        return out;
     }
 }

@@ -14,15 +14,18 @@ import org.apache.commons.csv.CSVPrinter;
 import org.fatefield.engine.metrics.SampleSummary;
 import org.fatefield.scenarios.output.AxisWords;
 import org.fatefield.scenarios.output.JsonFiles;
+import org.fatefield.scenarios.output.MetricRows;
 import org.fatefield.scenarios.output.RunFolder;
 import org.fatefield.scenarios.output.RunTables;
 import org.fatefield.viz.chart.ChartFiles;
 import org.fatefield.viz.chart.SweepCharts;
 
 /**
- * Gathers a sweep's results into {@code runs.csv} (a row per run: id, point, replicate, seed,
- * varied values, status, metrics), {@code summary.csv} (per point and metric: runs, mean, standard
- * deviation and Student-t 95% interval over replicates) and plots of each metric against the
+ * Gathers a sweep's results into {@code runs.csv} (long: a row per run and metric, with the
+ * run's id, point, replicate, seed, varied values and status before {@link MetricRows}' metric,
+ * fate and value; a failed or missing run has one row with those empty), {@code summary.csv}
+ * (per point, metric and fate: runs, mean, standard deviation and Student-t 95% interval over
+ * replicates) and plots of each metric against the
  * varied values (one value: line with band; two on a grid: map).
  */
 public final class SweepCollector {
@@ -66,20 +69,30 @@ public final class SweepCollector {
             List<String> header = new ArrayList<>(List.of("run_id", "point", "replicate", "seed"));
             header.addAll(manifest.keys());
             header.add("status");
-            header.addAll(metricNames);
+            header.addAll(MetricRows.COLUMNS);
             printer.printRecord(header);
             for (Manifest.Run run : manifest.runs()) {
-                List<String> row = new ArrayList<>(List.of(run.id(), Integer.toString(run.point()),
+                List<String> head = new ArrayList<>(List.of(run.id(), Integer.toString(run.point()),
                         Integer.toString(run.replicate()), Long.toString(run.seed())));
                 for (double v : run.values()) {
-                    row.add(RunTables.number(v));
+                    head.add(RunTables.number(v));
                 }
-                row.add(status.get(run.id()));
-                Map<String, Double> m = metrics.getOrDefault(run.id(), Map.of());
+                head.add(status.get(run.id()));
+                Map<String, Double> m = metrics.get(run.id());
+                if (m == null) {
+                    // A failed or missing run: one row, its metric columns empty.
+                    List<String> row = new ArrayList<>(head);
+                    row.addAll(List.of("", "", ""));
+                    printer.printRecord(row);
+                    continue;
+                }
                 for (String name : metricNames) {
-                    row.add(m.containsKey(name) ? RunTables.number(m.get(name)) : "");
+                    if (m.containsKey(name)) {
+                        List<String> row = new ArrayList<>(head);
+                        row.addAll(MetricRows.tail(name, m.get(name)));
+                        printer.printRecord(row);
+                    }
                 }
-                printer.printRecord(row);
             }
             printer.flush();
         });
@@ -101,7 +114,7 @@ public final class SweepCollector {
             CSVPrinter printer = RunTables.printer(w);
             List<String> header = new ArrayList<>(List.of("point"));
             header.addAll(manifest.keys());
-            header.addAll(List.of("metric", "runs", "mean", "sd", "ci95_low", "ci95_high"));
+            header.addAll(List.of("metric", "fate", "runs", "mean", "sd", "ci95_low", "ci95_high"));
             printer.printRecord(header);
             for (int p = 0; p < points; p++) {
                 for (int m = 0; m < metricNames.size(); m++) {
@@ -110,7 +123,8 @@ public final class SweepCollector {
                         row.add(RunTables.number(v));
                     }
                     double[] s = stats[p][m];
-                    row.addAll(List.of(metricNames.get(m), Integer.toString((int) s[0]), RunTables.number(s[1]),
+                    MetricRows.Metric name = MetricRows.split(metricNames.get(m));
+                    row.addAll(List.of(name.metric(), name.fate(), Integer.toString((int) s[0]), RunTables.number(s[1]),
                             RunTables.number(s[2]), RunTables.number(s[3]), RunTables.number(s[4])));
                     printer.printRecord(row);
                 }

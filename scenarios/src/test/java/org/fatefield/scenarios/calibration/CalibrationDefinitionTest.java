@@ -125,8 +125,8 @@ class CalibrationDefinitionTest {
                 low = 0.1
                 high = 0.5
                 """;
-        Files.writeString(tmp.resolve("profile.csv"), "x_um,fraction_photocyte,sd_photocyte\n100,0.4,0.05\n200,,0.05\n"
-                + "300,0.1,0.02\n");
+        Files.writeString(tmp.resolve("profile.csv"), "x_um,fate,fraction,sd\n100,photocyte,0.4,0.05\n"
+                + "200,photocyte,,0.05\n300,photocyte,0.1,0.02\n");
         CalibrationDefinition d = CalibrationDefinition.read(write(calibration, DATA + "[profile]\nfile = \"profile.csv\"\n"));
         assertEquals(3, d.data().observations().size(), "one statistic and two profile points (an empty cell is no point)");
         Observation last = d.data().observations().get(2);
@@ -135,10 +135,17 @@ class CalibrationDefinitionTest {
         assertEquals(0.1, last.value(), 0.0);
         assertEquals(0.02, last.sd(), 0.0);
 
-        Files.writeString(tmp.resolve("profile.csv"), "x_um,fraction_photocyte,sd_photocyte\n100,1.5,0.05\n");
+        Files.writeString(tmp.resolve("profile.csv"), "x_um,fate,fraction,sd\n100,photocyte,1.5,0.05\n");
         ScenarioException e = assertThrows(ScenarioException.class, () -> CalibrationDefinition.read(write(calibration,
                 DATA + "[profile]\nfile = \"profile.csv\"\n")));
         assertTrue(e.getMessage().contains("profile.csv:2") && e.getMessage().contains("the fraction from 0 to 1"),
                 e.getMessage());
+
+        // A wide table (a column per fate) is named for what it lacks.
+        Files.writeString(tmp.resolve("profile.csv"), "x_um,fraction_photocyte,sd_photocyte\n100,0.4,0.05\n");
+        ScenarioException wide = assertThrows(ScenarioException.class, () -> CalibrationDefinition.read(write(
+                calibration, DATA + "[profile]\nfile = \"profile.csv\"\n")));
+        assertTrue(wide.getMessage().contains("missing columns fate, fraction, sd: the profile has one row per position"
+                + " and fate"), wide.getMessage());
     }
 }

@@ -52,7 +52,10 @@ class ExamplesTest {
         assertEquals(0, FatefieldCommandAccess.run("sweep", "run", out.toString(), "--workers", "2"));
         assertEquals(0, FatefieldCommandAccess.run("sweep", "collect", out.toString()));
         List<String> rows = Files.readAllLines(out.resolve("runs.csv"));
-        assertEquals(1 + 3 * 2, rows.size(), "a header and one row per run (3 decay rates x 2 replicates)");
+        assertEquals("run_id,point,replicate,seed,morphogen.decay,status,metric,fate,value", rows.get(0));
+        assertEquals(3 * 2, rows.stream().skip(1).map(r -> r.substring(0, r.indexOf(','))).distinct().count(),
+                "rows of every run (3 decay rates x 2 replicates)");
+        assertTrue(rows.stream().skip(1).allMatch(r -> r.contains(",complete,")), "every run complete");
     }
 
     private static boolean isScenario(Path p) {

@@ -316,10 +316,11 @@ class RunCommandTest {
         String json = Files.readString(out.resolve("run.json"));
         assertTrue(json.contains("run.duration = 3.0") && json.contains("tissue.founders = 20"), json);
         assertTrue(json.contains("\"build_commit\""), json);
-        List<String> lines = Files.readAllLines(out.resolve("timeseries.csv"));
+        List<String> lines = Files.readAllLines(out.resolve("population.csv"));
+        assertEquals("time_h,cells,mean_morphogen", lines.get(0));
         String last = lines.get(lines.size() - 1);
         assertEquals(3.0, Double.parseDouble(last.substring(0, last.indexOf(','))), 1e-9, "the run ends at 3 h");
-        assertEquals("20", lines.get(1).split(",")[4], "20 founders: " + lines.get(1));
+        assertEquals("20", lines.get(1).split(",")[1], "20 founders: " + lines.get(1));
     }
 
     @Test

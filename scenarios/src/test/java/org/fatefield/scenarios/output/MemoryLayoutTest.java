@@ -67,9 +67,9 @@ class MemoryLayoutTest {
     void tablesDoNotDependOnReorderOrRelocateIntervals(@TempDir Path dir) throws Exception {
         Scenario scenario = scenario();
         String[] reference = tables(scenario, 10, 100, 2, dir.resolve("a"));
-        long divisions = reference[2].lines().filter(l -> l.matches("^\\d+,-?\\d+,\\d+,[^,]+,[0-9.]+,.*")).count();
+        long divisions = reference[2].lines().filter(l -> l.matches("^\\d+,\\d*,\\d+,[^,]+,[0-9.]+,.*")).count();
         assertTrue(divisions > 100, "the test needs many divisions, got " + divisions);
-        assertTrue(reference[2].contains(",NaN,") && reference[2].lines().anyMatch(l -> !l.endsWith(",NaN,1,1")),
+        assertTrue(reference[2].contains(",,") && reference[2].lines().anyMatch(l -> !l.endsWith(",,1,1")),
                 "lineage rows present");
         int[][] layouts = {{7, 100}, {1, 1}, {3, 13}, {1000, 1000}};
         for (int[] layout : layouts) {
