@@ -18,6 +18,7 @@ import org.fatefield.scenarios.calibration.SlurmBackend;
 import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.output.Provenance;
 import org.fatefield.scenarios.output.RunFolder;
+import org.fatefield.scenarios.sweep.ContainerImage;
 import org.fatefield.scenarios.sweep.SlurmScript;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -78,6 +79,14 @@ final class CalibrateCommand implements Callable<Integer> {
             description = "SLURM account to charge (default: yours)")
     private String account;
 
+    @Option(names = "--slurm-container", paramLabel = "IMAGE", description = "run each task in this container image"
+            + " (built from scenarios/container/; an image reference, or a .sif file for apptainer)")
+    private String container;
+
+    @Option(names = "--slurm-container-runtime", paramLabel = "NAME", description = "podman, docker or apptainer"
+            + " (default: apptainer for a .sif file, else podman)")
+    private String runtime;
+
     @Mixin
     private FigureOptions figures;
 
@@ -95,15 +104,22 @@ final class CalibrateCommand implements Callable<Integer> {
         }
         RoundBackend backend;
         try {
+            if (!slurm && (container != null || runtime != null)) {
+                throw new IllegalArgumentException("--container and --container-runtime need --slurm");
+            }
+            if (runtime != null && container == null) {
+                throw new IllegalArgumentException("--container-runtime needs --container IMAGE");
+            }
             backend = slurm
                     ? new SlurmBackend(new SlurmScript(tasks, time, memory, 1, 0, partition, account), SlurmScript.launcher(
-                            FatefieldCommand.class), quiet.progress(System.err))
+                            FatefieldCommand.class).in(container == null ? null : ContainerImage.of(container, runtime)),
+                            quiet.progress(System.err))
                     : new LocalBackend(workers != null ? workers : Runtime.getRuntime().availableProcessors(),
                             quiet.progress(System.err));
         } catch (IllegalArgumentException e) {
             throw new CommandLine.ParameterException(spec.commandLine(), e.getMessage().replace("--time", "--slurm-time")
                     .replace("--mem", "--slurm-mem").replace("--partition", "--slurm-partition")
-                    .replace("--account", "--slurm-account"));
+                    .replace("--account", "--slurm-account").replace("--container", "--slurm-container"));
         }
         CalibrationDefinition definition;
         try {

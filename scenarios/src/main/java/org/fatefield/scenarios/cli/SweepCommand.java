@@ -15,6 +15,7 @@ import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.format.ScenarioReader;
 import org.fatefield.scenarios.output.Provenance;
 import org.fatefield.scenarios.output.RunFolder;
+import org.fatefield.scenarios.sweep.ContainerImage;
 import org.fatefield.scenarios.sweep.Manifest;
 import org.fatefield.scenarios.sweep.SlurmScript;
 import org.fatefield.scenarios.sweep.SweepCollector;
@@ -212,16 +213,36 @@ final class SweepCommand implements Runnable {
                 description = "SLURM account to charge (default: yours)")
         private String account;
 
+        @Option(names = "--container", paramLabel = "IMAGE", description = "run each task in this container image"
+                + " (built from scenarios/container/; an image reference, or a .sif file for apptainer) instead of"
+                + " a Java on the node")
+        private String container;
+
+        @Option(names = "--container-runtime", paramLabel = "NAME", description = "podman, docker or apptainer"
+                + " (default: apptainer for a .sif file, else podman)")
+        private String runtime;
+
         @CommandLine.Spec
         private CommandLine.Model.CommandSpec spec;
 
         @Override
         public Integer call() {
+            SlurmScript.Launcher launcher;
+            try {
+                if (runtime != null && container == null) {
+                    throw new IllegalArgumentException("--container-runtime needs --container IMAGE");
+                }
+                launcher = SlurmScript.launcher(FatefieldCommand.class)
+                        .in(container == null ? null : ContainerImage.of(container, runtime));
+                // The limits alone, checked before the folder is read (the task count comes from it).
+                new SlurmScript(1, time, memory, cpus, concurrent, partition, account);
+            } catch (IllegalArgumentException e) {
+                throw new CommandLine.ParameterException(spec.commandLine(), e.getMessage());
+            }
             try {
                 Manifest manifest = Manifest.read(folder);
                 int n = tasks != null ? tasks : Math.min(1000, manifest.runs().size());
                 SlurmScript script = new SlurmScript(n, time, memory, cpus, concurrent, partition, account);
-                SlurmScript.Launcher launcher = SlurmScript.launcher(FatefieldCommand.class);
                 Files.createDirectories(folder.resolve("logs"));
                 Files.writeString(folder.resolve("sweep.sbatch"), script.text(folder, launcher));
                 spec.commandLine().getOut().printf("Wrote %s (%d array tasks). Submit with: sbatch %s%n",

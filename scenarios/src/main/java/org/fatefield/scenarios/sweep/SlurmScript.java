@@ -10,8 +10,9 @@ import java.util.Locale;
  * running {@code fatefield sweep run} on its share. The task's shard is its array task id out of
  * the script's task count, written into the script, so resubmitting some ids ({@code sbatch
  * --array=3,7 sweep.sbatch}) runs exactly those shards. Java is {@code $FATEFIELD_JAVA} if set,
- * else {@code java} on the node's PATH (never the submitting host's path), with a heap of 85% of
- * {@code --mem} so the task stays inside its memory limit.
+ * else {@code java} on the node's PATH (never the submitting host's path), or the tool runs from a
+ * {@link ContainerImage}; either way with a heap of 85% of {@code --mem} so the task stays inside
+ * its memory limit.
  *
  * @param tasks       array tasks (shards)
  * @param time        wall-time limit per task, as SLURM writes it (e.g. 01:00:00)
@@ -55,8 +56,21 @@ public record SlurmScript(int tasks, String time, String memory, int cpus, int c
         this(tasks, time, memory, cpus, concurrent, "", "");
     }
 
-    /** How the tool is started on a node: the default Java command and the arguments after it. */
-    public record Launcher(String defaultJava, String arguments) {
+    /**
+     * How the tool is started on a node: the default Java command and the arguments after it, or,
+     * when {@code container} is not null, that container image.
+     */
+    public record Launcher(String defaultJava, String arguments, ContainerImage container) {
+
+        /** Java on the node. */
+        public Launcher(String defaultJava, String arguments) {
+            this(defaultJava, arguments, null);
+        }
+
+        /** The same tool, started from {@code image} instead (null: Java on the node). */
+        public Launcher in(ContainerImage image) {
+            return new Launcher(defaultJava, arguments, image);
+        }
     }
 
     /**
@@ -92,6 +106,19 @@ public record SlurmScript(int tasks, String time, String memory, int cpus, int c
         return (long) Math.floor(HEAP_SHARE * megabytes);
     }
 
+    /** The lines that start the tool, up to its arguments: Java on the node, or a container. */
+    private String start(Path folder, Launcher launcher) {
+        long heap = heapMegabytes(memory);
+        if (launcher.container() != null) {
+            return "# Fatefield from the container image " + launcher.container().image() + " ("
+                    + launcher.container().runtime() + "); heap 85% of --mem.\n"
+                    + launcher.container().command(folder, heap);
+        }
+        return "# Java from FATEFIELD_JAVA if set, else from the node's PATH; heap 85% of --mem.\n"
+                + "JAVA=\"${FATEFIELD_JAVA:-" + launcher.defaultJava() + "}\"\n"
+                + "\"$JAVA\" -Xmx" + heap + "m " + launcher.arguments();
+    }
+
     /** The script for the sweep in {@code folder}, started with {@code launcher}. */
     public String text(Path folder, Launcher launcher) {
         Path abs = folder.toAbsolutePath().normalize();
@@ -114,10 +141,8 @@ public record SlurmScript(int tasks, String time, String memory, int cpus, int c
                 %7$s#SBATCH --output=%1$s/logs/%%A_%%a.out
                 #SBATCH --error=%1$s/logs/%%A_%%a.err
                 set -euo pipefail
-                # Java from FATEFIELD_JAVA if set, else from the node's PATH; heap 85%% of --mem.
-                JAVA="${FATEFIELD_JAVA:-%8$s}"
-                "$JAVA" -Xmx%9$dm %10$s sweep run "%1$s" --workers %6$d --shard "${SLURM_ARRAY_TASK_ID}/%2$d"
+                %8$s sweep run "%1$s" --workers %6$d --shard "${SLURM_ARRAY_TASK_ID}/%2$d"
                 """, abs, tasks, concurrent > 0 ? "%" + concurrent : "", time, memory, cpus, options,
-                launcher.defaultJava(), heapMegabytes(memory), launcher.arguments());
+                start(abs, launcher));
     }
 }

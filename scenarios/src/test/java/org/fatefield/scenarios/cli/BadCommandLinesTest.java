@@ -69,6 +69,12 @@ class BadCommandLinesTest {
                 new Case(2, "calibrate nosuch.toml --workers 0 --out " + out, "--workers"),
                 new Case(2, "calibrate nosuch.toml --slurm --slurm-time soon --out " + out, "--slurm-time"),
                 new Case(2, "calibrate nosuch.toml", "--out"),
+                new Case(2, "calibrate nosuch.toml --slurm-container fatefield:1 --out " + out, "need --slurm"),
+                new Case(2, "calibrate nosuch.toml --slurm --slurm-container a;b --out " + out,
+                        "--slurm-container must be an image reference"),
+                new Case(2, "sweep slurm nosuch --container-runtime podman", "--container-runtime needs --container"),
+                new Case(2, "sweep slurm nosuch --container x:1 --container-runtime lxc", "podman, docker, apptainer"),
+                new Case(2, "sweep slurm nosuch --time soon", "--time must look like HH:MM:SS"),
                 new Case(2, "run demo --set morphogen.decay --out " + out, "KEY=VALUE"),
                 new Case(1, "run demo --set morphogen.decai=0.3 --out " + out, "did you mean 'decay'"),
                 new Case(1, "analyze demo --set morphogen.decay=-1 --out " + out, "morphogen.decay"));

@@ -42,6 +42,28 @@ class SlurmScriptTest {
     }
 
     @Test
+    void aContainerTaskBindsTheSweepFolderAndPassesTheHeap() {
+        SlurmScript.Launcher jar = new SlurmScript.Launcher("java", "-jar \"/opt/fatefield.jar\"");
+        String podman = new SlurmScript(2, "01:00:00", "2G", 1, 0).text(Path.of("/data/sweep"),
+                jar.in(ContainerImage.of("registry.example.org/lab/fatefield:0.1.0", null)));
+        assertTrue(podman.contains("podman run --rm --network=none --user \"$(id -u):$(id -g)\" --env"
+                + " FATEFIELD_JAVA_OPTIONS=-Xmx1740m --volume \"/data/sweep:/data/sweep\" --workdir \"/data/sweep\""
+                + " \"registry.example.org/lab/fatefield:0.1.0\" sweep run \"/data/sweep\" --workers 1 --shard"
+                + " \"${SLURM_ARRAY_TASK_ID}/2\"\n"), podman);
+        assertFalse(podman.contains("FATEFIELD_JAVA:-"), "no Java on the node is used: " + podman);
+        String apptainer = new SlurmScript(2, "01:00:00", "2G", 1, 0).text(Path.of("/data/sweep"),
+                jar.in(ContainerImage.of("/images/fatefield.sif", null)));
+        assertTrue(apptainer.contains("apptainer run --containall --env FATEFIELD_JAVA_OPTIONS=-Xmx1740m --bind"
+                + " \"/data/sweep\" \"/images/fatefield.sif\" sweep run \"/data/sweep\""), apptainer);
+        assertEquals("docker", ContainerImage.of("fatefield:0.1.0", "docker").runtime());
+        IllegalArgumentException quote = assertThrows(IllegalArgumentException.class,
+                () -> ContainerImage.of("fatefield\"; rm -rf /", null));
+        assertTrue(quote.getMessage().contains("--container must be an image reference"), quote.getMessage());
+        assertThrows(IllegalArgumentException.class, () -> ContainerImage.of("fatefield:1", "apptainer"));
+        assertThrows(IllegalArgumentException.class, () -> ContainerImage.of("fatefield:1", "lxc"));
+    }
+
+    @Test
     void aResubmittedSubsetOfArrayIdsRunsThoseShards() {
         Manifest manifest = new Manifest(List.of("k"), java.util.stream.IntStream.range(0, 12)
                 .mapToObj(i -> new Manifest.Run("p" + i, i, 0, i, new double[] {i})).toList());
