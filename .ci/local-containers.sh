@@ -40,7 +40,9 @@ do_base() {
     >/tmp/fatefield-debootstrap.log 2>&1 || { tail -20 /tmp/fatefield-debootstrap.log >&2; die "debootstrap failed"; }
   tar -C "$ROOTFS" -c . | podman import --change 'CMD ["/bin/sh"]' - "$IMAGE" >/dev/null 2>>/tmp/fatefield-debootstrap.log
   rm -rf "$ROOTFS"
-  podman run --rm --network=none "$IMAGE" java -version 2>&1 | head -1 >&2 || die "the base image does not run"
+  local version
+  version=$(podman run --rm --network=none "$IMAGE" java -version 2>&1) || die "the base image does not run: $version"
+  log "${version%%$'\n'*}"
   log "$IMAGE built in $(( $(date +%s) - t0 )) s"
 }
 
