@@ -3,9 +3,9 @@ package org.fatefield.engine.bench;
 /**
  * The mechanics stage's bare baseline: the same overlap repulsion (speed rate * overlap along
  * the line of centres, shared equally, a square root only for overlapping pairs) over plain
- * position arrays and a neighbour list built once (pairs closer than 1.2 contact distances at
- * the start), with no bucket rebuild, no cell objects and no walls: a floor for the pair
- * arithmetic a mechanics step cannot avoid.
+ * position arrays and a neighbour list built once (each pair closer than 1.2 contact distances
+ * at the start listed once, its force added to both cells), with no bucket rebuild, no cell
+ * objects and no walls: a floor for the pair arithmetic a mechanics step cannot avoid.
  */
 final class BareMechanicsLoop {
 
@@ -58,7 +58,7 @@ final class BareMechanicsLoop {
                         double dx = x[i] - x[k];
                         double dy = y[i] - y[k];
                         double reach = 1.2 * (r[i] + r[k]);
-                        if (k != i && dx * dx + dy * dy < reach * reach) {
+                        if (k > i && dx * dx + dy * dy < reach * reach) {
                             if (used == list.length) {
                                 list = java.util.Arrays.copyOf(list, 2 * list.length);
                             }
@@ -75,9 +75,9 @@ final class BareMechanicsLoop {
     /** One overdamped step of {@code dt}: forces from the current positions, then every move. */
     void step(double dt) {
         int n = x.length;
+        java.util.Arrays.fill(fx, 0.0);
+        java.util.Arrays.fill(fy, 0.0);
         for (int i = 0; i < n; i++) {
-            double sx = 0;
-            double sy = 0;
             for (int q = start[i]; q < start[i + 1]; q++) {
                 int k = neighbours[q];
                 double ex = x[i] - x[k];
@@ -87,12 +87,12 @@ final class BareMechanicsLoop {
                 if (d2 < reach * reach && d2 > 1e-24) {
                     double d = Math.sqrt(d2);
                     double push = rate * (reach - d) / d;
-                    sx += ex * push;
-                    sy += ey * push;
+                    fx[i] += ex * push;
+                    fy[i] += ey * push;
+                    fx[k] -= ex * push;
+                    fy[k] -= ey * push;
                 }
             }
-            fx[i] = sx;
-            fy[i] = sy;
         }
         double step = 0.5 * dt;
         for (int i = 0; i < n; i++) {
@@ -101,7 +101,7 @@ final class BareMechanicsLoop {
         }
     }
 
-    /** Candidate pairs per cell in the list (the tissue's neighbour search sees more). */
+    /** Candidate pairs in the list per cell, each pair counted once (the tissue's search sees more). */
     double candidatesPerCell() {
         return x.length == 0 ? 0 : (double) neighbours.length / x.length;
     }

@@ -14,9 +14,11 @@ import org.fatefield.engine.parallel.BlockParallel;
  * {@code rate * overlap} shared equally; with adhesion, neighbours a little beyond contact pull
  * together with speed {@code adhesion * gap}; walls hold every disc inside the domain. Forces come
  * from a snapshot of positions in bucket and id order (so the result does not depend on the
- * order cells are visited or stored)
- * and neighbours from a uniform bucket grid of side one largest diameter, so a step costs time
- * linear in the number of cells.
+ * order cells are visited or stored) and neighbours from a uniform bucket grid of side one
+ * largest diameter, so a step costs time linear in the number of cells. Each pair is computed
+ * once, from its first cell in that order, and added to both cells; rows of buckets are summed
+ * in the fixed passes of {@link RowPasses}, so the sums, and the result, do not depend on the
+ * number of threads.
  */
 public final class OverlapRepulsion {
 
@@ -31,6 +33,9 @@ public final class OverlapRepulsion {
     private double[] sx = new double[0];
     private double[] sy = new double[0];
     private double[] sr = new double[0];
+    /** Net force on each slot, summed pair by pair. */
+    private double[] fx = new double[0];
+    private double[] fy = new double[0];
     private int[] slotOfCell = new int[0];
     private int[] bucketOfCell = new int[0];
     private int[] bucketStart = new int[0];
@@ -108,9 +113,11 @@ public final class OverlapRepulsion {
             for (int i = from; i < to; i++) {
                 Cell c = population.get(i);
                 bucketOfCell[i] = bucketOf(c.y(), sideY, gy) * gx + bucketOf(c.x(), side, gx);
+                // sx is free until the snapshot: it holds the ids (exact below 2^53) for the sort.
+                sx[i] = c.id();
             }
         });
-        assignSlots(population, gx * gy);
+        assignSlots(n, gx * gy, pool);
         pool.forEach(n, (from, to, worker) -> {
             for (int i = from; i < to; i++) {
                 Cell c = population.get(i);
@@ -120,90 +127,105 @@ public final class OverlapRepulsion {
                 sr[slot] = c.radius(newbornRadius);
             }
         });
+        pool.forEach(n, (from, to, worker) -> {
+            Arrays.fill(fx, from, to, 0.0);
+            Arrays.fill(fy, from, to, 0.0);
+        });
+        for (int[] rows : RowPasses.of(gy, periodic)) {
+            pool.forEach(rows.length, (from, to, worker) -> {
+                for (int r = from; r < to; r++) {
+                    pairsOfRow(rows[r], gx, gy);
+                }
+            });
+        }
         double step = 0.5 * dt;
         pool.forEach(n, (from, to, worker) -> {
             double[] place = placeOfWorker[worker];
             for (int i = from; i < to; i++) {
-                move(population.get(i), slotOfCell[i], gx, gy, side, sideY, step, place);
+                int slot = slotOfCell[i];
+                domain.confine(sx[slot] + step * fx[slot], sy[slot] + step * fy[slot], sr[slot], place);
+                population.get(i).moveTo(place[0], place[1]);
             }
         });
     }
 
     /**
-     * Moves the cell in slot {@code self} by one step of the net force of its neighbours in the
-     * snapshot, clamped to the walls. Reads only the snapshot arrays and writes only this cell, so
-     * blocks of cells can move in parallel, in any order, with the same result. {@code place} is
-     * the worker's scratch for the confined position.
+     * Adds the force of every pair whose first cell is in bucket row {@code row}: with a later
+     * cell of the same or the next bucket of that row, or with any cell of the three buckets
+     * below it in the next row (across the seam on a strip). Each neighbouring pair is met once,
+     * from its first cell, and both cells get their share, equal and opposite. Writes only rows
+     * {@code row} and the next, so the rows of one {@link RowPasses} pass run in parallel.
      */
-    private void move(Cell cell, int self, int gx, int gy, double side, double sideY, double step,
-            double[] place) {
-        double x = sx[self];
-        double y = sy[self];
-        double radius = sr[self];
-        double fx = 0;
-        double fy = 0;
-        int bx = bucketOf(x, side, gx);
-        int by = bucketOf(y, sideY, gy);
+    private void pairsOfRow(int row, int gx, int gy) {
         boolean periodic = domain.periodicY();
-        // Rows by - 1 .. by + 1, wrapped on a strip (where fewer than three rows means all of them).
-        int rowFrom = Math.max(0, by - 1);
-        int rowTo = Math.min(gy - 1, by + 1);
-        if (periodic) {
-            rowFrom = gy >= 3 ? by - 1 : 0;
-            rowTo = gy >= 3 ? by + 1 : gy - 1;
-        }
-        int columnFrom = Math.max(0, bx - 1);
-        int columnTo = Math.min(gx - 1, bx + 1);
-        for (int row = rowFrom; row <= rowTo; row++) {
-            int cy = row < 0 ? row + gy : (row >= gy ? row - gy : row);
-            // The three buckets of a row are consecutive slots.
-            int end = bucketStart[cy * gx + columnTo + 1];
-            for (int k = bucketStart[cy * gx + columnFrom]; k < end; k++) {
-                if (k == self) {
-                    continue;
+        boolean nextRow = RowPasses.pairsWithNext(row, gy, periodic);
+        int next = row + 1 == gy ? 0 : row + 1;
+        for (int column = 0; column < gx; column++) {
+            int bucket = row * gx + column;
+            int sameEnd = bucketStart[row * gx + Math.min(gx - 1, column + 1) + 1];
+            int belowFrom = bucketStart[next * gx + Math.max(0, column - 1)];
+            int belowTo = bucketStart[next * gx + Math.min(gx - 1, column + 1) + 1];
+            for (int i = bucketStart[bucket]; i < bucketStart[bucket + 1]; i++) {
+                for (int k = i + 1; k < sameEnd; k++) {
+                    pair(i, k, periodic);
                 }
-                double ex = x - sx[k];
-                double ey = y - sy[k];
-                if (periodic) {
-                    ey = domain.nearestImageDy(ey);
-                }
-                double reach = radius + sr[k];
-                double d2 = ex * ex + ey * ey;
-                if (d2 >= reach * reach) {
-                    double far = reach * (1 + adhesionRange);
-                    if (adhesion > 0 && d2 < far * far) {
-                        // Adhesion pulls neighbours within reach back towards contact.
-                        double d = Math.sqrt(d2);
-                        double pull = adhesion * (d - reach) / d;
-                        fx -= ex * pull;
-                        fy -= ey * pull;
-                    }
-                    continue;
-                }
-                double d = Math.sqrt(d2);
-                if (d > 1e-12) {
-                    double push = rate * (reach - d) / d;
-                    fx += ex * push;
-                    fy += ey * push;
-                } else {
-                    // Coincident centres: separate along x by slot order, deterministically.
-                    fx += rate * (self < k ? -reach : reach);
+                for (int k = belowFrom; nextRow && k < belowTo; k++) {
+                    pair(i, k, periodic);
                 }
             }
         }
-        domain.confine(x + step * fx, y + step * fy, radius, place);
-        cell.moveTo(place[0], place[1]);
+    }
+
+    /**
+     * The force between slots {@code i} and {@code k}: overlap pushes them apart along the line of
+     * centres at {@code rate * overlap}, adhesion pulls near neighbours back to contact. Pairs
+     * out of reach are rejected on squared distances, without a square root.
+     */
+    private void pair(int i, int k, boolean periodic) {
+        double ex = sx[i] - sx[k];
+        double ey = sy[i] - sy[k];
+        if (periodic) {
+            ey = domain.nearestImageDy(ey);
+        }
+        double reach = sr[i] + sr[k];
+        double d2 = ex * ex + ey * ey;
+        double px;
+        double py;
+        if (d2 >= reach * reach) {
+            double far = reach * (1 + adhesionRange);
+            if (adhesion <= 0 || d2 >= far * far) {
+                return;
+            }
+            double d = Math.sqrt(d2);
+            double pull = adhesion * (d - reach) / d;
+            px = -ex * pull;
+            py = -ey * pull;
+        } else {
+            double d = Math.sqrt(d2);
+            if (d > 1e-12) {
+                double push = rate * (reach - d) / d;
+                px = ex * push;
+                py = ey * push;
+            } else {
+                // Coincident centres: separate along x by slot order, deterministically.
+                px = -rate * reach;
+                py = 0;
+            }
+        }
+        fx[i] += px;
+        fy[i] += py;
+        fx[k] -= px;
+        fy[k] -= py;
     }
 
     /**
      * Counts the cells per bucket and gives each cell a slot, buckets in row-major order and
      * cells in order of id within a bucket (a counting sort, then an insertion sort of each
-     * bucket's few cells). The force on a cell is then summed in an order fixed by positions
-     * and ids, never by the population's memory order, so floating-point results do not depend
-     * on when the population was last reordered.
+     * bucket's few cells, buckets in parallel). The force on a cell is then summed in an order
+     * fixed by positions and ids, never by the population's memory order, so floating-point
+     * results do not depend on when the population was last reordered.
      */
-    private void assignSlots(CellPopulation population, int buckets) {
-        int n = population.size();
+    private void assignSlots(int n, int buckets, BlockParallel pool) {
         if (bucketStart.length < buckets + 1) {
             bucketStart = new int[buckets + 1];
             bucketFill = new int[buckets];
@@ -225,27 +247,32 @@ public final class OverlapRepulsion {
         for (int i = 0; i < n; i++) {
             cellOfSlot[slotOfCell[i]] = i;
         }
-        for (int b = 0; b < buckets; b++) {
-            sortBucketById(population, cellOfSlot, bucketStart[b], bucketStart[b + 1]);
-        }
+        pool.forEach(buckets, (from, to, worker) -> {
+            for (int b = from; b < to; b++) {
+                sortBucketById(cellOfSlot, bucketStart[b], bucketStart[b + 1]);
+            }
+        });
+        pool.forEach(n, (from, to, worker) -> {
+            for (int k = from; k < to; k++) {
+                slotOfCell[cellOfSlot[k]] = k;
+            }
+        });
     }
 
     /**
-     * Insertion sort of slots {@code [from, to)} (one bucket, a few cells) by cell id, keeping
-     * {@link #slotOfCell} in step.
+     * Insertion sort of slots {@code [from, to)} (one bucket, a few cells) by cell id, read from
+     * {@link #sx} where the bucket pass left the ids.
      */
-    private void sortBucketById(CellPopulation population, int[] cellOfSlot, int from, int to) {
+    private void sortBucketById(int[] cellOfSlot, int from, int to) {
         for (int k = from + 1; k < to; k++) {
             int cell = cellOfSlot[k];
-            long id = population.get(cell).id();
+            double id = sx[cell];
             int j = k - 1;
-            while (j >= from && population.get(cellOfSlot[j]).id() > id) {
+            while (j >= from && sx[cellOfSlot[j]] > id) {
                 cellOfSlot[j + 1] = cellOfSlot[j];
-                slotOfCell[cellOfSlot[j + 1]] = j + 1;
                 j--;
             }
             cellOfSlot[j + 1] = cell;
-            slotOfCell[cell] = j + 1;
         }
     }
 
@@ -260,6 +287,8 @@ public final class OverlapRepulsion {
             sx = new double[size];
             sy = new double[size];
             sr = new double[size];
+            fx = new double[size];
+            fy = new double[size];
             slotOfCell = new int[size];
             bucketOfCell = new int[size];
         }

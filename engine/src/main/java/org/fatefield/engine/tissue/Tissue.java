@@ -8,8 +8,6 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
-import org.apache.commons.rng.UniformRandomProvider;
-import org.fatefield.circuits.random.EmbeddedStream;
 import org.fatefield.circuits.random.RandomStreams;
 import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.cell.CellPopulation;
@@ -22,7 +20,6 @@ import org.fatefield.engine.lineage.LineageSink;
 import org.fatefield.engine.mechanics.OverlapRepulsion;
 import org.fatefield.engine.parallel.BlockParallel;
 import org.fatefield.engine.record.TimeSeries;
-import org.fatefield.engine.variability.ExtrinsicNoise;
 import sim.engine.Schedule;
 import sim.engine.SimState;
 
@@ -59,6 +56,8 @@ public final class Tissue extends SimState {
     private final int threads;
     private BlockParallel pool;
     private OverlapRepulsion mechanics;
+    /** Steps between mechanics relaxations (multi-rate stepping, {@link Timing#mechanicsEvery}). */
+    private int mechanicsEvery = 1;
     private CellDivision division;
     private CellLoop cellLoop;
     /** Which cells the last cell loop found ready to divide, by population index. */
@@ -91,7 +90,6 @@ public final class Tissue extends SimState {
     @Override
     public void start() {
         super.start();
-        CircuitSetup circuit = spec.circuit();
         GrowthSpec growth = spec.growth();
         population = new CellPopulation();
         List<MorphogenSpec> specs = spec.fields();
@@ -112,32 +110,13 @@ public final class Tissue extends SimState {
         cellLoop = new CellLoop(spec, threads, fields.length);
         mechanics = new OverlapRepulsion(spec.domain(), growth.repulsionRate(), growth.cellRadius(),
                 growth.adhesion(), 0.2);
+        mechanicsEvery = spec.timing().mechanicsEvery(Math.max(growth.repulsionRate(), growth.adhesion()));
         division = new CellDivision(spec, streams, cellLoop.serialRandom());
         steps = 0;
         ancestry = new Ancestry();
         lineageClosed = false;
         blockSide = 4 * spec.morphogen().gridSpacing();
-        UniformRandomProvider placement = streams.stream(PLACEMENT_STREAM);
-        double r = growth.cellRadius();
-        double[] point = new double[2];
-        for (int i = 0; i < growth.initialCells(); i++) {
-            spec.domain().samplePoint(placement, r, point);
-            long id = population.newId();
-            EmbeddedStream.Detached birth = new EmbeddedStream.Detached(streams.seedWords(id));
-            double cycle = growth.cycle().sample(birth);
-            // Founders are spread over their cycle; cells that never divide all start at age 0.
-            double age = growth.cycle().divides() ? cycle * birth.nextDouble() : 0.0;
-            Cell founder = new Cell(id, -1, 0, -age, cycle, circuit.initialState(), birth.streamWords(), point[0],
-                    point[1], 1.0, growth.size().control().volume(1.0, age, cycle));
-            if (!spec.extrinsic().isEmpty()) {
-                founder.setScores(ExtrinsicNoise.founderScores(spec.extrinsic(), cellLoop.serialRandom().of(founder)));
-            }
-            if (spec.fates().inFirstPassageFate(founder.liveState())) {
-                founder.noteInFirstPassageFate(0.0);
-            }
-            population.add(founder);
-            ancestry.add(id, -1);
-        }
+        Founders.place(spec, streams, streams.stream(PLACEMENT_STREAM), cellLoop, population, ancestry);
         population.sortByBlock(blockSide, spec.width(), spec.height(), pool);
         population.relocateInOrder();
         record();
@@ -146,7 +125,8 @@ public final class Tissue extends SimState {
 
     /**
      * One time step; called by {@link TissueTick}. The stages, in order: fields; the cell loop
-     * (in parallel); divisions in order of cell id; deaths; mechanics; memory layout; records
+     * (in parallel); divisions in order of cell id; deaths; mechanics (every
+     * {@link Timing#mechanicsEvery} steps, over that many steps, and at the last); memory layout; records
      * (time series when due, the live cells' lineage records after the last step); observers.
      * Nothing but memory order depends on the layout stage: divisions and deaths go by id, and
      * mechanics and field exchange sum in an order fixed by position and id.
@@ -165,7 +145,10 @@ public final class Tissue extends SimState {
         if (spec.growth().deathRate() > 0) {
             CellDeaths.remove(spec, population, cellLoop.serialRandom(), lineage, dt, time());
         }
-        mechanics.relax(population, dt, pool);
+        long sinceMechanics = steps % mechanicsEvery;
+        if (sinceMechanics == 0 || steps == spec.timing().totalSteps()) {
+            mechanics.relax(population, dt * (sinceMechanics == 0 ? mechanicsEvery : sinceMechanics), pool);
+        }
         if (steps % reorderEvery == 0) {
             population.sortByBlock(blockSide, spec.width(), spec.height(), pool);
         }

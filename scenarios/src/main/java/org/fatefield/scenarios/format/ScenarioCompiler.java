@@ -80,6 +80,13 @@ final class ScenarioCompiler {
         if (recordEvery < step) {
             values.fail(run, "run", "record_every", "must be at least one step (" + step + " h)");
         }
+        double mechanicsStep = values.number(run, "run", "mechanics_step");
+        if (mechanicsStep > 0 && (mechanicsStep < step * (1 - 1e-9)
+                || Math.abs(mechanicsStep / step - Math.round(mechanicsStep / step)) > 1e-6
+                || mechanicsStep > recordEvery * (1 + 1e-9))) {
+            values.fail(run, "run", "mechanics_step", "must be 0 (automatic) or a whole number of run.step ("
+                    + step + " h) up to run.record_every (" + recordEvery + " h)");
+        }
         double width = values.number(tissue, "tissue", "width");
         double height = values.number(tissue, "tissue", "height");
         double radius = values.number(tissue, "tissue", "cell_radius");
@@ -94,9 +101,11 @@ final class ScenarioCompiler {
                     width * height / (4 * radius * radius), MAX_DIAMETERS_SQUARED,
                     0.5 * Math.sqrt(width * height / MAX_DIAMETERS_SQUARED)));
         }
-        if (repulsion * step > 0.5) {
-            values.fail(tissue, "tissue", "repulsion", "repulsion * run.step = " + repulsion * step
-                    + " makes the mechanics unstable; keep it below 0.5 (lower repulsion or run.step)");
+        double mechanics = mechanicsStep > 0 ? mechanicsStep : step;
+        if (repulsion * mechanics > 0.5) {
+            values.fail(tissue, "tissue", "repulsion", "repulsion * " + (mechanicsStep > 0 ? "run.mechanics_step"
+                    : "run.step") + " = " + repulsion * mechanics + " makes the mechanics unstable; keep it below 0.5"
+                    + " (lower repulsion or the step)");
         }
         CircuitSetup circuit = new CircuitCompiler(circuitDocument.toml(),
                 new TomlValues(circuitDocument.label(), circuitDocument.locator(), problems)).compile();
@@ -115,7 +124,7 @@ final class ScenarioCompiler {
         try {
             TissueSpec spec = new TissueSpec(circuit, mapping, morphogen,
                     Domain.of(values.text(tissue, "tissue", "shape"), width, height), growth, fates,
-                    new Timing(duration, step, recordEvery), extrinsic(circuit), others);
+                    new Timing(duration, step, recordEvery, Math.max(0, mechanicsStep)), extrinsic(circuit), others);
             for (String rate : RateCheck.problems(spec)) {
                 problems.add(new Problem(circuitDocument.label(), 0, 0, "circuit", null, rate));
             }

@@ -66,9 +66,13 @@ public final class ScenarioSchema {
                     "what the scenario is"),
             new Section("run", false, false, List.of(
                     Key.positive("duration", "h", "48", "simulated time"),
-                    Key.positive("step", "h", "0.01", "time step of circuits and mechanics (the field sub-steps as it needs)"),
+                    Key.positive("step", "h", "0.01", "time step of circuits (the field sub-steps as it needs)"),
                     Key.positive("record_every", "h", "0.5", "time between record times of timeseries.csv and"
                             + " population.csv (at least one step)"),
+                    Key.nonNegative("mechanics_step", "h", "0", "time step of the mechanics, a whole number of steps"
+                            + " up to record_every; 0: set from the repulsion time scale, the longest with"
+                            + " max(repulsion, adhesion) * mechanics_step <= 0.1 (so every step while"
+                            + " repulsion * step > 0.05)"),
                     Key.integer("seed", "1", 0, 9.007199254740991E15,
                             "master random seed; --seed on the command line overrides it")),
                     "how long to simulate and how often to record"),
