@@ -29,15 +29,19 @@ public final class OverlapRepulsion {
     private final double newbornRadius;
     private final double adhesion;
     private final double adhesionRange;
-    /** Positions and radii in bucket order (slot order), so that a bucket row is read contiguously. */
+    /**
+     * Positions and radii in bucket order (slot order), so that a bucket row is read contiguously.
+     * Radii and forces are floats (relative rounding 6e-8, far below the Euler step's error) to
+     * keep a live cell within 256 bytes of heap; positions are doubles.
+     */
     private double[] sx = new double[0];
     private double[] sy = new double[0];
-    private double[] sr = new double[0];
+    private float[] sr = new float[0];
     /** Net force on each slot, summed pair by pair. */
-    private double[] fx = new double[0];
-    private double[] fy = new double[0];
+    private float[] fx = new float[0];
+    private float[] fy = new float[0];
+    /** Each cell's slot (its bucket, while the slots are being assigned). */
     private int[] slotOfCell = new int[0];
-    private int[] bucketOfCell = new int[0];
     private int[] bucketStart = new int[0];
     private int[] bucketFill = new int[0];
     private double[] largestVolumeOfWorker = new double[0];
@@ -112,7 +116,7 @@ public final class OverlapRepulsion {
         pool.forEach(n, (from, to, worker) -> {
             for (int i = from; i < to; i++) {
                 Cell c = population.get(i);
-                bucketOfCell[i] = bucketOf(c.y(), sideY, gy) * gx + bucketOf(c.x(), side, gx);
+                slotOfCell[i] = bucketOf(c.y(), sideY, gy) * gx + bucketOf(c.x(), side, gx);
                 // sx is free until the snapshot: it holds the ids (exact below 2^53) for the sort.
                 sx[i] = c.id();
             }
@@ -124,12 +128,12 @@ public final class OverlapRepulsion {
                 int slot = slotOfCell[i];
                 sx[slot] = c.x();
                 sy[slot] = c.y();
-                sr[slot] = c.radius(newbornRadius);
+                sr[slot] = (float) c.radius(newbornRadius);
             }
         });
         pool.forEach(n, (from, to, worker) -> {
-            Arrays.fill(fx, from, to, 0.0);
-            Arrays.fill(fy, from, to, 0.0);
+            Arrays.fill(fx, from, to, 0.0f);
+            Arrays.fill(fy, from, to, 0.0f);
         });
         for (int[] rows : RowPasses.of(gy, periodic)) {
             pool.forEach(rows.length, (from, to, worker) -> {
@@ -187,7 +191,7 @@ public final class OverlapRepulsion {
         if (periodic) {
             ey = domain.nearestImageDy(ey);
         }
-        double reach = sr[i] + sr[k];
+        double reach = (double) sr[i] + sr[k];
         double d2 = ex * ex + ey * ey;
         double px;
         double py;
@@ -212,10 +216,10 @@ public final class OverlapRepulsion {
                 py = 0;
             }
         }
-        fx[i] += px;
-        fy[i] += py;
-        fx[k] -= px;
-        fy[k] -= py;
+        fx[i] += (float) px;
+        fy[i] += (float) py;
+        fx[k] -= (float) px;
+        fy[k] -= (float) py;
     }
 
     /**
@@ -233,46 +237,45 @@ public final class OverlapRepulsion {
             Arrays.fill(bucketStart, 0, buckets + 1, 0);
         }
         for (int i = 0; i < n; i++) {
-            bucketStart[bucketOfCell[i] + 1]++;
+            bucketStart[slotOfCell[i] + 1]++;
         }
         for (int b = 0; b < buckets; b++) {
             bucketStart[b + 1] += bucketStart[b];
         }
         System.arraycopy(bucketStart, 0, bucketFill, 0, buckets);
         for (int i = 0; i < n; i++) {
-            slotOfCell[i] = bucketFill[bucketOfCell[i]]++;
+            slotOfCell[i] = bucketFill[slotOfCell[i]]++;
         }
-        // The buckets are known now, so their array is reused for the inverse map, slot to cell.
-        int[] cellOfSlot = bucketOfCell;
+        // sy is free until the snapshot too: it holds the inverse map, slot to cell (exact as doubles).
         for (int i = 0; i < n; i++) {
-            cellOfSlot[slotOfCell[i]] = i;
+            sy[slotOfCell[i]] = i;
         }
         pool.forEach(buckets, (from, to, worker) -> {
             for (int b = from; b < to; b++) {
-                sortBucketById(cellOfSlot, bucketStart[b], bucketStart[b + 1]);
+                sortBucketById(bucketStart[b], bucketStart[b + 1]);
             }
         });
         pool.forEach(n, (from, to, worker) -> {
             for (int k = from; k < to; k++) {
-                slotOfCell[cellOfSlot[k]] = k;
+                slotOfCell[(int) sy[k]] = k;
             }
         });
     }
 
     /**
-     * Insertion sort of slots {@code [from, to)} (one bucket, a few cells) by cell id, read from
-     * {@link #sx} where the bucket pass left the ids.
+     * Insertion sort of slots {@code [from, to)} (one bucket, a few cells) by cell id: the cells
+     * of the slots are in {@link #sy}, their ids in {@link #sx}, where the bucket pass left them.
      */
-    private void sortBucketById(int[] cellOfSlot, int from, int to) {
+    private void sortBucketById(int from, int to) {
         for (int k = from + 1; k < to; k++) {
-            int cell = cellOfSlot[k];
-            double id = sx[cell];
+            double cell = sy[k];
+            double id = sx[(int) cell];
             int j = k - 1;
-            while (j >= from && sx[cellOfSlot[j]] > id) {
-                cellOfSlot[j + 1] = cellOfSlot[j];
+            while (j >= from && sx[(int) sy[j]] > id) {
+                sy[j + 1] = sy[j];
                 j--;
             }
-            cellOfSlot[j + 1] = cell;
+            sy[j + 1] = cell;
         }
     }
 
@@ -286,11 +289,10 @@ public final class OverlapRepulsion {
             int size = Math.max(n, sx.length + sx.length / 4);
             sx = new double[size];
             sy = new double[size];
-            sr = new double[size];
-            fx = new double[size];
-            fy = new double[size];
+            sr = new float[size];
+            fx = new float[size];
+            fy = new float[size];
             slotOfCell = new int[size];
-            bucketOfCell = new int[size];
         }
         if (largestVolumeOfWorker.length != workers) {
             largestVolumeOfWorker = new double[workers];

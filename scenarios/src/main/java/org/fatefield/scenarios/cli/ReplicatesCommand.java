@@ -57,6 +57,9 @@ final class ReplicatesCommand implements Callable<Integer> {
     @Mixin
     private SharedOptions.Quiet quiet;
 
+    @Mixin
+    private SharedOptions.Verbose verbose;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
@@ -76,6 +79,11 @@ final class ReplicatesCommand implements Callable<Integer> {
         }
         long first = seed.orElse(loaded.seed());
         int workers = threads.resolveFor(loaded);
+        if (verbose.on(spec, quiet.given())) {
+            RunPlan.print(loaded, first, workers, spec.commandLine().getOut());
+            spec.commandLine().getOut().printf("replicates: %d tissues on seeds %d to %d%n", runs, first,
+                    first + runs - 1);
+        }
         Path out = this.out.path();
         ReplicateSet set = new ReplicateSet(loaded.tissue().fates().fateNames());
         try {

@@ -74,6 +74,9 @@ final class RunCommand implements Callable<Integer> {
     @Option(names = "--quiet", description = "print nothing but errors")
     private boolean quiet;
 
+    @Mixin
+    private SharedOptions.Verbose verbose;
+
     /** Estimated snapshot size above which --yes is needed. */
     private static final double SNAPSHOT_CONFIRM_BYTES = 2e9;
 
@@ -100,6 +103,10 @@ final class RunCommand implements Callable<Integer> {
         }
         long runSeed = seed.orElse(loaded.seed());
         Path folder = out.orElse(RunLayout.defaultFolder(loaded.name(), "-seed" + runSeed));
+        boolean detail = verbose.on(spec, quiet);
+        if (detail) {
+            RunPlan.print(loaded, runSeed, threads.resolveFor(loaded), outWriter);
+        }
         Progress progress = quiet ? Progress.silent()
                 : Progress.forConsole(loaded.name(), loaded.tissue().timing().totalSteps(), System.err);
         try {
@@ -151,6 +158,9 @@ final class RunCommand implements Callable<Integer> {
                 outWriter.printf("Finished %s (seed %d): %d cells at t = %.1f h (%s).%n", loaded.name(), runSeed,
                         last.population(), last.time(), summary);
                 outWriter.printf("Results are in %s%n", folder.toAbsolutePath().normalize());
+                if (detail) {
+                    RunPlan.files(folder, outWriter);
+                }
                 outWriter.flush();
             }
             return 0;

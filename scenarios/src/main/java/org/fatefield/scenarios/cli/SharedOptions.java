@@ -93,6 +93,11 @@ final class SharedOptions {
         @Option(names = "--quiet", description = "print no progress, only errors")
         private boolean quiet;
 
+        /** True with {@code --quiet}. */
+        boolean given() {
+            return quiet;
+        }
+
         /** Where progress goes: {@code err}, or nowhere when quiet. */
         PrintStream progress(PrintStream err) {
             return quiet ? new PrintStream(OutputStream.nullOutputStream()) : err;
@@ -101,6 +106,30 @@ final class SharedOptions {
         /** As {@link #progress(PrintStream)} for a writer. */
         PrintWriter progress(PrintWriter err) {
             return quiet ? new PrintWriter(Writer.nullWriter()) : err;
+        }
+    }
+
+    /**
+     * {@code --verbose}: before running, the settings as resolved (what the engine will use,
+     * including what it sets itself), and after, the files written.
+     */
+    static final class Verbose {
+
+        @Option(names = "--verbose", description = "also print the settings as resolved before running (steps,"
+                + " mechanics step, grids, threads, expected size) and the files written")
+        private boolean verbose;
+
+        /**
+         * True with {@code --verbose}.
+         *
+         * @throws picocli.CommandLine.ParameterException if {@code --quiet} is given too
+         */
+        boolean on(CommandSpec spec, boolean quiet) {
+            if (quiet && verbose) {
+                throw new picocli.CommandLine.ParameterException(spec.commandLine(),
+                        "--quiet and --verbose contradict each other: give one");
+            }
+            return verbose;
         }
     }
 

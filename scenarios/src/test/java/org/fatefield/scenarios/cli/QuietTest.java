@@ -12,7 +12,8 @@ import org.junit.jupiter.api.io.TempDir;
 
 /**
  * --quiet silences the progress lines and nothing else: the same tables are written and the
- * summary line still comes.
+ * summary line still comes. --verbose adds the resolved settings and the files written, and
+ * changes no result either.
  */
 class QuietTest {
 
@@ -34,5 +35,32 @@ class QuietTest {
         assertTrue(quietOut.toString().startsWith("Analysed one-gene-switch"), quietOut.toString());
         assertEquals(Files.readString(tmp.resolve("loud").resolve("steady-states.csv")),
                 Files.readString(tmp.resolve("quiet").resolve("steady-states.csv")));
+    }
+
+    @Test
+    void verboseRunPrintsTheResolvedSettingsAndTheFilesButTheSameResults() throws Exception {
+        String[] base = {"run", "demo", "--set", "run.duration=2.0", "--set", "run.step=0.005", "--set",
+            "tissue.repulsion=4.0"};
+        StringWriter out = new StringWriter();
+        String[] verbose = java.util.stream.Stream.concat(java.util.Arrays.stream(base),
+                java.util.stream.Stream.of("--out", tmp.resolve("verbose").toString(), "--verbose"))
+                .toArray(String[]::new);
+        String[] plain = java.util.stream.Stream.concat(java.util.Arrays.stream(base),
+                java.util.stream.Stream.of("--out", tmp.resolve("plain").toString(), "--quiet")).toArray(String[]::new);
+        assertEquals(0, FatefieldCommand.execute(new PrintWriter(out), new PrintWriter(new StringWriter()), verbose));
+        assertEquals(0, FatefieldCommandAccess.run(plain));
+        // 0.1 / (4/h x 0.005 h) = 5 steps of mechanics (Timing.MECHANICS_ACCURACY).
+        assertTrue(out.toString().contains("time: 2 h in 400 steps of 0.005 h; records every 100 steps; mechanics"
+                + " every 5 steps (0.025 h, set from the repulsion time scale)"), out.toString());
+        assertTrue(out.toString().contains("  override: tissue.repulsion = 4.0") && out.toString()
+                .contains("  timeseries.csv ("), out.toString());
+        for (String table : new String[] {"timeseries.csv", "cells.csv", "lineage.csv"}) {
+            assertEquals(Files.readString(tmp.resolve("plain").resolve(table)),
+                    Files.readString(tmp.resolve("verbose").resolve(table)), table);
+        }
+        StringWriter err = new StringWriter();
+        assertEquals(2, FatefieldCommand.execute(new PrintWriter(new StringWriter()), new PrintWriter(err), "run",
+                "demo", "--quiet", "--verbose", "--out", tmp.resolve("both").toString()));
+        assertTrue(err.toString().contains("--quiet and --verbose contradict each other"), err.toString());
     }
 }

@@ -1,0 +1,94 @@
+package org.fatefield.scenarios.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Locale;
+import java.util.stream.Stream;
+import org.fatefield.engine.field.MorphogenSpec;
+import org.fatefield.engine.tissue.GrowthSpec;
+import org.fatefield.engine.tissue.Timing;
+import org.fatefield.engine.tissue.TissueSpec;
+import org.fatefield.engine.tissue.WorkEstimate;
+import org.fatefield.scenarios.format.Scenario;
+import org.fatefield.scenarios.output.RunTables;
+
+/**
+ * What {@code --verbose} prints before a scenario runs: the settings as resolved from the file,
+ * its overrides and the command line (the values the engine will use, including those it sets
+ * itself, such as the mechanics step), so a modeler can check them before a long run.
+ */
+final class RunPlan {
+
+    private RunPlan() {
+    }
+
+    /** Writes the plan of {@code scenario} run on {@code seed} with {@code threads} to {@code out}. */
+    static void print(Scenario scenario, long seed, int threads, PrintWriter out) {
+        TissueSpec spec = scenario.tissue();
+        Timing timing = spec.timing();
+        GrowthSpec growth = spec.growth();
+        int mechanics = timing.mechanicsEvery(Math.max(growth.repulsionRate(), growth.adhesion()));
+        WorkEstimate work = WorkEstimate.of(spec);
+        out.printf(Locale.ROOT, "scenario: %s (%s, SHA-256 %s)%n", scenario.name(), scenario.source(),
+                scenario.sha256());
+        for (String override : scenario.overrides()) {
+            out.printf(Locale.ROOT, "  override: %s%n", override);
+        }
+        out.printf(Locale.ROOT, "seed: %d; threads: %d%n", seed, threads);
+        out.printf(Locale.ROOT, "time: %s h in %d steps of %s h; records every %d steps; mechanics every %d"
+                + " step%s (%s h, %s)%n", n(timing.duration()), timing.totalSteps(), n(timing.step()),
+                timing.stepsPerRecord(), mechanics, mechanics == 1 ? "" : "s", n(mechanics * timing.step()),
+                timing.mechanicsStep() > 0 ? "as set" : "set from the repulsion time scale");
+        out.printf(Locale.ROOT, "tissue: %s x %s µm%s; %d founders of radius %s µm; repulsion %s/h,"
+                + " adhesion %s/h%n", n(spec.width()), n(spec.height()), spec.domain().periodicY() ? ", periodic in y" : "",
+                growth.initialCells(), n(growth.cellRadius()), n(growth.repulsionRate()), n(growth.adhesion()));
+        for (MorphogenSpec field : spec.fields()) {
+            out.printf(Locale.ROOT, "field %s: %d x %d squares of %s µm, diffusion %s µm²/h, decay %s/h,"
+                    + " %s solver%n", field.name(), (int) Math.ceil(spec.width() / field.gridSpacing()),
+                    (int) Math.ceil(spec.height() / field.gridSpacing()), n(field.gridSpacing()), n(field.diffusion()),
+                    n(field.decay()), field.solver().toString().toLowerCase(Locale.ROOT));
+        }
+        out.printf(Locale.ROOT, "circuit: %d species, noise %s, system size %s; fates: %s%n",
+                spec.circuit().network().speciesCount(), spec.circuit().noise().toString().toLowerCase(Locale.ROOT),
+                n(spec.circuit().systemSize()),
+                String.join(", ", spec.fates().fateNames()));
+        out.printf(Locale.ROOT, "expected: about %.3g cells at the end, %.3g cell-steps%n", work.finalCells(),
+                work.cellSteps());
+        out.flush();
+    }
+
+    /** Writes every file of the run folder {@code folder} with its size, snapshot folders summed. */
+    static void files(Path folder, PrintWriter out) throws IOException {
+        List<Path> entries;
+        try (Stream<Path> list = Files.list(folder)) {
+            entries = list.filter(p -> !p.getFileName().toString().startsWith(".")).sorted().toList();
+        }
+        for (Path p : entries) {
+            if (Files.isDirectory(p)) {
+                long[] countAndBytes = new long[2];
+                try (Stream<Path> walk = Files.walk(p)) {
+                    for (Path f : walk.filter(Files::isRegularFile).toList()) {
+                        countAndBytes[0]++;
+                        countAndBytes[1] += Files.size(f);
+                    }
+                }
+                out.printf(Locale.ROOT, "  %s/ (%d files, %s)%n", p.getFileName(), countAndBytes[0],
+                        size(countAndBytes[1]));
+            } else {
+                out.printf(Locale.ROOT, "  %s (%s)%n", p.getFileName(), size(Files.size(p)));
+            }
+        }
+    }
+
+    private static String n(double value) {
+        return RunTables.number(value);
+    }
+
+    private static String size(long bytes) {
+        return bytes < 10_000 ? bytes + " bytes" : bytes < 10_000_000 ? String.format(Locale.ROOT, "%.0f kB", bytes / 1e3)
+                : String.format(Locale.ROOT, "%.1f MB", bytes / 1e6);
+    }
+}
