@@ -118,7 +118,9 @@ public final class ReplicateReport {
         List<List<String>> table = new ArrayList<>();
         for (Map.Entry<String, Map<String, String>> tissue : rows.entrySet()) {
             List<String> cells = new ArrayList<>(List.of(tissue.getKey()));
-            header.stream().skip(1).forEach(h -> cells.add(tissue.getValue().getOrDefault(h, "")));
+            // An undefined value (empty in the table) shows as a dash, as in the tables above.
+            header.stream().skip(1).forEach(h -> cells.add(tissue.getValue().getOrDefault(h, "").isEmpty() ? "–"
+                    : tissue.getValue().get(h)));
             table.add(cells);
         }
         page.table(header, table);
