@@ -12,7 +12,6 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
-import org.fatefield.scenarios.builtin.BuiltinScenarios;
 import org.fatefield.scenarios.cli.FatefieldCommandAccess;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -60,18 +59,9 @@ class ContainerClusterIT {
         assertEquals(outside.output().lines().findFirst().orElseThrow(),
                 inside.output().lines().findFirst().orElseThrow(), "the image carries the jar just built");
 
-        String demo = new String(BuiltinScenarios.bytes("demo").orElseThrow(), StandardCharsets.UTF_8)
-                .replace("duration = 48.0", "duration = 4.0").replace("founders = 120", "founders = 30");
-        Files.writeString(tmp.resolve("base.toml"), demo);
-        Path file = tmp.resolve("sweep.toml");
-        Files.writeString(file, "[sweep]\nscenario = \"base.toml\"\nreplicates = 2\nseed = 8\n\n[[parameter]]\n"
-                + "key = \"coupling[1].gain\"\nvalues = [1.2, 1.8]\n");
-        Path local = tmp.resolve("local");
-        Path cluster = tmp.resolve("cluster");
-        assertEquals(0, FatefieldCommandAccess.run("sweep", "plan", file.toString(), "--out", local.toString()));
-        assertEquals(0, FatefieldCommandAccess.run("sweep", "plan", file.toString(), "--out", cluster.toString()));
-        assertEquals(0, FatefieldCommandAccess.run("sweep", "run", local.toString(), "--workers", "1"));
-        assertEquals(0, FatefieldCommandAccess.run("sweep", "collect", local.toString()));
+        SweepPair pair = SweepPair.plan(tmp, 8);
+        Path local = pair.local();
+        Path cluster = pair.cluster();
         assertEquals(0, FatefieldCommandAccess.run("sweep", "slurm", cluster.toString(), "--tasks", "2",
                 "--time", "00:10:00", "--mem", "1G", "--container", IMAGE));
         String script = Files.readString(cluster.resolve("sweep.sbatch"));
@@ -81,10 +71,7 @@ class ContainerClusterIT {
         Result submit = run(List.of("sbatch", "--parsable", cluster.resolve("sweep.sbatch").toString()), 60);
         assertEquals(0, submit.code(), "sbatch: " + submit.output());
         String job = submit.output().trim().split(";")[0];
-        long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(300);
-        while (System.nanoTime() < deadline && !run(List.of("squeue", "-h", "-j", job), 30).output().isBlank()) {
-            Thread.sleep(500);
-        }
+        SweepPair.awaitJob(job, 300);
         assertEquals(0, FatefieldCommandAccess.run("sweep", "collect", cluster.toString()),
                 "logs: " + logs(cluster.resolve("logs")));
         assertArrayEquals(Files.readAllBytes(local.resolve("runs.csv")), Files.readAllBytes(cluster.resolve("runs.csv")),
