@@ -123,6 +123,9 @@ final class AnalyzeCommand implements Callable<Integer> {
     @Mixin
     private SharedOptions.Quiet quiet;
 
+    @Mixin
+    private SharedOptions.Verbose verbose;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
@@ -144,6 +147,9 @@ final class AnalyzeCommand implements Callable<Integer> {
             return FatefieldCommand.INVALID_INPUT;
         }
         ReactionNetwork network = loaded.tissue().circuit().network();
+        if (verbose.on(spec, quiet.given())) {
+            RunPlan.printAnalysis(loaded, plan, network.speciesNames(), spec.commandLine().getOut());
+        }
         Path folder = out.orElse(RunLayout.defaultFolder(loaded.name(), "-analysis"));
         try {
             RunFolder.checkUsable(folder, force.given());

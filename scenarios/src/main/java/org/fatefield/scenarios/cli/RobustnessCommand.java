@@ -64,6 +64,9 @@ final class RobustnessCommand implements Callable<Integer> {
     @Mixin
     private SharedOptions.Quiet quiet;
 
+    @Mixin
+    private SharedOptions.Verbose verbose;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
@@ -89,6 +92,14 @@ final class RobustnessCommand implements Callable<Integer> {
             Path out = this.out.path();
             RunFolder.checkUsable(out, false, false);
             int workers = threads.resolveFor(loaded);
+            if (verbose.on(spec, quiet.given())) {
+                PrintWriter o = spec.commandLine().getOut();
+                RunPlan.print(loaded, loaded.seed(), workers, o);
+                o.printf(Locale.ROOT, "perturbations (each by ±%s%%, %d seed pairs): %s%n",
+                        RunTables.number(100 * fraction), replicates,
+                        String.join(", ", perturbations.stream().map(Perturbation::name).toList()));
+                o.flush();
+            }
             long start = System.nanoTime();
             List<RobustnessAnalysis.Sensitivity> result = RobustnessAnalysis.run(loaded.tissue(), perturbations,
                     fraction, replicates, loaded.seed(), workers, (done, total) -> {

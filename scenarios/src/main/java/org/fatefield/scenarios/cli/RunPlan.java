@@ -7,6 +7,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Locale;
 import java.util.stream.Stream;
+import org.fatefield.circuits.study.AnalysisPlan;
 import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.tissue.GrowthSpec;
 import org.fatefield.engine.tissue.Timing;
@@ -57,6 +58,28 @@ final class RunPlan {
                 String.join(", ", spec.fates().fateNames()));
         out.printf(Locale.ROOT, "expected: about %.3g cells at the end, %.3g cell-steps%n", work.finalCells(),
                 work.cellSteps());
+        out.flush();
+    }
+
+    /** Writes what {@code analyze} will compute, as resolved, to {@code out}. */
+    static void printAnalysis(Scenario scenario, AnalysisPlan plan, List<String> species, PrintWriter out) {
+        out.printf(Locale.ROOT, "scenario: %s (%s, SHA-256 %s)%n", scenario.name(), scenario.source(),
+                scenario.sha256());
+        out.printf(Locale.ROOT, "parameter: %s from %s to %s; steady states at %s%n", plan.parameter(), n(plan.min()),
+                n(plan.max()), n(plan.at()));
+        if (plan.second() != null && !plan.second().isEmpty()) {
+            out.printf(Locale.ROOT, "second parameter: %s from %s to %s (fold curves)%n", plan.second(),
+                    n(plan.secondMin()), n(plan.secondMax()));
+        }
+        if (species.size() >= 2) {
+            out.printf(Locale.ROOT, "state plane: %s x %s on a %d x %d grid%n", species.get(plan.xSpecies()),
+                    species.get(plan.ySpecies()), plan.grid(), plan.grid());
+        }
+        out.printf(Locale.ROOT, "switching: %s method, step %s h, limit %s h, arrival within %s of the distance;"
+                + " %d trajectories at system sizes %s/8 to %s; seed %d%n", plan.switching().method().word(),
+                n(plan.switching().step()), n(plan.switching().passageLimit()),
+                n(plan.switching().arrivalFraction()), plan.trajectories(), n(plan.systemSize()),
+                n(plan.systemSize()), plan.seed());
         out.flush();
     }
 

@@ -115,8 +115,9 @@ final class SharedOptions {
      */
     static final class Verbose {
 
-        @Option(names = "--verbose", description = "also print the settings as resolved before running (steps,"
-                + " mechanics step, grids, threads, expected size) and the files written")
+        @Option(names = "--verbose", description = "also print, before anything runs, the settings as they will"
+                + " be used (for a tissue: steps, mechanics step, grids, threads, expected size; for an analysis:"
+                + " ranges, grid, switching settings) and, after a run, the files written")
         private boolean verbose;
 
         /**

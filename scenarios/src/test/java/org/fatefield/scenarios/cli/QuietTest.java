@@ -58,6 +58,12 @@ class QuietTest {
             assertEquals(Files.readString(tmp.resolve("plain").resolve(table)),
                     Files.readString(tmp.resolve("verbose").resolve(table)), table);
         }
+        StringWriter analysis = new StringWriter();
+        assertEquals(0, FatefieldCommand.execute(new PrintWriter(analysis), new PrintWriter(new StringWriter()),
+                "analyze", Path.of("src", "test", "resources", "one-gene-switch.toml").toString(), "--out",
+                tmp.resolve("analysis").toString(), "--verbose", "--range", "0.5:2", "--at", "1"));
+        assertTrue(analysis.toString().contains("steady states at 1\n") && analysis.toString().contains("from 0.5 to 2;"),
+                analysis.toString());
         StringWriter err = new StringWriter();
         assertEquals(2, FatefieldCommand.execute(new PrintWriter(new StringWriter()), new PrintWriter(err), "run",
                 "demo", "--quiet", "--verbose", "--out", tmp.resolve("both").toString()));
