@@ -124,6 +124,16 @@ public final class HillNetwork implements ReactionNetwork {
         }
     }
 
+    /** How the inputs of a gene combine. */
+    public Combination combination() {
+        return combination;
+    }
+
+    /** The effect of gene {@code source} on gene {@code target}: +1 activates, -1 represses, 0 none. */
+    public int sign(int target, int source) {
+        return sign[target][source];
+    }
+
     @Override
     public List<String> speciesNames() {
         return genes;

@@ -17,8 +17,8 @@ import picocli.CommandLine;
 /** {@code fatefield export-sbml}: write a scenario's circuit as an SBML model. */
 @Command(name = "export-sbml", mixinStandardHelpOptions = true,
         description = {"Write a scenario's circuit as an SBML Level 3 core model (species, parameters, reactions"
-                + " with kinetic laws), for other SBML tools. Custom circuits, the switch and the toggle can be"
-                + " written; a scenario can read such a file back with circuit.file."})
+                + " with kinetic laws), for other SBML tools. Custom circuits, Hill networks, the switch and the"
+                + " toggle can be written; a scenario can read such a file back with circuit.file."})
 final class ExportSbmlCommand implements Callable<Integer> {
 
     @Parameters(index = "0", paramLabel = "SCENARIO", description = "a scenario file, or a built-in name (demo)")

@@ -154,7 +154,9 @@ final class ScenarioCompiler {
             String parameter = table.getString("parameter");
             int[] indices = network.parameterGroup(parameter);
             if (indices.length == 0) {
-                List<String> options = new ArrayList<>(ScenarioSchema.KINETICS.stream().map(Key::name).toList());
+                // The switch's shared kinetic keys name parameters only for the switch and the toggle.
+                List<String> options = new ArrayList<>(network instanceof SelfActivatingSwitch
+                        ? ScenarioSchema.KINETICS.stream().map(Key::name).toList() : List.of());
                 options.addAll(parameterNames);
                 problems.add(locator.at(table, "parameter", "coupling[" + (i + 1) + "].parameter",
                         "\"" + parameter + "\"",

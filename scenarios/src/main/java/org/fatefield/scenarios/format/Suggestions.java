@@ -13,6 +13,10 @@ public final class Suggestions {
         String best = null;
         int bestDistance = 3;
         for (String candidate : known) {
+            if (candidate.equals(word)) {
+                // The word itself is known here but not valid where it was written: no suggestion.
+                continue;
+            }
             int d = editDistance(word.toLowerCase(Locale.ROOT), candidate.toLowerCase(Locale.ROOT));
             if (d < bestDistance) {
                 best = candidate;

@@ -7,6 +7,7 @@ import org.fatefield.circuits.expr.ExpressionParser;
 import org.fatefield.circuits.expr.Node;
 import org.fatefield.circuits.model.CustomNetwork;
 import org.fatefield.circuits.model.GeneKinetics;
+import org.fatefield.circuits.model.HillNetwork;
 import org.fatefield.circuits.model.ReactionNetwork;
 import org.fatefield.circuits.model.SelfActivatingSwitch;
 
@@ -14,9 +15,10 @@ import org.fatefield.circuits.model.SelfActivatingSwitch;
  * Writes a circuit as an SBML Level 3 Version 2 core model: one compartment of size 1 (the cell;
  * concentrations are the circuit's own unit), each species with its initial concentration, each
  * parameter with its value, and each reaction with its stoichiometry and kinetic law in MathML
- * (Hill functions written out as x^n / (K^n + x^n) and K^n / (K^n + x^n)). Custom circuits and
- * the self-activating switch (and so the toggle) are written; a switch's parameters
- * {@code <gene>.<name>} become {@code <gene>_<name>}, since SBML names cannot hold a dot. Reading
+ * (Hill functions written out as x^n / (K^n + x^n) and K^n / (K^n + x^n)). Custom circuits, Hill
+ * networks and the self-activating switch (and so the toggle) are written; dotted parameter names
+ * ({@code <gene>.<name>}, {@code <target>.<source>.hill}) get underscores, since SBML names
+ * cannot hold a dot. Reading
  * the file back ({@code circuit.file}) gives the same circuit.
  */
 public final class SbmlExport {
@@ -27,7 +29,7 @@ public final class SbmlExport {
     /**
      * The SBML document of {@code network} with {@code initial} concentrations.
      *
-     * @throws IllegalArgumentException for a kind of circuit that cannot be written (Hill networks)
+     * @throws IllegalArgumentException for a kind of circuit that cannot be written
      */
     public static String of(String modelId, ReactionNetwork network, double[] initial) {
         List<String> species = network.speciesNames();
@@ -88,8 +90,40 @@ public final class SbmlExport {
             }
             return laws;
         }
+        if (network instanceof HillNetwork hill) {
+            return hillLaws(hill, parameters);
+        }
         throw new IllegalArgumentException("this kind of circuit (" + network.getClass().getSimpleName() + ") cannot be"
-                + " written as SBML yet; custom circuits and the switch or toggle can");
+                + " written as SBML yet; custom circuits, Hill networks and the switch or toggle can");
+    }
+
+    /**
+     * A Hill network's laws, per gene: production {@code basal + max_rate * regulation}, where
+     * regulation is the mean (additive) or product (multiplicative) of its inputs' Hill terms, or 1
+     * without inputs; then loss {@code degradation * x}.
+     */
+    private static List<Node> hillLaws(HillNetwork network, List<String> parameters) {
+        List<String> g = network.speciesNames();
+        List<Node> laws = new ArrayList<>();
+        for (int i = 0; i < g.size(); i++) {
+            List<String> terms = new ArrayList<>();
+            for (int j = 0; j < g.size(); j++) {
+                int sign = network.sign(i, j);
+                if (sign != 0) {
+                    String edge = g.get(i) + "_" + g.get(j) + "_";
+                    terms.add((sign > 0 ? "hill_act(" : "hill_rep(") + g.get(j) + ", " + edge + "threshold, " + edge
+                            + "hill)");
+                }
+            }
+            String regulation = terms.isEmpty() ? "1"
+                    : network.combination() == HillNetwork.Combination.ADDITIVE
+                    ? "(" + String.join(" + ", terms) + ") / " + terms.size()
+                    : String.join(" * ", terms);
+            String p = g.get(i) + "_";
+            laws.add(ExpressionParser.parse(p + "basal + " + p + "max_rate * (" + regulation + ")", g, parameters));
+            laws.add(ExpressionParser.parse(p + "degradation * " + g.get(i), g, parameters));
+        }
+        return laws;
     }
 
     private static void side(StringBuilder x, ReactionNetwork network, List<String> species, int j, boolean products) {
