@@ -107,12 +107,9 @@ final class CalibrateCommand implements Callable<Integer> {
             if (!slurm && (container != null || runtime != null)) {
                 throw new IllegalArgumentException("--container and --container-runtime need --slurm");
             }
-            if (runtime != null && container == null) {
-                throw new IllegalArgumentException("--container-runtime needs --container IMAGE");
-            }
             backend = slurm
                     ? new SlurmBackend(new SlurmScript(tasks, time, memory, 1, 0, partition, account), SlurmScript.launcher(
-                            FatefieldCommand.class).in(container == null ? null : ContainerImage.of(container, runtime)),
+                            FatefieldCommand.class).in(ContainerImage.of(container, runtime)),
                             quiet.progress(System.err))
                     : new LocalBackend(workers != null ? workers : Runtime.getRuntime().availableProcessors(),
                             quiet.progress(System.err));

@@ -33,8 +33,7 @@ final class RunPlan {
         GrowthSpec growth = spec.growth();
         int mechanics = timing.mechanicsEvery(Math.max(growth.repulsionRate(), growth.adhesion()));
         WorkEstimate work = WorkEstimate.of(spec);
-        out.printf(Locale.ROOT, "scenario: %s (%s, SHA-256 %s)%n", scenario.name(), scenario.source(),
-                scenario.sha256());
+        scenarioLine(scenario, out);
         for (String override : scenario.overrides()) {
             out.printf(Locale.ROOT, "  override: %s%n", override);
         }
@@ -63,8 +62,7 @@ final class RunPlan {
 
     /** Writes what {@code analyze} will compute, as resolved, to {@code out}. */
     static void printAnalysis(Scenario scenario, AnalysisPlan plan, List<String> species, PrintWriter out) {
-        out.printf(Locale.ROOT, "scenario: %s (%s, SHA-256 %s)%n", scenario.name(), scenario.source(),
-                scenario.sha256());
+        scenarioLine(scenario, out);
         out.printf(Locale.ROOT, "parameter: %s from %s to %s; steady states at %s%n", plan.parameter(), n(plan.min()),
                 n(plan.max()), n(plan.at()));
         if (plan.second() != null && !plan.second().isEmpty()) {
@@ -104,6 +102,11 @@ final class RunPlan {
                 out.printf(Locale.ROOT, "  %s (%s)%n", p.getFileName(), size(Files.size(p)));
             }
         }
+    }
+
+    private static void scenarioLine(Scenario scenario, PrintWriter out) {
+        out.printf(Locale.ROOT, "scenario: %s (%s, SHA-256 %s)%n", scenario.name(), scenario.source(),
+                scenario.sha256());
     }
 
     private static String n(double value) {

@@ -229,11 +229,7 @@ final class SweepCommand implements Runnable {
         public Integer call() {
             SlurmScript.Launcher launcher;
             try {
-                if (runtime != null && container == null) {
-                    throw new IllegalArgumentException("--container-runtime needs --container IMAGE");
-                }
-                launcher = SlurmScript.launcher(FatefieldCommand.class)
-                        .in(container == null ? null : ContainerImage.of(container, runtime));
+                launcher = SlurmScript.launcher(FatefieldCommand.class).in(ContainerImage.of(container, runtime));
                 // The limits alone, checked before the folder is read (the task count comes from it).
                 new SlurmScript(1, time, memory, cpus, concurrent, partition, account);
             } catch (IllegalArgumentException e) {

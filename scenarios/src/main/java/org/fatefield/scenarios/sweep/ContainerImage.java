@@ -38,9 +38,17 @@ public record ContainerImage(String runtime, String image) {
 
     /**
      * The image, run by apptainer if it is a {@code .sif} file (made absolute, as a task may start
-     * elsewhere), else by {@code runtime} or podman.
+     * elsewhere), else by {@code runtime} or podman; null when no image is given (Java on the node).
+     *
+     * @throws IllegalArgumentException if a runtime is given without an image, or either is bad
      */
     public static ContainerImage of(String image, String runtime) {
+        if (image == null) {
+            if (runtime != null) {
+                throw new IllegalArgumentException("--container-runtime needs --container IMAGE");
+            }
+            return null;
+        }
         String chosen = runtime != null ? runtime.toLowerCase(Locale.ROOT)
                 : image.endsWith(".sif") ? "apptainer" : "podman";
         boolean file = chosen.equals("apptainer") && image.endsWith(".sif") && !image.contains("\0");

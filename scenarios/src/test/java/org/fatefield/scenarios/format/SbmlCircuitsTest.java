@@ -122,22 +122,7 @@ class SbmlCircuitsTest {
                 .replace("below = { V = 0.8 }", "below = { Ark = 0.35 }");
         Files.writeString(tmp.resolve("demo-sbml.toml"), scenario);
         ReactionNetwork back = ScenarioReader.read(tmp.resolve("demo-sbml.toml")).tissue().circuit().network();
-        assertEquals(original.speciesNames(), back.speciesNames());
-        assertEquals(original.reactionCount(), back.reactionCount());
-        double[] a = new double[original.reactionCount()];
-        double[] b = new double[back.reactionCount()];
-        Random random = new Random(5);
-        for (int trial = 0; trial < 200; trial++) {
-            double[] x = {3 * random.nextDouble(), 3 * random.nextDouble()};
-            original.propensities(x, original.defaultParameters(), a);
-            back.propensities(x, back.defaultParameters(), b);
-            for (int j = 0; j < a.length; j++) {
-                assertEquals(a[j], b[j], 1e-12 * Math.max(1, Math.abs(a[j])), "reaction " + j + " at " + x[0] + ", " + x[1]);
-                for (int s = 0; s < 2; s++) {
-                    assertEquals(original.stoichiometry(j, s), back.stoichiometry(j, s));
-                }
-            }
-        }
+        assertSameCircuit(original, back, 5, "demo");
     }
 
     /**
@@ -158,20 +143,33 @@ class SbmlCircuitsTest {
             Files.writeString(tmp.resolve("hill.toml"), Files.readString(FOLDER.resolve("toggle-sbml.toml"))
                     .replace("parameter = \"alpha\"", "parameter = \"U_max_rate\""));
             ReactionNetwork back = ScenarioReader.read(tmp.resolve("hill.toml")).tissue().circuit().network();
-            assertEquals(original.speciesNames(), back.speciesNames());
-            assertEquals(original.reactionCount(), back.reactionCount());
-            double[] a = new double[original.reactionCount()];
-            double[] b = new double[back.reactionCount()];
-            Random random = new Random(9);
-            for (int trial = 0; trial < 200; trial++) {
-                double[] x = {3 * random.nextDouble(), 3 * random.nextDouble(), 3 * random.nextDouble()};
-                original.propensities(x, original.defaultParameters(), a);
-                back.propensities(x, back.defaultParameters(), b);
-                for (int j = 0; j < a.length; j++) {
-                    assertEquals(a[j], b[j], 1e-12 * Math.max(1, Math.abs(a[j])), combination + " reaction " + j);
-                    for (int s = 0; s < 3; s++) {
-                        assertEquals(original.stoichiometry(j, s), back.stoichiometry(j, s));
-                    }
+            assertSameCircuit(original, back, 9, combination.toString());
+        }
+    }
+
+    /**
+     * Same species, stoichiometry and rates (to 1e-12 relative) at 200 random states in [0, 3) per
+     * species, drawn from {@code seed}.
+     */
+    private static void assertSameCircuit(ReactionNetwork original, ReactionNetwork back, long seed, String label) {
+        assertEquals(original.speciesNames(), back.speciesNames());
+        assertEquals(original.reactionCount(), back.reactionCount());
+        int species = original.speciesNames().size();
+        double[] a = new double[original.reactionCount()];
+        double[] b = new double[back.reactionCount()];
+        Random random = new Random(seed);
+        for (int trial = 0; trial < 200; trial++) {
+            double[] x = new double[species];
+            for (int s = 0; s < species; s++) {
+                x[s] = 3 * random.nextDouble();
+            }
+            original.propensities(x, original.defaultParameters(), a);
+            back.propensities(x, back.defaultParameters(), b);
+            for (int j = 0; j < a.length; j++) {
+                assertEquals(a[j], b[j], 1e-12 * Math.max(1, Math.abs(a[j])), label + " reaction " + j + " at "
+                        + java.util.Arrays.toString(x));
+                for (int s = 0; s < species; s++) {
+                    assertEquals(original.stoichiometry(j, s), back.stoichiometry(j, s));
                 }
             }
         }
