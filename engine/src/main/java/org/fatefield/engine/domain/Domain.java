@@ -5,12 +5,13 @@ import org.apache.commons.rng.UniformRandomProvider;
 
 /**
  * Where cells live: a {@link Rectangle} with walls, the {@link Disc} inscribed in it, or a
- * {@link Strip} periodic along y. The morphogen fields always fill the width x height
- * rectangle; the domain decides where founders are placed, how a position is kept inside the
- * walls (or wrapped across the periodic seam) and how distances cross that seam. Every stage
- * that places or moves cells asks the domain, so a new shape is one new record here.
+ * {@link Strip} periodic along y; in three dimensions a {@link Box} with walls on all six faces
+ * or a {@link Slab} periodic along y. The morphogen fields always fill the width x height
+ * rectangle (x depth box); the domain decides where founders are placed, how a position is kept
+ * inside the walls (or wrapped across the periodic seam) and how distances cross that seam.
+ * Every stage that places or moves cells asks the domain, so a new shape is one new record here.
  */
-public sealed interface Domain permits Domain.Rectangle, Domain.Disc, Domain.Strip {
+public sealed interface Domain permits Domain.Rectangle, Domain.Disc, Domain.Strip, Domain3d.Box, Domain3d.Slab {
 
     /** Width along x, the gradient axis (µm). */
     double width();
@@ -18,8 +19,18 @@ public sealed interface Domain permits Domain.Rectangle, Domain.Disc, Domain.Str
     /** Height along y (µm). */
     double height();
 
-    /** The shape's scenario word: "rectangle", "disc" or "strip". */
+    /** The shape's scenario word: "rectangle", "disc", "strip", "box" or "slab". */
     String shape();
+
+    /** Depth along z (µm); 0 for a flat (two-dimensional) tissue. */
+    default double depth() {
+        return 0.0;
+    }
+
+    /** True for a three-dimensional domain (a depth greater than 0). */
+    default boolean threeD() {
+        return depth() > 0;
+    }
 
     /** True if cells and fields wrap around along y. */
     default boolean periodicY() {
@@ -28,9 +39,19 @@ public sealed interface Domain permits Domain.Rectangle, Domain.Disc, Domain.Str
 
     /**
      * Draws a uniformly random position for a cell of radius {@code r} inside the domain into
-     * {@code out} ({@code out[0]} = x, {@code out[1]} = y).
+     * {@code out} ({@code out[0]} = x, {@code out[1]} = y and, in 3-D, {@code out[2]} = z).
      */
     void samplePoint(UniformRandomProvider rng, double r, double[] out);
+
+    /**
+     * Puts into {@code out} (three values) the position nearest to (x, y, z) at which a cell of
+     * radius {@code r} lies inside the walls, or brought across the periodic seam; a flat
+     * domain ignores z and puts 0.
+     */
+    default void confine(double x, double y, double z, double r, double[] out) {
+        confine(x, y, r, out);
+        out[2] = 0.0;
+    }
 
     /**
      * Puts into {@code out} the position nearest to (x, y) at which a cell of radius {@code r}
@@ -52,21 +73,44 @@ public sealed interface Domain permits Domain.Rectangle, Domain.Disc, Domain.Str
     default void checkGrid(double gridSpacing) {
     }
 
-    /** The same shape with another size. */
+    /** The same shape with another width and height (a 3-D shape keeps its depth). */
     Domain resized(double newWidth, double newHeight);
 
     /**
-     * The domain of scenario word {@code shape} ("rectangle", "disc" or "strip") with this size.
+     * The flat domain of scenario word {@code shape} ("rectangle", "disc" or "strip") with this size.
      *
      * @throws IllegalArgumentException naming the allowed words for any other
      */
     static Domain of(String shape, double width, double height) {
-        return switch (shape.toLowerCase(Locale.ROOT)) {
+        return of(shape, width, height, 0.0);
+    }
+
+    /**
+     * The domain of scenario word {@code shape} with this size: "rectangle", "disc" or "strip"
+     * with a depth of 0, "box" or "slab" with a depth greater than 0.
+     *
+     * @throws IllegalArgumentException naming the allowed words for any other, or saying which
+     *                                  depth the shape needs
+     */
+    static Domain of(String shape, double width, double height, double depth) {
+        String word = shape.toLowerCase(Locale.ROOT);
+        boolean solid = word.equals("box") || word.equals("slab");
+        if (solid && !(depth > 0)) {
+            throw new IllegalArgumentException("a " + word + " is three-dimensional: give it a depth greater than 0"
+                    + " (tissue.depth, µm), or use a flat shape (rectangle, disc or strip)");
+        }
+        if (!solid && depth != 0) {
+            throw new IllegalArgumentException("a " + word + " is flat but has a depth of " + depth + " µm; for a"
+                    + " three-dimensional tissue use shape \"box\" or \"slab\", or remove tissue.depth");
+        }
+        return switch (word) {
             case "rectangle" -> new Rectangle(width, height);
             case "disc" -> new Disc(width, height);
             case "strip" -> new Strip(width, height);
-            default -> throw new IllegalArgumentException("domain shape must be \"rectangle\", \"disc\" or \"strip\","
-                    + " got \"" + shape + "\"");
+            case "box" -> new Domain3d.Box(width, height, depth);
+            case "slab" -> new Domain3d.Slab(width, height, depth);
+            default -> throw new IllegalArgumentException("domain shape must be \"rectangle\", \"disc\", \"strip\","
+                    + " \"box\" or \"slab\", got \"" + shape + "\"");
         };
     }
 
@@ -77,7 +121,7 @@ public sealed interface Domain permits Domain.Rectangle, Domain.Disc, Domain.Str
     }
 
     /** Checks a size: finite and greater than 0 on both sides. */
-    private static void checkSize(double width, double height) {
+    static void checkSize(double width, double height) {
         if (!(width > 0) || !(height > 0) || Double.isInfinite(width) || Double.isInfinite(height)) {
             throw new IllegalArgumentException("domain must be finite with positive width and height, got "
                     + width + " x " + height);

@@ -91,7 +91,7 @@ final class AdiSolver {
      * algorithm), {@code firstExtra} added to the first diagonal entry (a fixed-value wall);
      * {@code d} sits in {@code work[2n..3n)}, the result goes to {@code out[offset + m * stride]}.
      */
-    private static void solve(double[] work, int n, double r, double q, double[] out, int offset, int stride,
+    static void solve(double[] work, int n, double r, double q, double[] out, int offset, int stride,
             double firstExtra) {
         if (n == 1) {
             out[offset] = work[2] / (1 + q + firstExtra);
@@ -122,7 +122,7 @@ final class AdiSolver {
      * {@code T y = d} and {@code T z = u}. {@code d} sits in {@code work[2n..3n)}, the result goes
      * to {@code out[offset + m * stride]}.
      */
-    private static void solveCyclic(double[] work, int n, double r, double q, double[] out, int offset, int stride) {
+    static void solveCyclic(double[] work, int n, double r, double q, double[] out, int offset, int stride) {
         double b = 1 + q + 2 * r;
         double gamma = -b;
         double corner = -r;

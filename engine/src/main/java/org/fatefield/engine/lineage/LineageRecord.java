@@ -10,6 +10,7 @@ package org.fatefield.engine.lineage;
  * @param divisionTime   time of division (h), NaN if alive at the end
  * @param birthX         position at birth (µm)
  * @param birthY         position at birth (µm)
+ * @param birthZ         position at birth (µm), 0 in a flat tissue
  * @param fateAtDivision fate index when it divided, -1 if it did not
  * @param fateAtEnd      fate index at the end of the run, -1 if it divided
  * @param commitmentTime time its lineage last entered the cell's final fate (to the recording
@@ -21,6 +22,6 @@ package org.fatefield.engine.lineage;
  *                       ({@code fates.first_passage}), NaN if it never did or none is timed
  */
 public record LineageRecord(long id, long parentId, int generation, double birthTime, double divisionTime,
-        double birthX, double birthY, int fateAtDivision, int fateAtEnd, double commitmentTime, double deathTime,
+        double birthX, double birthY, double birthZ, int fateAtDivision, int fateAtEnd, double commitmentTime, double deathTime,
         double birthVolume, double finalVolume, double firstEntryTime) {
 }

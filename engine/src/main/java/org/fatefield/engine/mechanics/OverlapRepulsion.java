@@ -7,8 +7,9 @@ import org.fatefield.engine.domain.Domain;
 import org.fatefield.engine.parallel.BlockParallel;
 
 /**
- * Overdamped relaxation of overlapping discs inside a {@link Domain} (its walls keep every disc
- * inside; across a periodic seam, distances go by the nearest image).
+ * Overdamped relaxation of overlapping discs (spheres in a three-dimensional {@link Domain})
+ * inside a domain (its walls keep every cell inside; across a periodic seam, distances go by the
+ * nearest image).
  *
  * <p>Each overlapping pair pushes apart along the line of centres with speed
  * {@code rate * overlap} shared equally; with adhesion, neighbours a little beyond contact pull
@@ -18,7 +19,9 @@ import org.fatefield.engine.parallel.BlockParallel;
  * largest diameter, so a step costs time linear in the number of cells. Each pair is computed
  * once, from its first cell in that order, and added to both cells; rows of buckets are summed
  * in the fixed passes of {@link RowPasses}, so the sums, and the result, do not depend on the
- * number of threads.
+ * number of threads. In 3-D the buckets are cubes, ordered by y, then z, then x, so that a
+ * bucket row (one y) still writes only itself and the next row: the half stencil is the rest of
+ * its x row, the three buckets of the next z layer in its y row, and the nine of the next y row.
  */
 public final class OverlapRepulsion {
 
@@ -36,6 +39,10 @@ public final class OverlapRepulsion {
      */
     private double[] sx = new double[0];
     private double[] sy = new double[0];
+    /** z positions and forces, allocated only in a 3-D domain. */
+    private double[] sz = new double[0];
+    private float[] fz = new float[0];
+    private final boolean threeD;
     private float[] sr = new float[0];
     /** Net force on each slot, summed pair by pair. */
     private float[] fx = new float[0];
@@ -70,6 +77,7 @@ public final class OverlapRepulsion {
         this.newbornRadius = newbornRadius;
         this.adhesion = adhesion;
         this.adhesionRange = adhesionRange;
+        this.threeD = domain.threeD();
     }
 
     /** Repulsion only, no adhesion. */
@@ -104,8 +112,8 @@ public final class OverlapRepulsion {
         for (double value : largestVolumeOfWorker) {
             largestVolume = Math.max(largestVolume, value);
         }
-        // Radius grows as the square root of volume (Cell.radius), so this is the largest radius.
-        double largest = newbornRadius * Math.sqrt(largestVolume);
+        // Radius grows as the square (cube) root of volume (Cell.radius, sphereRadius): the largest radius.
+        double largest = newbornRadius * (threeD ? Math.cbrt(largestVolume) : Math.sqrt(largestVolume));
         // Buckets at least one interaction range wide, so every neighbour is in the 3 x 3 block around a cell.
         double side = 2.0 * largest * (1 + (adhesion > 0 ? adhesionRange : 0));
         int gx = Math.max(1, (int) Math.ceil(width / side));
@@ -113,42 +121,66 @@ public final class OverlapRepulsion {
         boolean periodic = domain.periodicY();
         int gy = periodic ? Math.max(1, (int) Math.floor(height / side)) : Math.max(1, (int) Math.ceil(height / side));
         double sideY = periodic ? height / gy : side;
+        int gz = threeD ? Math.max(1, (int) Math.ceil(domain.depth() / side)) : 1;
         pool.forEach(n, (from, to, worker) -> {
             for (int i = from; i < to; i++) {
                 Cell c = population.get(i);
-                slotOfCell[i] = bucketOf(c.y(), sideY, gy) * gx + bucketOf(c.x(), side, gx);
+                int layer = threeD ? bucketOf(c.z(), side, gz) : 0;
+                slotOfCell[i] = (bucketOf(c.y(), sideY, gy) * gz + layer) * gx + bucketOf(c.x(), side, gx);
                 // sx is free until the snapshot: it holds the ids (exact below 2^53) for the sort.
                 sx[i] = c.id();
             }
         });
-        assignSlots(n, gx * gy, pool);
+        assignSlots(n, gx * gy * gz, pool);
         pool.forEach(n, (from, to, worker) -> {
             for (int i = from; i < to; i++) {
                 Cell c = population.get(i);
                 int slot = slotOfCell[i];
                 sx[slot] = c.x();
                 sy[slot] = c.y();
-                sr[slot] = (float) c.radius(newbornRadius);
+                if (threeD) {
+                    sz[slot] = c.z();
+                    sr[slot] = (float) c.sphereRadius(newbornRadius);
+                } else {
+                    sr[slot] = (float) c.radius(newbornRadius);
+                }
             }
         });
         pool.forEach(n, (from, to, worker) -> {
             Arrays.fill(fx, from, to, 0.0f);
             Arrays.fill(fy, from, to, 0.0f);
+            if (threeD) {
+                Arrays.fill(fz, from, to, 0.0f);
+            }
         });
         for (int[] rows : RowPasses.of(gy, periodic)) {
             pool.forEach(rows.length, (from, to, worker) -> {
                 for (int r = from; r < to; r++) {
-                    pairsOfRow(rows[r], gx, gy);
+                    if (threeD) {
+                        pairsOfRow3d(rows[r], gx, gy, gz);
+                    } else {
+                        pairsOfRow(rows[r], gx, gy);
+                    }
                 }
             });
         }
-        double step = 0.5 * dt;
+        move(population, n, 0.5 * dt, pool);
+    }
+
+    /** Moves each cell by {@code step} times its net force, kept inside the domain. */
+    private void move(CellPopulation population, int n, double step, BlockParallel pool) {
         pool.forEach(n, (from, to, worker) -> {
             double[] place = placeOfWorker[worker];
             for (int i = from; i < to; i++) {
                 int slot = slotOfCell[i];
-                domain.confine(sx[slot] + step * fx[slot], sy[slot] + step * fy[slot], sr[slot], place);
-                population.get(i).moveTo(place[0], place[1]);
+                if (threeD) {
+                    domain.confine(sx[slot] + step * fx[slot], sy[slot] + step * fy[slot],
+                            sz[slot] + step * fz[slot], sr[slot], place);
+                    population.get(i).moveTo(place[0], place[1], place[2]);
+                } else {
+                    domain.confine(sx[slot] + step * fx[slot], sy[slot] + step * fy[slot], sr[slot], place);
+                    population.get(i).moveTo(place[0], place[1]);
+                }
             }
         });
     }
@@ -223,6 +255,78 @@ public final class OverlapRepulsion {
     }
 
     /**
+     * The 3-D counterpart of {@link #pairsOfRow}: the first cell of each pair lies in bucket row
+     * {@code row} (one y); its partners are the later cells of its own x row of buckets (same
+     * and next x), of the three buckets at x - 1 to x + 1 in the next z layer of the same y row,
+     * and of the nine buckets around it in the next y row (across the seam on a slab).
+     */
+    private void pairsOfRow3d(int row, int gx, int gy, int gz) {
+        boolean periodic = domain.periodicY();
+        boolean nextRow = RowPasses.pairsWithNext(row, gy, periodic);
+        int next = row + 1 == gy ? 0 : row + 1;
+        for (int layer = 0; layer < gz; layer++) {
+            int line = (row * gz + layer) * gx;
+            for (int column = 0; column < gx; column++) {
+                int lo = Math.max(0, column - 1);
+                int hi = Math.min(gx - 1, column + 1) + 1;
+                int sameEnd = bucketStart[line + hi];
+                int aboveFrom = layer + 1 < gz ? bucketStart[line + gx + lo] : 0;
+                int aboveTo = layer + 1 < gz ? bucketStart[line + gx + hi] : 0;
+                for (int i = bucketStart[line + column]; i < bucketStart[line + column + 1]; i++) {
+                    for (int k = i + 1; k < sameEnd; k++) {
+                        pair3d(i, k, periodic);
+                    }
+                    for (int k = aboveFrom; k < aboveTo; k++) {
+                        pair3d(i, k, periodic);
+                    }
+                    for (int z = Math.max(0, layer - 1); nextRow && z <= Math.min(gz - 1, layer + 1); z++) {
+                        int base = (next * gz + z) * gx;
+                        for (int k = bucketStart[base + lo]; k < bucketStart[base + hi]; k++) {
+                            pair3d(i, k, periodic);
+                        }
+                    }
+                }
+            }
+        }
+    }
+
+    /** The force between slots {@code i} and {@code k} in 3-D, as {@link #pair} in 2-D. */
+    private void pair3d(int i, int k, boolean periodic) {
+        double ex = sx[i] - sx[k];
+        double ey = sy[i] - sy[k];
+        double ez = sz[i] - sz[k];
+        if (periodic) {
+            ey = domain.nearestImageDy(ey);
+        }
+        double reach = (double) sr[i] + sr[k];
+        double d2 = ex * ex + ey * ey + ez * ez;
+        double scale;
+        if (d2 >= reach * reach) {
+            double far = reach * (1 + adhesionRange);
+            if (adhesion <= 0 || d2 >= far * far) {
+                return;
+            }
+            double d = Math.sqrt(d2);
+            scale = -adhesion * (d - reach) / d;
+        } else {
+            double d = Math.sqrt(d2);
+            if (d <= 1e-12) {
+                // Coincident centres: separate along x by slot order, deterministically.
+                fx[i] -= (float) (rate * reach);
+                fx[k] += (float) (rate * reach);
+                return;
+            }
+            scale = rate * (reach - d) / d;
+        }
+        fx[i] += (float) (ex * scale);
+        fy[i] += (float) (ey * scale);
+        fz[i] += (float) (ez * scale);
+        fx[k] -= (float) (ex * scale);
+        fy[k] -= (float) (ey * scale);
+        fz[k] -= (float) (ez * scale);
+    }
+
+    /**
      * Counts the cells per bucket and gives each cell a slot, buckets in row-major order and
      * cells in order of id within a bucket (a counting sort, then an insertion sort of each
      * bucket's few cells, buckets in parallel). The force on a cell is then summed in an order
@@ -293,11 +397,15 @@ public final class OverlapRepulsion {
             fx = new float[size];
             fy = new float[size];
             slotOfCell = new int[size];
+            if (threeD) {
+                sz = new double[size];
+                fz = new float[size];
+            }
         }
         if (largestVolumeOfWorker.length != workers) {
             largestVolumeOfWorker = new double[workers];
             // Padded past a cache line so that two workers' scratch never shares one.
-            placeOfWorker = new double[workers][2 + 16];
+            placeOfWorker = new double[workers][3 + 16];
         }
     }
 }

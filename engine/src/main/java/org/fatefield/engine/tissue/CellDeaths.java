@@ -35,7 +35,7 @@ final class CellDeaths {
         dead.sort(Comparator.comparingLong(Cell::id));
         for (Cell cell : dead) {
             lineage.accept(new LineageRecord(cell.id(), cell.parentId(), cell.generation(), cell.birthTime(),
-                    Double.NaN, cell.birthX(), cell.birthY(), -1, spec.fates().classify(cell.liveState()),
+                    Double.NaN, cell.birthX(), cell.birthY(), cell.birthZ(), -1, spec.fates().classify(cell.liveState()),
                     cell.fateSince(), now, cell.birthVolume(), cell.volume(), cell.firstEntry()));
         }
     }

@@ -27,8 +27,9 @@ final class CellDivision {
     private final double[] firstDaughter;
     private final double[] secondDaughter;
     private final CellRandom random;
+    private final boolean threeD;
     private long[] order = new long[0];
-    private final double[] place = new double[2];
+    private final double[] place = new double[3];
 
     CellDivision(TissueSpec spec, RandomStreams streams, CellRandom random) {
         this.spec = spec;
@@ -37,6 +38,7 @@ final class CellDivision {
         int species = spec.circuit().network().speciesCount();
         this.firstDaughter = new double[species];
         this.secondDaughter = new double[species];
+        this.threeD = spec.domain().threeD();
     }
 
     /**
@@ -52,7 +54,7 @@ final class CellDivision {
             int i = (int) order[k];
             Cell mother = population.get(i);
             lineage.accept(new LineageRecord(mother.id(), mother.parentId(), mother.generation(), mother.birthTime(),
-                    now, mother.birthX(), mother.birthY(), spec.fates().classify(mother.liveState()), -1, Double.NaN,
+                    now, mother.birthX(), mother.birthY(), mother.birthZ(), spec.fates().classify(mother.liveState()), -1, Double.NaN,
                     Double.NaN, mother.birthVolume(), mother.volume(), mother.firstEntry()));
             UniformRandomProvider rng = random.of(mother);
             double fraction = size.firstFraction(rng);
@@ -63,26 +65,31 @@ final class CellDivision {
                 case Y -> 0.5 * Math.PI;
                 case RANDOM -> 2 * Math.PI * rng.nextDouble();
             };
-            double offset = 0.5 * growth.cellRadius() * Math.sqrt(mother.volume() / 2.0);
-            double ox = offset * Math.cos(angle);
-            double oy = offset * Math.sin(angle);
+            // In 3-D a random axis is uniform on the sphere (Archimedes: z uniform on [-1, 1]).
+            double cosPolar = threeD && growth.axis() == GrowthSpec.DivisionAxis.RANDOM ? 2 * rng.nextDouble() - 1 : 0.0;
+            double sinPolar = Math.sqrt(1 - cosPolar * cosPolar);
+            double half = mother.volume() / 2.0;
+            double offset = 0.5 * growth.cellRadius() * (threeD ? Math.cbrt(half) : Math.sqrt(half));
+            double ox = offset * sinPolar * Math.cos(angle);
+            double oy = offset * sinPolar * Math.sin(angle);
+            double oz = offset * cosPolar;
             double v = mother.volume();
             population.replace(i, daughter(population, ancestry, mother, firstDaughter, fraction * v, now,
-                    mother.x() + ox, mother.y() + oy));
+                    mother.x() + ox, mother.y() + oy, mother.z() + oz));
             population.add(daughter(population, ancestry, mother, secondDaughter, (1 - fraction) * v, now,
-                    mother.x() - ox, mother.y() - oy));
+                    mother.x() - ox, mother.y() - oy, mother.z() - oz));
         }
     }
 
     private Cell daughter(CellPopulation population, Ancestry ancestry, Cell mother, double[] state, double volume,
-            double now, double x, double y) {
+            double now, double x, double y, double z) {
         long id = population.newId();
         ancestry.add(id, mother.id());
         EmbeddedStream.Detached birth = new EmbeddedStream.Detached(streams.seedWords(id));
         double cycle = spec.growth().cycle().sample(birth);
-        spec.domain().confine(x, y, spec.growth().cellRadius(), place);
+        spec.domain().confine(x, y, z, spec.growth().cellRadius(), place);
         Cell cell = new Cell(id, mother.id(), mother.generation() + 1, now, cycle, state.clone(), birth.streamWords(),
-                place[0], place[1], volume, volume);
+                place[0], place[1], place[2], volume, volume);
         cell.setFate(mother.fate(), mother.fateSince());
         if (spec.fates().inFirstPassageFate(cell.liveState())) {
             // Born in the timed fate: its own first entry is its birth.

@@ -92,7 +92,7 @@ final class CellLoop {
             for (int i = from; i < to; i++) {
                 Cell cell = cells.get(i);
                 for (int f = 0; f < fields.length; f++) {
-                    levels[f] = fields[f].sample(cell.x(), cell.y());
+                    levels[f] = fields[f].sample(cell.x(), cell.y(), cell.z());
                 }
                 if (!extrinsic.isEmpty()) {
                     restoreNoisy(p);

@@ -27,7 +27,7 @@ final class Founders {
         GrowthSpec growth = spec.growth();
         CircuitSetup circuit = spec.circuit();
         double r = growth.cellRadius();
-        double[] point = new double[2];
+        double[] point = new double[3];
         for (int i = 0; i < growth.initialCells(); i++) {
             spec.domain().samplePoint(placement, r, point);
             long id = population.newId();
@@ -35,8 +35,9 @@ final class Founders {
             double cycle = growth.cycle().sample(birth);
             // Founders are spread over their cycle; cells that never divide all start at age 0.
             double age = growth.cycle().divides() ? cycle * birth.nextDouble() : 0.0;
+            double z = spec.domain().threeD() ? point[2] : 0.0;
             Cell founder = new Cell(id, -1, 0, -age, cycle, circuit.initialState(), birth.streamWords(), point[0],
-                    point[1], 1.0, growth.size().control().volume(1.0, age, cycle));
+                    point[1], z, 1.0, growth.size().control().volume(1.0, age, cycle));
             if (!spec.extrinsic().isEmpty()) {
                 founder.setScores(ExtrinsicNoise.founderScores(spec.extrinsic(),
                         cellLoop.serialRandom().of(founder)));

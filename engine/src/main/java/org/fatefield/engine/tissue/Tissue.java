@@ -99,7 +99,7 @@ public final class Tissue extends SimState {
             amplitudeFactors[f] = AmplitudeVariability.factor(specs.get(f).amplitudeCv(),
                     streams.stream(PLACEMENT_STREAM - 1 - f));
             fields[f] = new MorphogenField(specs.get(f).withProductionScaled(amplitudeFactors[f]), spec.width(),
-                    spec.height(), spec.domain().periodicY());
+                    spec.height(), spec.domain().depth(), spec.domain().periodicY());
         }
         field = fields[0];
         series = new TimeSeries(spec.fates().fateNames());
@@ -288,7 +288,7 @@ public final class Tissue extends SimState {
         lineageClosed = true;
         for (Cell cell : cellsById()) {
             lineage.accept(new LineageRecord(cell.id(), cell.parentId(), cell.generation(), cell.birthTime(),
-                    Double.NaN, cell.birthX(), cell.birthY(), -1, cell.fate(), cell.fateSince(), Double.NaN,
+                    Double.NaN, cell.birthX(), cell.birthY(), cell.birthZ(), -1, cell.fate(), cell.fateSince(), Double.NaN,
                     cell.birthVolume(), cell.volume(), cell.firstEntry()));
         }
     }
@@ -365,7 +365,7 @@ public final class Tissue extends SimState {
 
     /** The level of the control field (the one the first coupling reads) at {@code cell} now. */
     public double signalAt(Cell cell) {
-        return controlField().sample(cell.x(), cell.y());
+        return controlField().sample(cell.x(), cell.y(), cell.z());
     }
 
     /** The factor this tissue drew for field {@code f}'s production (1 without amplitude variability). */

@@ -17,9 +17,9 @@ class LineageFilesTest {
     void fateNamesWithCommasAndQuotesSurvive(@TempDir Path dir) throws Exception {
         List<String> fates = List.of("crest, anterior", "say \"hi\"", "plain");
         try (LineageFiles files = LineageFiles.start(dir, fates)) {
-            files.accept(new LineageRecord(0, -1, 0, -2.5, 3.0, 10, 20, 0, -1, Double.NaN, Double.NaN, 1, 2, Double.NaN));
-            files.accept(new LineageRecord(1, 0, 1, 3.0, Double.NaN, 11, 21, -1, 1, 4.5, Double.NaN, 1, 1.5, 4.0));
-            files.accept(new LineageRecord(2, 0, 1, 3.0, Double.NaN, 9, 19, -1, 2, 1.5, 6.0, 1, 1.2, Double.NaN));
+            files.accept(new LineageRecord(0, -1, 0, -2.5, 3.0, 10, 20, 0, 0, -1, Double.NaN, Double.NaN, 1, 2, Double.NaN));
+            files.accept(new LineageRecord(1, 0, 1, 3.0, Double.NaN, 11, 21, 0, -1, 1, 4.5, Double.NaN, 1, 1.5, 4.0));
+            files.accept(new LineageRecord(2, 0, 1, 3.0, Double.NaN, 9, 19, 0, -1, 2, 1.5, 6.0, 1, 1.2, Double.NaN));
         }
         List<CSVRecord> rows = RunTables.records(dir.resolve(RunLayout.LINEAGE));
         assertEquals(3, rows.size());
