@@ -19,7 +19,7 @@ import org.fatefield.engine.field.MorphogenSpec;
  * @param finalCells   expected live cells at the end
  * @param cellSteps    expected cell-steps over the run
  * @param fieldUpdates expected grid-square updates of all fields over the run
- * @param packing      founders' total area over the domain's area (above 1 they overlap)
+ * @param packing      founders' total area over the domain's area, in 3-D volume over volume (above 1 they overlap)
  * @param reactionEvents with circuit.noise = "exact": reactions Gillespie's method will fire, at
  *                     the initial state's total rate (molecules per hour per cell) over the
  *                     cell-hours of the run; 0 for the other methods
@@ -56,17 +56,23 @@ public record WorkEstimate(double steps, double finalCells, double cellSteps, do
         double cellSteps = Math.abs(exponent) < 1e-9 ? founders * steps
                 : founders * Math.expm1(Math.min(exponent, 700)) / rate / timing.step();
         double fieldUpdates = 0;
+        boolean threeD = spec.domain().threeD();
         for (MorphogenSpec field : spec.fields()) {
             if (field.profile() != null) {
                 continue;
             }
-            double squares = Math.ceil(spec.width() / field.gridSpacing()) * Math.ceil(spec.height() / field.gridSpacing());
+            double squares = Math.ceil(spec.width() / field.gridSpacing()) * Math.ceil(spec.height() / field.gridSpacing())
+                    * (threeD ? Math.ceil(spec.domain().depth() / field.gridSpacing()) : 1);
             double perStep = field.solver() == MorphogenSpec.Solver.ADI ? 1
-                    : MorphogenField.subSteps(field, timing.step());
+                    : MorphogenField.subSteps(field, timing.step(), threeD ? 3 : 2);
             fieldUpdates += squares * perStep * steps;
         }
-        double founderArea = founders * Math.PI * growth.cellRadius() * growth.cellRadius();
-        return new WorkEstimate(steps, finalCells, cellSteps, fieldUpdates, founderArea / (spec.width() * spec.height()),
+        double r = growth.cellRadius();
+        // In 3-D the founders' share of the box's volume, as spheres.
+        double packing = threeD ? founders * 4.0 / 3.0 * Math.PI * r * r * r
+                / (spec.width() * spec.height() * spec.domain().depth())
+                : founders * Math.PI * r * r / (spec.width() * spec.height());
+        return new WorkEstimate(steps, finalCells, cellSteps, fieldUpdates, packing,
                 events(spec, cellSteps * timing.step()));
     }
 
@@ -98,7 +104,8 @@ public record WorkEstimate(double steps, double finalCells, double cellSteps, do
                     + " \"langevin\"", reactionEvents, MAX_EVENTS));
         }
         if (!(packing <= MAX_PACKING)) {
-            out.add(String.format(Locale.ROOT, "the founders cover %.3g times the tissue's area (at most %.0f);"
+            out.add(String.format(Locale.ROOT, "the founders cover %.3g times the tissue's area (in 3-D its volume;"
+                    + " at most %.0f);"
                     + " use fewer tissue.founders, a smaller tissue.cell_radius or a larger tissue", packing,
                     MAX_PACKING));
         }

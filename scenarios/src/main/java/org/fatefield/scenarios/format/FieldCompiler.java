@@ -11,6 +11,7 @@ import java.util.Locale;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.fatefield.engine.fate.FateClassifier;
+import org.fatefield.engine.field.MorphogenField;
 import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.field.PiecewiseLinear;
 import org.fatefield.engine.field.SourceRegion;
@@ -31,10 +32,13 @@ final class FieldCompiler {
     private final Path folder;
     private final double width;
     private final double height;
+    /** Depth of a 3-D tissue (µm), 0 when flat. */
+    private final double depth;
     private final FateClassifier fates;
 
-    FieldCompiler(TomlTable toml, TomlValues values, Path folder, double width, double height,
+    FieldCompiler(TomlTable toml, TomlValues values, Path folder, double width, double height, double depth,
             FateClassifier fates) {
+        this.depth = depth;
         this.toml = toml;
         this.values = values;
         this.folder = folder;
@@ -86,6 +90,14 @@ final class FieldCompiler {
                     + " along a side of the %.6g x %.6g µm tissue (tissue.width x tissue.height); use a grid_spacing"
                     + " of at least %.6g µm or a smaller tissue", MAX_GRID, width, height,
                     Math.max(width, height) / MAX_GRID));
+            return null;
+        }
+        double cubes = Math.ceil(width / spacing) * Math.ceil(height / spacing) * Math.ceil(depth / spacing);
+        if (depth > 0 && (depth / spacing > MAX_GRID || cubes > MorphogenField.MAX_SQUARES)) {
+            values.fail(table, section, "grid_spacing", String.format(Locale.ROOT, "gives %.3g grid cubes in the"
+                    + " %.6g x %.6g x %.6g µm tissue (tissue.width x tissue.height x tissue.depth), at most %d;"
+                    + " use a grid_spacing of at least %.6g µm or a smaller tissue", cubes, width, height, depth,
+                    MorphogenField.MAX_SQUARES, Math.cbrt(width * height * depth / MorphogenField.MAX_SQUARES)));
             return null;
         }
         MorphogenSpec.WallKind kind = switch (values.text(table, section, "left_wall")) {

@@ -42,6 +42,8 @@ final class ScenarioCompiler {
 
     /** Most squares of one cell diameter a tissue may hold: the mechanics' neighbour grid. */
     private static final double MAX_DIAMETERS_SQUARED = 1.6e7;
+    /** The 3-D counterpart: buckets of the mechanics' neighbour grid in a box or slab. */
+    private static final double MAX_DIAMETERS_CUBED = 1.6e7;
 
 
     private final String file;
@@ -89,8 +91,29 @@ final class ScenarioCompiler {
         }
         double width = values.number(tissue, "tissue", "width");
         double height = values.number(tissue, "tissue", "height");
+        double depth = values.number(tissue, "tissue", "depth");
+        String shape = values.text(tissue, "tissue", "shape");
+        boolean solid = shape.equals("box") || shape.equals("slab");
+        if (solid && !(depth > 0)) {
+            values.fail(tissue, "tissue", "depth", "a " + shape + " is three-dimensional: give tissue.depth, the size"
+                    + " along z in µm (greater than 0), or use a flat shape (rectangle, disc or strip)");
+        } else if (!solid && depth > 0) {
+            values.fail(tissue, "tissue", "depth", "is set, but a " + shape + " is flat; for a three-dimensional"
+                    + " tissue use shape = \"box\" or \"slab\", or remove tissue.depth");
+        }
         double radius = values.number(tissue, "tissue", "cell_radius");
         double repulsion = values.number(tissue, "tissue", "repulsion");
+        if (solid && depth > 0 && 2 * radius > depth) {
+            values.fail(tissue, "tissue", "cell_radius", "a cell this size does not fit in a tissue " + depth
+                    + " µm deep (tissue.depth): use a smaller radius or a deeper tissue");
+        } else if (solid && depth > 0 && (width / (2 * radius)) * (height / (2 * radius)) * (depth / (2 * radius))
+                > MAX_DIAMETERS_CUBED) {
+            values.fail(tissue, "tissue", "cell_radius", String.format(Locale.ROOT, "is too small for a %.6g x %.6g x"
+                    + " %.6g µm tissue: it would hold %.3g cell diameters cubed, at most %.3g (the neighbour grid"
+                    + " of the mechanics); use cell_radius of at least %.3g µm or a smaller tissue", width, height,
+                    depth, width * height * depth / Math.pow(2 * radius, 3), MAX_DIAMETERS_CUBED,
+                    0.5 * Math.cbrt(width * height * depth / MAX_DIAMETERS_CUBED)));
+        }
         if (2 * radius > Math.min(width, height)) {
             values.fail(tissue, "tissue", "cell_radius", "a cell this size does not fit in a " + width + " x " + height
                     + " µm domain (tissue.width x tissue.height): use a smaller radius or a larger tissue");
@@ -110,7 +133,7 @@ final class ScenarioCompiler {
         CircuitSetup circuit = new CircuitCompiler(circuitDocument.toml(),
                 new TomlValues(circuitDocument.label(), circuitDocument.locator(), problems)).compile();
         FateClassifier fates = fates(circuit);
-        FieldCompiler fieldCompiler = new FieldCompiler(toml, values, folder, width, height, fates);
+        FieldCompiler fieldCompiler = new FieldCompiler(toml, values, folder, width, height, solid ? depth : 0.0, fates);
         MorphogenSpec morphogen = fieldCompiler.primary();
         List<MorphogenSpec> others = fieldCompiler.others();
         List<String> fieldNames = new ArrayList<>();
@@ -123,7 +146,7 @@ final class ScenarioCompiler {
         }
         try {
             TissueSpec spec = new TissueSpec(circuit, mapping, morphogen,
-                    Domain.of(values.text(tissue, "tissue", "shape"), width, height), growth, fates,
+                    Domain.of(shape, width, height, solid ? depth : 0.0), growth, fates,
                     new Timing(duration, step, recordEvery, Math.max(0, mechanicsStep)), extrinsic(circuit), others);
             for (String rate : RateCheck.problems(spec)) {
                 problems.add(new Problem(circuitDocument.label(), 0, 0, "circuit", null, rate));

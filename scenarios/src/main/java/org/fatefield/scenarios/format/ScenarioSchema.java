@@ -79,17 +79,23 @@ public final class ScenarioSchema {
             new Section("tissue", false, true, List.of(
                     Key.positive("width", "µm", "600", "domain size along x, the gradient axis"),
                     Key.positive("height", "µm", "300", "domain size along y"),
+                    Key.nonNegative("depth", "µm", "0", "domain size along z, for the three-dimensional shapes box and"
+                            + " slab only (0 for the flat ones)"),
                     Key.integer("founders", "200", 1, 2_000_000, "cells at time 0, placed uniformly at random"),
-                    Key.positive("cell_radius", "µm", "5", "radius of a newborn cell; a cell's area doubles over its cycle"),
+                    Key.positive("cell_radius", "µm", "5", "radius of a newborn cell; a cell's area (in 3-D its volume)"
+                            + " doubles over its cycle"),
                     Key.nonNegative("repulsion", "1/h", "20",
                             "overlap relaxation rate: speed (µm/h) per µm of overlap; keep repulsion * step below 0.2"),
                     Key.nonNegative("adhesion", "1/h", "0",
                             "attraction between neighbours up to 20% beyond contact: speed (µm/h) per µm of gap"),
-                    Key.choice("shape", "rectangle", List.of("rectangle", "disc", "strip"),
+                    Key.choice("shape", "rectangle", List.of("rectangle", "disc", "strip", "box", "slab"),
                             "where cells live: the width x height rectangle; the disc inscribed in it (the fields"
                                     + " cover the whole rectangle); or a strip, the rectangle made periodic along y (cells"
                                     + " and fields leaving at the top re-enter at the bottom: a tissue without lateral"
-                                    + " edges; walls at x = 0 and x = width only)")),
+                                    + " edges; walls at x = 0 and x = width only). In three dimensions (with depth):"
+                                    + " box, the width x height x depth box with walls on all six faces; or slab, the"
+                                    + " box made periodic along y (walls at x = 0, x = width, z = 0 and z = depth);"
+                                    + " cells are spheres and the fields fill the box")),
                     "the domain (a rectangle with walls) and its founder cells"),
             new Section("division", false, false, List.of(
                     Key.choice("cycle", "gamma", List.of("fixed", "gamma", "lognormal", "none"),

@@ -42,10 +42,17 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
     /** CRC-32 of every byte the table holds, kept up to date as bytes reach the file. */
     private final CRC32 crc;
     private final List<String> fates;
+    /** True for a 3-D tissue: rows carry birth_z_um. */
+    private final boolean threeD;
 
-    /** Starts a new table in {@code folder} for a run with these fate names. */
+    /** Starts a new table in {@code folder} for a flat tissue with these fate names. */
     public static LineageFiles start(Path folder, List<String> fates) throws IOException {
-        return new LineageFiles(folder, fates, -1, new CRC32());
+        return start(folder, fates, false);
+    }
+
+    /** Starts a new table in {@code folder} for a run with these fate names, flat or 3-D. */
+    public static LineageFiles start(Path folder, List<String> fates, boolean threeD) throws IOException {
+        return new LineageFiles(folder, fates, -1, new CRC32(), threeD);
     }
 
     /**
@@ -57,7 +64,8 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
      * @throws IOException saying the folder is damaged if the table is missing, shorter than the
      *                     checkpoint's or altered, so that a resumed run never silently loses rows
      */
-    public static LineageFiles resume(Path folder, List<String> fates, long length, long crc) throws IOException {
+    public static LineageFiles resume(Path folder, List<String> fates, long length, long crc, boolean threeD)
+            throws IOException {
         Path partial = RunLayout.partial(folder.resolve(RunLayout.LINEAGE));
         Path complete = folder.resolve(RunLayout.LINEAGE);
         if (!Files.exists(partial) && Files.exists(complete)) {
@@ -77,7 +85,7 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
         if (prefix.getValue() != crc) {
             throw new IOException(damaged + "does not hold the rows it held at the checkpoint" + fix);
         }
-        return new LineageFiles(folder, fates, length, prefix);
+        return new LineageFiles(folder, fates, length, prefix, threeD);
     }
 
     /** The CRC-32 of the first {@code length} bytes of {@code file}, ready to go on with what follows. */
@@ -102,7 +110,9 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
      * Opens the table; with {@code resumeAt >= 0} it is cut back to that many bytes, whose
      * checksum {@code crc} already holds, and continued.
      */
-    private LineageFiles(Path folder, List<String> fates, long resumeAt, CRC32 crc) throws IOException {
+    private LineageFiles(Path folder, List<String> fates, long resumeAt, CRC32 crc, boolean threeD)
+            throws IOException {
+        this.threeD = threeD;
         this.folder = folder;
         this.partial = RunLayout.partial(folder.resolve(RunLayout.LINEAGE));
         this.fates = List.copyOf(fates);
@@ -117,7 +127,7 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
         this.printer = RunTables.printer(new BufferedWriter(new OutputStreamWriter(new CheckedOutputStream(raw, crc),
                 StandardCharsets.UTF_8)));
         if (resumeAt < 0) {
-            printer.printRecord(RunTables.LINEAGE_HEADER);
+            printer.printRecord(RunTables.lineageHeader(threeD));
         }
     }
 
@@ -139,7 +149,7 @@ public final class LineageFiles implements LineageSink, AutoCloseable {
     @Override
     public void accept(LineageRecord r) {
         try {
-            printer.printRecord(RunTables.lineageRow(r, fates));
+            printer.printRecord(RunTables.lineageRow(r, fates, threeD));
         } catch (IOException e) {
             throw new UncheckedIOException("cannot write " + partial, e);
         }

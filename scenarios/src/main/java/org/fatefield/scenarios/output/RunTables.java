@@ -97,12 +97,33 @@ public final class RunTables {
         return READ_FORMAT.parse(in);
     }
 
-    /** One row of {@code lineage.csv}; fate indices are named from {@code fates} (empty for none). */
+    /** Columns of {@code lineage.csv}: {@link #LINEAGE_HEADER}, with {@code birth_z_um} after {@code birth_y_um} in 3-D. */
+    public static List<String> lineageHeader(boolean threeD) {
+        if (!threeD) {
+            return LINEAGE_HEADER;
+        }
+        List<String> header = new ArrayList<>(LINEAGE_HEADER);
+        header.add(header.indexOf("birth_y_um") + 1, "birth_z_um");
+        return List.copyOf(header);
+    }
+
+    /** One row of {@code lineage.csv} of a flat tissue; fate indices are named from {@code fates} (empty for none). */
     public static List<String> lineageRow(LineageRecord r, List<String> fates) {
-        return List.of(Long.toString(r.id()), id(r.parentId()), Integer.toString(r.generation()),
-                number(r.birthTime()), number(r.divisionTime()), number(r.birthX()), number(r.birthY()),
-                fateName(r.fateAtDivision(), fates), fateName(r.fateAtEnd(), fates), number(ownCommitment(r)),
-                number(r.commitmentTime()), number(r.deathTime()), number(r.birthVolume()), number(r.finalVolume()), number(r.firstEntryTime()));
+        return lineageRow(r, fates, false);
+    }
+
+    /** One row of {@code lineage.csv}, with {@code birth_z_um} in a 3-D tissue. */
+    public static List<String> lineageRow(LineageRecord r, List<String> fates, boolean threeD) {
+        List<String> row = new ArrayList<>(List.of(Long.toString(r.id()), id(r.parentId()),
+                Integer.toString(r.generation()), number(r.birthTime()), number(r.divisionTime()), number(r.birthX()),
+                number(r.birthY())));
+        if (threeD) {
+            row.add(number(r.birthZ()));
+        }
+        row.addAll(List.of(fateName(r.fateAtDivision(), fates), fateName(r.fateAtEnd(), fates),
+                number(ownCommitment(r)), number(r.commitmentTime()), number(r.deathTime()), number(r.birthVolume()),
+                number(r.finalVolume()), number(r.firstEntryTime())));
+        return row;
     }
 
     /**
@@ -148,7 +169,8 @@ public final class RunTables {
     }
 
     /**
-     * {@code cells.csv}: the live cells at the end: {@code id, parent_id, generation, x_um, y_um},
+     * {@code cells.csv}: the live cells at the end: {@code id, parent_id, generation, x_um, y_um}
+     * (and {@code z_um} in a 3-D tissue),
      * one {@code <species>_molecules} column per species (concentration times system size, rounded),
      * one {@code <species>_concentration} column per species (at full precision),
      * {@code morphogen}, {@code control_<parameter>} (the first coupled parameter's local value)
@@ -156,7 +178,11 @@ public final class RunTables {
      */
     public static void writeCells(Tissue tissue, Writer out) throws IOException {
         TissueSpec spec = tissue.spec();
+        boolean threeD = spec.domain().threeD();
         List<String> header = new ArrayList<>(List.of("id", "parent_id", "generation", "x_um", "y_um"));
+        if (threeD) {
+            header.add("z_um");
+        }
         header.addAll(cellStateHeader(spec));
         List<String> fateNames = spec.fates().fateNames();
         CSVPrinter printer = printer(out);
@@ -168,6 +194,9 @@ public final class RunTables {
             values.add(Integer.toString(cell.generation()));
             values.add(number(cell.x()));
             values.add(number(cell.y()));
+            if (threeD) {
+                values.add(number(cell.z()));
+            }
             addCellState(tissue, cell, fateNames.get(cell.fate()), values);
             printer.printRecord(values);
         }

@@ -60,8 +60,9 @@ public final class ScenarioRunner {
         long startNanos = System.nanoTime();
         Tissue tissue = new Tissue(scenario.tissue(), seed, request.threads());
         List<String> fates = scenario.tissue().fates().fateNames();
-        LineageFiles lineage = saved == null ? LineageFiles.start(out, fates)
-                : LineageFiles.resume(out, fates, saved.lineageBytes(), saved.lineageCrc());
+        boolean threeD = scenario.tissue().domain().threeD();
+        LineageFiles lineage = saved == null ? LineageFiles.start(out, fates, threeD)
+                : LineageFiles.resume(out, fates, saved.lineageBytes(), saved.lineageCrc(), threeD);
         tissue.setLineageSink(lineage);
         tissue.start();
         if (saved != null) {

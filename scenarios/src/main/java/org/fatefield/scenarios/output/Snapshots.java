@@ -69,7 +69,12 @@ public final class Snapshots {
 
     private static void cells(Tissue tissue, Writer out) throws IOException {
         TissueSpec spec = tissue.spec();
-        List<String> header = new ArrayList<>(List.of("time_h", "id", "parent_id", "x_um", "y_um", "volume"));
+        boolean threeD = spec.domain().threeD();
+        List<String> header = new ArrayList<>(List.of("time_h", "id", "parent_id", "x_um", "y_um"));
+        if (threeD) {
+            header.add("z_um");
+        }
+        header.add("volume");
         header.addAll(RunTables.cellStateHeader(spec));
         List<String> fates = spec.fates().fateNames();
         String time = RunTables.number(tissue.time());
@@ -77,7 +82,11 @@ public final class Snapshots {
         printer.printRecord(header);
         for (Cell cell : tissue.cellsById()) {
             List<String> row = new ArrayList<>(List.of(time, Long.toString(cell.id()), RunTables.id(cell.parentId()),
-                    RunTables.number(cell.x()), RunTables.number(cell.y()), RunTables.number(cell.volume())));
+                    RunTables.number(cell.x()), RunTables.number(cell.y())));
+            if (threeD) {
+                row.add(RunTables.number(cell.z()));
+            }
+            row.add(RunTables.number(cell.volume()));
             // A cell born since the last classification takes its fate from its state now.
             RunTables.addCellState(tissue, cell, fates.get(spec.fates().classify(cell.liveState())), row);
             printer.printRecord(row);
@@ -88,14 +97,26 @@ public final class Snapshots {
     private static void fields(Tissue tissue, Writer out) throws IOException {
         String time = RunTables.number(tissue.time());
         CSVPrinter printer = RunTables.printer(out);
-        printer.printRecord("time_h", "field", "x_um", "y_um", "concentration");
+        boolean threeD = tissue.spec().domain().threeD();
+        if (threeD) {
+            printer.printRecord("time_h", "field", "x_um", "y_um", "z_um", "concentration");
+        } else {
+            printer.printRecord("time_h", "field", "x_um", "y_um", "concentration");
+        }
         for (MorphogenField field : tissue.fields()) {
             String name = field.spec().name();
             double h = field.spacing();
-            for (int j = 0; j < field.rows(); j++) {
-                for (int i = 0; i < field.columns(); i++) {
-                    printer.printRecord(time, name, RunTables.number((i + 0.5) * h), RunTables.number((j + 0.5) * h),
-                            RunTables.number(field.value(i, j)));
+            for (int l = 0; l < field.layers(); l++) {
+                for (int j = 0; j < field.rows(); j++) {
+                    for (int i = 0; i < field.columns(); i++) {
+                        List<String> row = new ArrayList<>(List.of(time, name, RunTables.number((i + 0.5) * h),
+                                RunTables.number((j + 0.5) * h)));
+                        if (threeD) {
+                            row.add(RunTables.number((l + 0.5) * h));
+                        }
+                        row.add(RunTables.number(field.value(i, j, l)));
+                        printer.printRecord(row);
+                    }
                 }
             }
         }

@@ -35,13 +35,15 @@ public final class VtkImageData {
     public static void write(MorphogenField field, double time, Writer out) throws IOException {
         int nx = field.columns();
         int ny = field.rows();
+        int nz = field.layers();
         double h = field.spacing();
-        String extent = "0 " + (nx - 1) + " 0 " + (ny - 1) + " 0 0";
+        String extent = "0 " + (nx - 1) + " 0 " + (ny - 1) + " 0 " + (nz - 1);
         String name = escape(field.spec().name());
         out.write("<?xml version=\"1.0\"?>\n");
         out.write("<VTKFile type=\"ImageData\" version=\"1.0\" byte_order=\"LittleEndian\">\n");
         out.write("  <ImageData WholeExtent=\"" + extent + "\" Origin=\"" + number(h / 2) + " " + number(h / 2)
-                + " 0\" Spacing=\"" + number(h) + " " + number(h) + " " + number(h) + "\">\n");
+                + " " + (field.threeD() ? number(h / 2) : "0") + "\" Spacing=\"" + number(h) + " " + number(h) + " "
+                + number(h) + "\">\n");
         out.write("    <FieldData>\n");
         out.write("      <DataArray type=\"Float64\" Name=\"TimeValue\" NumberOfTuples=\"1\" format=\"ascii\">"
                 + number(time) + "</DataArray>\n");
@@ -49,12 +51,14 @@ public final class VtkImageData {
         out.write("    <Piece Extent=\"" + extent + "\">\n");
         out.write("      <PointData Scalars=\"" + name + "\">\n");
         out.write("        <DataArray type=\"Float64\" Name=\"" + name + "\" format=\"ascii\">\n");
-        for (int j = 0; j < ny; j++) {
-            StringBuilder line = new StringBuilder("         ");
-            for (int i = 0; i < nx; i++) {
-                line.append(' ').append(number(field.value(i, j)));
+        for (int l = 0; l < nz; l++) {
+            for (int j = 0; j < ny; j++) {
+                StringBuilder line = new StringBuilder("         ");
+                for (int i = 0; i < nx; i++) {
+                    line.append(' ').append(number(field.value(i, j, l)));
+                }
+                out.write(line.append('\n').toString());
             }
-            out.write(line.append('\n').toString());
         }
         out.write("        </DataArray>\n");
         out.write("      </PointData>\n");

@@ -16,7 +16,9 @@ final class CellDescription {
         StringBuilder s = new StringBuilder();
         s.append(String.format(Locale.ROOT, "cell %d, generation %d, mother %d, founder %d%n", c.id(), c.generation(),
                 c.parentId(), t.ancestry().founder(c.id())));
-        s.append(String.format(Locale.ROOT, "at (%.1f, %.1f) µm, age %.2f h of %.2f h%n", c.x(), c.y(), c.age(t.time()),
+        String where = t.spec().domain().threeD() ? String.format(Locale.ROOT, "(%.1f, %.1f, %.1f)", c.x(), c.y(), c.z())
+                : String.format(Locale.ROOT, "(%.1f, %.1f)", c.x(), c.y());
+        s.append(String.format(Locale.ROOT, "at %s µm, age %.2f h of %.2f h%n", where, c.age(t.time()),
                 c.cycleTime()));
         for (int i = 0; i < species.size(); i++) {
             s.append(String.format(Locale.ROOT, "%s = %.3f%n", species.get(i), c.concentration(i)));

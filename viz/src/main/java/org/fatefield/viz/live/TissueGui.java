@@ -7,6 +7,7 @@ import org.fatefield.engine.field.MorphogenField;
 import org.fatefield.engine.tissue.Tissue;
 import org.fatefield.viz.palette.FatePalette;
 import org.fatefield.viz.palette.SpeciesPalette;
+import org.fatefield.viz.tissue.DepthSlice;
 import sim.display.GUIState;
 import sim.field.continuous.Continuous2D;
 import sim.field.grid.DoubleGrid2D;
@@ -127,15 +128,18 @@ public final class TissueGui extends GUIState {
         double height = tissue.spec().height();
         double max = 1e-12;
         for (Cell cell : tissue.cells()) {
-            space.setObjectLocation(cell, new Double2D(cell.x(), height - cell.y()));
+            if (DepthSlice.drawnRadius(tissue, cell) > 0) {
+                space.setObjectLocation(cell, new Double2D(cell.x(), height - cell.y()));
+            }
             max = Math.max(max, cell.concentration(species));
         }
         speciesMax = max;
         MorphogenField f = tissue.field();
         fieldMax = Math.max(f.max(), 1e-12);
+        int layer = DepthSlice.layer(tissue, f);
         for (int i = 0; i < f.columns(); i++) {
             for (int j = 0; j < f.rows(); j++) {
-                grid.field[i][f.rows() - 1 - j] = f.value(i, j);
+                grid.field[i][f.rows() - 1 - j] = f.value(i, j, layer);
             }
         }
     }

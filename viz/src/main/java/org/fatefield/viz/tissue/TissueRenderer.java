@@ -51,7 +51,7 @@ public final class TissueRenderer {
             g.setColor(Color.WHITE);
             g.fillRect(0, 0, image.getWidth(), image.getHeight());
             double fieldMax = Math.max(tissue.field().max(), 1e-12);
-            drawField(g, tissue.field(), scale, plotHeight, fieldMax);
+            drawField(g, tissue.field(), DepthSlice.layer(tissue, tissue.field()), scale, plotHeight, fieldMax);
             List<String> fates = tissue.spec().fates().fateNames();
             int[] counts = new int[fates.size()];
             drawCells(g, tissue, scale, plotHeight, counts);
@@ -60,7 +60,7 @@ public final class TissueRenderer {
             g.drawRect(LEFT, TOP, plotWidth, plotHeight);
             drawAxes(g, width, height, scale, plotWidth, plotHeight);
             g.setFont(TITLE);
-            g.drawString(title, LEFT, TOP - 18);
+            g.drawString(title + DepthSlice.caption(tissue), LEFT, TOP - 18);
             drawLegend(g, fates, counts, LEFT + plotWidth + 24, TOP, fieldMax, plotHeight, tissue.field().spec().name());
         } finally {
             g.dispose();
@@ -68,11 +68,12 @@ public final class TissueRenderer {
         return image;
     }
 
-    private static void drawField(Graphics2D g, MorphogenField field, double scale, int plotHeight, double max) {
+    private static void drawField(Graphics2D g, MorphogenField field, int layer, double scale, int plotHeight,
+            double max) {
         double side = field.spacing() * scale;
         for (int j = 0; j < field.rows(); j++) {
             for (int i = 0; i < field.columns(); i++) {
-                g.setColor(FatePalette.morphogen(field.value(i, j) / max));
+                g.setColor(FatePalette.morphogen(field.value(i, j, layer) / max));
                 double x0 = LEFT + i * side;
                 double y0 = TOP + plotHeight - (j + 1) * side;
                 g.fill(new Rectangle2D.Double(x0, y0, side + 0.6, side + 0.6));
@@ -81,12 +82,15 @@ public final class TissueRenderer {
     }
 
     private static void drawCells(Graphics2D g, Tissue tissue, double scale, int plotHeight, int[] counts) {
-        double r0 = tissue.spec().growth().cellRadius();
         int fateCount = counts.length;
         Color outline = new Color(0, 0, 0, 90);
         g.setStroke(new BasicStroke(0.6f));
         for (Cell cell : tissue.cells()) {
-            double r = cell.radius(r0) * scale;
+            counts[cell.fate()]++;
+            double r = DepthSlice.drawnRadius(tissue, cell) * scale;
+            if (r <= 0) {
+                continue;
+            }
             double cx = LEFT + cell.x() * scale;
             double cy = TOP + plotHeight - cell.y() * scale;
             Ellipse2D disc = new Ellipse2D.Double(cx - r, cy - r, 2 * r, 2 * r);
@@ -96,7 +100,6 @@ public final class TissueRenderer {
                 g.setColor(outline);
                 g.draw(disc);
             }
-            counts[cell.fate()]++;
         }
     }
 
