@@ -4,6 +4,8 @@ import java.util.Arrays;
 import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.coupling.CouplingLaw;
 import org.fatefield.engine.division.CycleTimeDistribution;
+import org.fatefield.engine.domain.Domain;
+import org.fatefield.engine.domain.Domain3d;
 import org.fatefield.engine.field.MorphogenField;
 import org.fatefield.engine.field.MorphogenSpec;
 import org.fatefield.engine.tissue.GrowthSpec;
@@ -57,6 +59,32 @@ public final class TissueBenchmark {
     }
 
     /**
+     * Volume per cell (µm³) of a confluent 3-D tissue: the mean cell volume over the cycle (1.5
+     * newborn spheres) over the packing fraction of random close-packed spheres, 0.64 (Scott &amp;
+     * Kilgour 1969, J. Phys. D 2:863).
+     */
+    public static double confluentVolume(TissueSpec template) {
+        double r = template.growth().cellRadius();
+        return 1.5 * 4.0 / 3.0 * Math.PI * r * r * r / 0.64;
+    }
+
+    /**
+     * The template in three dimensions, for the 3-D benchmark: a box (a slab if the template is
+     * periodic along y) as wide and tall as the template and a quarter of its height deep, the
+     * template's founders spread through it. A 3-D template is returned as it is.
+     */
+    public static TissueSpec inThreeDimensions(TissueSpec template) {
+        if (template.domain().threeD()) {
+            return template;
+        }
+        double depth = 0.25 * template.height();
+        Domain solid = template.domain().periodicY() ? new Domain3d.Slab(template.width(), template.height(), depth)
+                : new Domain3d.Box(template.width(), template.height(), depth);
+        return TissueSpec.of(template.circuit(), template.mapping(), template.morphogen(), solid, template.growth(),
+                template.fates(), template.timing());
+    }
+
+    /**
      * Measures a tissue of {@code cells} cells built like {@code template} (same circuit, field
      * and coupling; the domain scaled to the template's founder density; no division), taking
      * the median of {@code repeats} timings of {@code steps} steps each.
@@ -90,7 +118,7 @@ public final class TissueBenchmark {
         double[] mechanicsOnly = new double[repeats];
         double[] bareMechanics = new double[repeats];
         MorphogenField primary = tissue.fields().get(0);
-        BareFieldLoop fieldLoop = new BareFieldLoop(primary.columns(), primary.rows(),
+        BareFieldLoop fieldLoop = new BareFieldLoop(primary.columns(), primary.rows(), primary.layers(),
                 primary.spec().diffusion() * dt / primary.subStepsFor(dt) / (primary.spacing() * primary.spacing()),
                 1 - primary.spec().decay() * dt / primary.subStepsFor(dt), primary.subStepsFor(dt));
         BareMechanicsLoop mechanicsLoop = bareMechanics(tissue, spec);
@@ -159,35 +187,58 @@ public final class TissueBenchmark {
         int n = tissue.cells().size();
         double[] x = new double[n];
         double[] y = new double[n];
+        boolean threeD = spec.domain().threeD();
+        double[] z = threeD ? new double[n] : null;
         double[] r = new double[n];
         for (int i = 0; i < n; i++) {
             Cell c = tissue.cells().get(i);
             x[i] = c.x();
             y[i] = c.y();
-            r[i] = c.radius(spec.growth().cellRadius());
+            if (threeD) {
+                z[i] = c.z();
+            }
+            r[i] = threeD ? c.sphereRadius(spec.growth().cellRadius()) : c.radius(spec.growth().cellRadius());
         }
-        return new BareMechanicsLoop(x, y, r, spec.growth().repulsionRate());
+        return new BareMechanicsLoop(x, y, z, r, spec.growth().repulsionRate());
     }
 
     /**
      * A tissue like {@code template} (circuit, field, coupling, fates) of {@code cells} founders
-     * that never divide, in a domain of the template's aspect ratio with {@code areaPerCell} µm²
-     * per cell.
+     * that never divide, in a domain of the template's shape and proportions with
+     * {@code spacePerCell} µm² (in 3-D µm³) per cell.
      */
-    private static TissueSpec scaled(TissueSpec template, int cells, double areaPerCell, Timing timing) {
-        double scale = Math.sqrt(cells * areaPerCell / (template.width() * template.height()));
-        double width = template.width() * scale;
-        double height = template.height() * scale;
+    private static TissueSpec scaled(TissueSpec template, int cells, double spacePerCell, Timing timing) {
+        Domain domain = template.domain();
+        double width;
+        double height;
+        Domain resized;
+        if (domain.threeD()) {
+            double scale = Math.cbrt(cells * spacePerCell / (domain.width() * domain.height() * domain.depth()));
+            width = domain.width() * scale;
+            height = domain.height() * scale;
+            resized = Domain.of(domain.shape(), width, height, domain.depth() * scale);
+        } else {
+            double scale = Math.sqrt(cells * spacePerCell / (template.width() * template.height()));
+            width = template.width() * scale;
+            height = template.height() * scale;
+            resized = domain.resized(width, height);
+        }
         GrowthSpec growth = GrowthSpec.of(cells, template.growth().cellRadius(), template.growth().repulsionRate(),
                 new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e9, 0), template.growth().partition());
-        return TissueSpec.of(template.circuit(), template.mapping(), scaledField(template, width, height),
-                template.domain().resized(width, height), growth, template.fates(), timing);
+        return TissueSpec.of(template.circuit(), template.mapping(), scaledField(template, resized), resized, growth,
+                template.fates(), timing);
     }
 
-    /** The template's field with its grid coarsened, if needed, to at most 2048 squares a side. */
-    private static MorphogenSpec scaledField(TissueSpec template, double width, double height) {
+    /**
+     * The template's field with its grid coarsened, if needed, to at most 2048 squares a side
+     * (in 3-D, to at most 2^22 cubes in all).
+     */
+    private static MorphogenSpec scaledField(TissueSpec template, Domain domain) {
         MorphogenSpec m = template.morphogen();
-        double spacing = Math.max(m.gridSpacing(), Math.max(width, height) / 2048);
+        double spacing = Math.max(m.gridSpacing(), Math.max(domain.width(), domain.height()) / 2048);
+        if (domain.threeD()) {
+            spacing = Math.max(spacing, Math.cbrt(domain.width() * domain.height() * domain.depth() / (1 << 22)));
+        }
         return m.withGridSpacing(spacing);
     }
 

@@ -9,6 +9,7 @@ import org.fatefield.engine.bench.CircuitBenchmark;
 import org.fatefield.engine.bench.TissueBenchmark;
 import org.fatefield.engine.coupling.CouplingLaw;
 import org.fatefield.engine.coupling.SignalCoupling;
+import org.fatefield.engine.tissue.TissueSpec;
 import org.fatefield.scenarios.format.Scenario;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -55,6 +56,11 @@ final class BenchCommand implements Callable<Integer> {
                     + " founders (the scenario's founder density); default: ${DEFAULT-VALUE}")
     private Density density;
 
+    @Option(names = "--dimensions", split = ",", paramLabel = "D", defaultValue = "2",
+            description = "2 for the scenario's flat tissue, 3 for the same tissue as a box a quarter of its height"
+                    + " deep (a 3-D scenario is measured as it is); 2,3 measures both (default: ${DEFAULT-VALUE})")
+    private List<Integer> dimensions;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
@@ -71,6 +77,9 @@ final class BenchCommand implements Callable<Integer> {
         for (int threads : threadCounts) {
             SharedOptions.checkWorkers(spec, "--threads", threads);
         }
+        for (int d : dimensions) {
+            SharedOptions.require(spec, d == 2 || d == 3, "--dimensions", d, "must be 2 or 3 (or 2,3 for both)");
+        }
         PrintWriter out = spec.commandLine().getOut();
         Scenario loaded = ScenarioArgument.loadOrReport(scenario, spec.commandLine().getErr());
         if (loaded == null) {
@@ -82,11 +91,29 @@ final class BenchCommand implements Callable<Integer> {
                     + " (the bare baseline loop is written for it), as the demo has");
             return FatefieldCommand.INVALID_INPUT;
         }
-        double area = density == Density.confluent ? TissueBenchmark.confluentArea(loaded.tissue())
-                : TissueBenchmark.founderArea(loaded.tissue());
-        out.printf("Fatefield benchmark, scenario %s, Java %s, %d processors; median of %d timings of %d steps;"
-                + " %s packing, %.0f µm² per cell%n", loaded.name(), System.getProperty("java.version"),
-                Runtime.getRuntime().availableProcessors(), repeats, steps, density, area);
+        out.printf("Fatefield benchmark, scenario %s, Java %s, %d processors; median of %d timings of %d steps%n",
+                loaded.name(), System.getProperty("java.version"), Runtime.getRuntime().availableProcessors(), repeats,
+                steps);
+        for (int d : dimensions) {
+            TissueSpec template = d == 3 ? TissueBenchmark.inThreeDimensions(loaded.tissue()) : loaded.tissue();
+            boolean solid = template.domain().threeD();
+            double space = solid ? (density == Density.confluent ? TissueBenchmark.confluentVolume(template)
+                    : template.width() * template.height() * template.domain().depth()
+                            / template.growth().initialCells())
+                    : (density == Density.confluent ? TissueBenchmark.confluentArea(template)
+                            : TissueBenchmark.founderArea(template));
+            out.println();
+            out.printf("%s tissue (%s), %s packing, %.0f %s per cell%n", solid ? "Three-dimensional" : "Flat",
+                    template.domain().shape(), density, space, solid ? "µm³" : "µm²");
+            measure(out, template, space);
+        }
+        circuitLine(out, loaded);
+        out.flush();
+        return 0;
+    }
+
+    /** The two tables (full tick and cell loop; field and mechanics) and the heap line for one template. */
+    private void measure(PrintWriter out, TissueSpec template, double space) {
         out.printf("%10s %8s %16s %16s %16s %10s %10s%n", "cells", "threads", "full tick /s", "cell loop /s",
                 "bare loop /s", "loop/bare", "speed-up");
         List<TissueBenchmark.Result> results = new ArrayList<>();
@@ -94,8 +121,7 @@ final class BenchCommand implements Callable<Integer> {
         for (int cells : sizes) {
             double single = Double.NaN;
             for (int threads : threadCounts) {
-                TissueBenchmark.Result r = TissueBenchmark.measure(loaded.tissue(), cells, steps, repeats, 1L, threads,
-                        area);
+                TissueBenchmark.Result r = TissueBenchmark.measure(template, cells, steps, repeats, 1L, threads, space);
                 if (Double.isNaN(single)) {
                     single = r.tickRate();
                 }
@@ -122,8 +148,12 @@ final class BenchCommand implements Callable<Integer> {
                 + " once (one thread, no bucket rebuild, no cell objects).");
         if (memoryCells > 0) {
             out.printf("Heap per live cell at %d cells (cells, states, streams, field and buffers): %.0f bytes%n",
-                    memoryCells, TissueBenchmark.bytesPerCell(loaded.tissue(), memoryCells, area));
+                    memoryCells, TissueBenchmark.bytesPerCell(template, memoryCells, space));
         }
+    }
+
+    /** The single-cell line: Langevin steps, Gillespie events, continuation, for the built-in switch. */
+    private void circuitLine(PrintWriter out, Scenario loaded) {
         if (loaded.tissue().circuit().network() instanceof SelfActivatingSwitch sw) {
             SignalCoupling c = loaded.tissue().mapping().couplings().get(0);
             CircuitBenchmark.Result r = CircuitBenchmark.measure(sw, loaded.tissue().circuit().systemSize(),
@@ -135,7 +165,5 @@ final class BenchCommand implements Callable<Integer> {
             out.printf("Continuation of the switch over %s with branch switching: %.1f ms, %d special point%s%n",
                     c.label(), r.continuationMillis(), r.specialPoints(), r.specialPoints() == 1 ? "" : "s");
         }
-        out.flush();
-        return 0;
     }
 }
