@@ -70,6 +70,48 @@ class RenderingTest {
         assertTrue(new Color(image.getRGB(2, 2)).equals(Color.WHITE));
     }
 
+    /**
+     * In 3-D the picture is the mid-depth slice: a sphere of radius R whose centre is dz from the
+     * plane is drawn as its cross-section, a disc of radius sqrt(R^2 - dz^2) (Pythagoras), and a
+     * sphere that misses the plane is not drawn.
+     */
+    @Test
+    void aThreeDimensionalTissueIsDrawnAsItsMidDepthSlice() {
+        CustomNetwork inert = CustomNetwork.of(List.of("X"), List.of("k"), new double[] {0},
+                List.of(new CustomNetwork.ReactionDefinition("none", new int[] {1}, "k * X")));
+        TissueSpec spec = TissueSpec.of(new CircuitSetup(inert, NoiseMode.NONE, 100, new double[] {1.0}),
+                new ParameterMapping(inert.defaultParameters(), List.of()), MorphogenSpec.of(0, 0, 10, 0, List.of()),
+                new org.fatefield.engine.domain.Domain3d.Box(100, 50, 40), GrowthSpec.of(2, 10, 0,
+                new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e6, 0), Partitioning.equal()),
+                new FateClassifier(List.of(new FateRule("high", new double[] {0.5}, new double[] {Double.NaN})), "low"),
+                new Timing(0.02, 0.01, 0.01));
+        Tissue tissue = new Tissue(spec, 1);
+        tissue.start();
+        tissue.runToEnd();
+        Cell cut = tissue.cells().get(0);
+        Cell missed = tissue.cells().get(1);
+        double radius = cut.sphereRadius(10);
+        cut.moveTo(25, 25, 20 + 0.6 * radius);
+        missed.moveTo(75, 25, 20 + 1.01 * radius);
+        cut.setFate(0, 0);
+        missed.setFate(0, 0);
+        assertEquals(radius * 0.8, org.fatefield.viz.tissue.DepthSlice.drawnRadius(tissue, cut), 1e-12);
+        assertEquals(0.0, org.fatefield.viz.tissue.DepthSlice.drawnRadius(tissue, missed), 0.0);
+        int plotWidth = 400;
+        BufferedImage image = TissueRenderer.render(tissue, "test", plotWidth);
+        double scale = plotWidth / 100.0;
+        int left = 70;
+        int top = 48;
+        int plotHeight = (int) Math.round(50 * scale);
+        int py = (int) Math.round(top + plotHeight - 25 * scale);
+        int fate = FatePalette.fate(0, 2).getRGB();
+        assertEquals(fate, image.getRGB((int) Math.round(left + 25 * scale), py), "the cut sphere is drawn");
+        // Inside the cross-section (0.7 R from the centre) and outside it (0.9 R): 0.8 R is the edge.
+        assertEquals(fate, image.getRGB((int) Math.round(left + (25 + 0.7 * radius) * scale), py));
+        assertTrue(fate != image.getRGB((int) Math.round(left + (25 + 0.9 * radius) * scale), py));
+        assertTrue(fate != image.getRGB((int) Math.round(left + 75 * scale), py), "the missed sphere is not drawn");
+    }
+
     @Test
     void svgExportParsesAndHoldsEverySeries() throws Exception {
         TimeSeries series = new TimeSeries(List.of("alpha", "beta", "rest"));

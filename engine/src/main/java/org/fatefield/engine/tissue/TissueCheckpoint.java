@@ -14,11 +14,11 @@ import org.fatefield.engine.record.TimeSeries;
 final class TissueCheckpoint {
 
     /**
-     * "FFCKPT05": version 2 added cell volumes; 3 embedded random streams and a 4-byte ancestry;
+     * "FFCKPT06": version 2 added cell volumes; 3 embedded random streams and a 4-byte ancestry;
      * 4 dropped the cells' age and signal (derived from the clock and the field); 5 added each
-     * cell's first entry into the timed fate.
+     * cell's first entry into the timed fate; 6 added z and birth z, birth positions as floats.
      */
-    private static final long MAGIC = 0x4646434b50543035L;
+    private static final long MAGIC = 0x4646434b50543036L;
 
     private TissueCheckpoint() {
     }

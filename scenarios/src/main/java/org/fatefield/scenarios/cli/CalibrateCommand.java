@@ -93,6 +93,9 @@ final class CalibrateCommand implements Callable<Integer> {
     @Mixin
     private SharedOptions.Quiet quiet;
 
+    @Mixin
+    private SharedOptions.Verbose verbose;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
@@ -124,6 +127,9 @@ final class CalibrateCommand implements Callable<Integer> {
         } catch (ScenarioException e) {
             err.println(e.getMessage());
             return FatefieldCommand.INVALID_INPUT;
+        }
+        if (verbose.on(spec, quiet.given())) {
+            BatchPlan.printCalibration(definition, spec.commandLine().getOut());
         }
         try {
             Calibration.Outcome outcome = Calibration.run(definition, out.path(), backend, quiet.progress(System.err),

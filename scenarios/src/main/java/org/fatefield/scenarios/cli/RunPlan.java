@@ -42,14 +42,21 @@ final class RunPlan {
                 + " step%s (%s h, %s)%n", n(timing.duration()), timing.totalSteps(), n(timing.step()),
                 timing.stepsPerRecord(), mechanics, mechanics == 1 ? "" : "s", n(mechanics * timing.step()),
                 timing.mechanicsStep() > 0 ? "as set" : "set from the repulsion time scale");
-        out.printf(Locale.ROOT, "tissue: %s x %s µm%s; %d founders of radius %s µm; repulsion %s/h,"
-                + " adhesion %s/h%n", n(spec.width()), n(spec.height()), spec.domain().periodicY() ? ", periodic in y" : "",
-                growth.initialCells(), n(growth.cellRadius()), n(growth.repulsionRate()), n(growth.adhesion()));
+        boolean solid = spec.domain().threeD();
+        String size = n(spec.width()) + " x " + n(spec.height()) + (solid ? " x " + n(spec.domain().depth()) : "");
+        out.printf(Locale.ROOT, "tissue: %s %s µm%s; %d founders of radius %s µm (%s); repulsion %s/h,"
+                + " adhesion %s/h%n", spec.domain().shape(), size, spec.domain().periodicY() ? ", periodic in y" : "",
+                growth.initialCells(), n(growth.cellRadius()), solid ? "spheres" : "discs", n(growth.repulsionRate()),
+                n(growth.adhesion()));
         for (MorphogenSpec field : spec.fields()) {
-            out.printf(Locale.ROOT, "field %s: %d x %d squares of %s µm, diffusion %s µm²/h, decay %s/h,"
-                    + " %s solver%n", field.name(), (int) Math.ceil(spec.width() / field.gridSpacing()),
-                    (int) Math.ceil(spec.height() / field.gridSpacing()), n(field.gridSpacing()), n(field.diffusion()),
-                    n(field.decay()), field.solver().toString().toLowerCase(Locale.ROOT));
+            String grid = (int) Math.ceil(spec.width() / field.gridSpacing()) + " x "
+                    + (int) Math.ceil(spec.height() / field.gridSpacing())
+                    + (solid ? " x " + (int) Math.ceil(spec.domain().depth() / field.gridSpacing()) + " cubes"
+                            : " squares");
+            String solver = field.solver() == MorphogenSpec.Solver.ADI ? (solid ? "Douglas ADI" : "Peaceman-Rachford ADI")
+                    : "explicit";
+            out.printf(Locale.ROOT, "field %s: %s of %s µm, diffusion %s µm²/h, decay %s/h, %s solver%n",
+                    field.name(), grid, n(field.gridSpacing()), n(field.diffusion()), n(field.decay()), solver);
         }
         out.printf(Locale.ROOT, "circuit: %d species, noise %s, system size %s; fates: %s%n",
                 spec.circuit().network().speciesCount(), spec.circuit().noise().toString().toLowerCase(Locale.ROOT),

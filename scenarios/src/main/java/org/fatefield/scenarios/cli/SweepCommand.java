@@ -134,6 +134,9 @@ final class SweepCommand implements Runnable {
         @Mixin
         private SharedOptions.Quiet quiet;
 
+        @Mixin
+        private SharedOptions.Verbose verbose;
+
         @CommandLine.Spec
         private CommandLine.Model.CommandSpec spec;
 
@@ -142,12 +145,16 @@ final class SweepCommand implements Runnable {
             if (workers != null) {
                 SharedOptions.checkWorkers(spec, "--workers", workers);
             }
+            boolean detail = verbose.on(spec, quiet.given());
             PrintWriter err = spec.commandLine().getErr();
             try {
                 SweepRunner runner = new SweepRunner(folder);
                 int[] share = shard(shard, System.getenv());
                 List<Manifest.Run> runs = runner.manifest().shard(share[0], share[1]);
                 int k = workers != null ? workers : Runtime.getRuntime().availableProcessors();
+                if (detail) {
+                    BatchPlan.printSweep(runner, runs, share, k, spec.commandLine().getOut());
+                }
                 SweepRunner.Outcome outcome = runner.run(runs, k, quiet.progress(System.err));
                 spec.commandLine().getOut().printf("Shard %d/%d: %d already done, %d finished now, %d failed%n",
                         share[0], share[1], outcome.skipped(), outcome.finished(), outcome.failed());

@@ -48,7 +48,8 @@ public final class ScenarioSchema {
             Key.nonNegative("left_value", "concentration, or concentration µm/h", "0",
                     "the fixed concentration or the inflow at x = 0"),
             Key.of("secreted_by", KeyType.TEXT, "", "none", "fate whose cells secrete this field, or \"all\""),
-            Key.nonNegative("secretion_rate", "concentration µm²/h", "0", "amount each secreting cell adds per hour"),
+            Key.nonNegative("secretion_rate", "concentration µm²/h", "0", "amount each secreting cell adds per hour"
+                    + " (concentration µm³/h in a 3-D tissue)"),
             Key.nonNegative("uptake", "1/h", "0", "first-order uptake by cells, over the area each cell covers"),
             Key.of("profile", KeyType.TEXT, "", "none",
                     "a CSV file (columns x_um, value) in this scenario's folder: a measured profile along x, fixed in"

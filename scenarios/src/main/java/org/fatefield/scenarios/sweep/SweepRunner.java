@@ -137,6 +137,21 @@ public final class SweepRunner {
         }
     }
 
+    /**
+     * The scenario of {@code run}: the sweep's base scenario with the run's values of the varied
+     * keys as overrides.
+     *
+     * @throws org.fatefield.scenarios.format.ScenarioException if the values do not make a valid scenario
+     */
+    public Scenario scenarioOf(Manifest.Run run) throws org.fatefield.scenarios.format.ScenarioException {
+        Overrides variant = Overrides.none();
+        for (int k = 0; k < manifest.keys().size(); k++) {
+            variant = variant.with(manifest.keys().get(k), run.values()[k]);
+        }
+        return ScenarioReader.parse(run.id(), run.id(), baseText.getBytes(StandardCharsets.UTF_8),
+                folder.toAbsolutePath(), variant);
+    }
+
     /** Where the run's result lives. */
     public Path resultFile(Manifest.Run run) {
         return folder.resolve(RESULTS).resolve(run.id() + ".json");
@@ -147,12 +162,7 @@ public final class SweepRunner {
         result.addProperty("run_id", run.id());
         result.addProperty("seed", run.seed());
         try {
-            Overrides variant = Overrides.none();
-            for (int k = 0; k < manifest.keys().size(); k++) {
-                variant = variant.with(manifest.keys().get(k), run.values()[k]);
-            }
-            Scenario scenario = ScenarioReader.parse(run.id(), run.id(), baseText.getBytes(StandardCharsets.UTF_8),
-                    folder.toAbsolutePath(), variant);
+            Scenario scenario = scenarioOf(run);
             Tissue tissue = new Tissue(scenario.tissue(), run.seed(), 1);
             tissue.start();
             tissue.runToEnd();

@@ -13,7 +13,8 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * --quiet silences the progress lines and nothing else: the same tables are written and the
  * summary line still comes. --verbose adds the resolved settings and the files written, and
- * changes no result either.
+ * changes no result either; on sweep run and calibrate it prints the shard, the first run and
+ * the inference settings.
  */
 class QuietTest {
 
@@ -68,5 +69,35 @@ class QuietTest {
         assertEquals(2, FatefieldCommand.execute(new PrintWriter(new StringWriter()), new PrintWriter(err), "run",
                 "demo", "--quiet", "--verbose", "--out", tmp.resolve("both").toString()));
         assertTrue(err.toString().contains("--quiet and --verbose contradict each other"), err.toString());
+    }
+
+    @Test
+    void verboseSweepRunAndCalibrationPrintTheirPlans() throws Exception {
+        Path scenario = ShortDemo.write(tmp, "2.0");
+        Path sweep = tmp.resolve("sweep.toml");
+        Files.writeString(sweep, "[sweep]\nscenario = \"short.toml\"\ndesign = \"grid\"\nreplicates = 1\nseed = 3\n"
+                + "[[parameter]]\nkey = \"morphogen.decay\"\nlow = 0.1\nhigh = 0.3\nsteps = 3\n");
+        assertEquals(0, FatefieldCommandAccess.run("sweep", "plan", sweep.toString(), "--out",
+                tmp.resolve("s").toString()));
+        StringWriter out = new StringWriter();
+        assertEquals(0, FatefieldCommand.execute(new PrintWriter(out), new PrintWriter(new StringWriter()), "sweep",
+                "run", tmp.resolve("s").toString(), "--shard", "2/3", "--workers", "1", "--verbose"));
+        assertTrue(out.toString().contains("sweep: shard 2/3 holds 1 of the manifest's 3 runs, 0 already done; 1 at"
+                + " once") && out.toString().contains("first run to do: ") && out.toString().contains("override:"
+                + " morphogen.decay = 0.2"), out.toString());
+        Files.writeString(tmp.resolve("data.toml"), "[data]\n[[statistic]]\nname = \"population\"\nvalue = 200\n"
+                + "sd = 20\nunit = \"cells\"\n");
+        Path calibration = tmp.resolve("calibration.toml");
+        Files.writeString(calibration, "[calibration]\nscenario = \"" + scenario.getFileName() + "\"\ndata ="
+                + " \"data.toml\"\nparticles = 4\nbatch = 4\ngenerations = 1\npredictive = 1\nseed = 5\n"
+                + "[[parameter]]\nkey = \"division.cycle_mean\"\nprior = \"uniform\"\nlow = 4.0\nhigh = 12.0\n");
+        StringWriter plan = new StringWriter();
+        assertEquals(0, FatefieldCommand.execute(new PrintWriter(plan), new PrintWriter(new StringWriter()),
+                "calibrate", calibration.toString(), "--out", tmp.resolve("c").toString(), "--workers", "2",
+                "--verbose"));
+        assertTrue(plan.toString().contains("calibration: 4 particles, batches of 4, at most 1 generations")
+                && plan.toString().contains("  division.cycle_mean ~ uniform(4.0, 12.0)")
+                && plan.toString().contains("  population = 200 +- 20 cells")
+                && plan.toString().contains("time: 2 h in"), plan.toString());
     }
 }

@@ -24,8 +24,8 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * Every CSV table every command writes follows the README's one convention (long, empty for
  * missing, units in names) and every column is in the README's column dictionary. The commands
- * run once, small, as a user runs them: run with snapshots, replicates, analyze with a second
- * parameter, a sweep, robustness and a calibration.
+ * run once, small, as a user runs them: run with snapshots (flat and in a box), replicates,
+ * analyze with a second parameter, a sweep, robustness and a calibration.
  */
 class TableConventionTest {
 
@@ -42,6 +42,8 @@ class TableConventionTest {
     static void runEveryCommand() throws IOException {
         Path scenario = ShortDemo.write(tmp, "4.0");
         run("run", scenario.toString(), "--out", tmp.resolve("run").toString(), "--snapshots", "--quiet");
+        run("run", scenario.toString(), "--set", "tissue.shape=box", "--set", "tissue.depth=40", "--out",
+                tmp.resolve("run-3d").toString(), "--snapshots", "--quiet");
         run("replicates", scenario.toString(), "--runs", "2", "--out", tmp.resolve("replicates").toString(), "--quiet");
         run("analyze", "demo", "--out", tmp.resolve("analyze").toString(), "--trajectories", "4", "--grid", "30",
                 "--second", "Lum.basal", "--second-range", "0:0.2", "--quiet");
@@ -171,16 +173,17 @@ class TableConventionTest {
 
     @Test
     void longTablesHaveOneRowPerTimeAndFateAndAgreeWithTheirTotals() {
-        // timeseries.csv (all tables of the run and the two replicates): 3 fate rows per record
-        // time, summing to population.csv's cells at that time, fractions summing to 1.
+        // timeseries.csv (all tables of the flat run, the 3-D run and the two replicates): 3 fate
+        // rows per record time, summing to population.csv's cells at that time, fractions
+        // summing to 1.
         Map<String, Long> sums = new HashMap<>();
         Map<String, Double> fractions = new HashMap<>();
         for (CSVRecord r : ROWS.get("timeseries.csv")) {
             sums.merge(r.get("time_h"), Long.parseLong(r.get("cells")), Long::sum);
             fractions.merge(r.get("time_h"), Double.parseDouble(r.get("fraction")), Double::sum);
         }
-        assertEquals(ROWS.get("timeseries.csv").size(), 3 * 3 * sums.size(), "3 fates x 3 runs per record time");
-        fractions.forEach((t, f) -> assertEquals(3.0, f, 1e-8, "fractions over 3 runs at " + t));
+        assertEquals(ROWS.get("timeseries.csv").size(), 3 * 4 * sums.size(), "3 fates x 4 runs per record time");
+        fractions.forEach((t, f) -> assertEquals(4.0, f, 1e-8, "fractions over 4 runs at " + t));
         long population = ROWS.get("population.csv").stream().mapToLong(r -> Long.parseLong(r.get("cells"))).sum();
         assertEquals(population, sums.values().stream().mapToLong(Long::longValue).sum(),
                 "fate counts add up to the population");

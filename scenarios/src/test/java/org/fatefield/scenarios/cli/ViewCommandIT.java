@@ -23,7 +23,8 @@ import org.junit.jupiter.api.Test;
  * The live window launched exactly as the README says, {@code java -jar
  * scenarios/target/fatefield.jar view demo}, in a real X display (Xvfb in CI): a window must be on
  * the screen within a minute while the program keeps running, and closing it (Ctrl+Q) must end
- * the program with exit code 0. The screenshot is kept as target/view-from-jar.png. Runs after
+ * the program with exit code 0; the same for the 3-D example. The screenshots are kept as
+ * target/view-from-jar.png and target/view-3d-from-jar.png. Runs after
  * the jar is built (failsafe); skipped, saying why, without a display, never when
  * FATEFIELD_REQUIRE_DISPLAY=1 (as in CI).
  */
@@ -31,12 +32,22 @@ class ViewCommandIT {
 
     @Test
     void theReadmeCommandOpensAWindowThatEndsTheProgramWhenClosed() throws Exception {
+        opensAndCloses("demo", "view-from-jar");
+    }
+
+    /** The same for the 3-D example, whose window shows the mid-depth slice. */
+    @Test
+    void aThreeDimensionalScenarioOpensAWindowToo() throws Exception {
+        opensAndCloses(Path.of("examples", "glassfin-block-3d.toml").toString(), "view-3d-from-jar");
+    }
+
+    private static void opensAndCloses(String scenario, String name) throws Exception {
         RequiredDisplay.check("ViewCommandIT");
         Path jar = Path.of("target", "fatefield.jar").toAbsolutePath();
         assertTrue(Files.exists(jar), "the jar is built before this test: " + jar);
-        Path log = Path.of("target", "view-from-jar.log").toAbsolutePath();
+        Path log = Path.of("target", name + ".log").toAbsolutePath();
         Process process = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(),
-                "-jar", jar.toString(), "view", "demo").redirectErrorStream(true).redirectOutput(log.toFile())
+                "-jar", jar.toString(), "view", scenario).redirectErrorStream(true).redirectOutput(log.toFile())
                 .start();
         try {
             Robot robot = new Robot();
@@ -58,7 +69,7 @@ class ViewCommandIT {
                 Thread.sleep(500);
             }
             assertTrue(shot != null, "no window appeared within 60 s");
-            ImageIO.write(shot, "png", Path.of("target", "view-from-jar.png").toFile());
+            ImageIO.write(shot, "png", Path.of("target", name + ".png").toFile());
             assertTrue(process.isAlive(), "the program keeps running while its window is open");
             Rectangle window = drawnArea(shot);
             robot.mouseMove(window.x + window.width / 2, window.y + 10);
