@@ -23,8 +23,9 @@ public final class Cell {
     long stream0;
     long stream1;
 
-    private final long id;
-    private final long parentId;
+    /** Ids fit in 31 bits (the ancestry's limit), so ints hold them: 8 bytes a cell. */
+    private final int id;
+    private final int parentId;
     /** Divisions since the founder; shorts keep the 3-D cell within the 2-D cell's 136 bytes. */
     private final short generation;
     private final double birthTime;
@@ -77,6 +78,10 @@ public final class Cell {
     public Cell(long id, long parentId, int generation, double birthTime, double cycleTime, double[] state,
             long[] stream, double x, double y, double z, double birthVolume, double volume) {
         XoroshiroStep.checkState(stream[0], stream[1]);
+        if (id < 0 || id >= Integer.MAX_VALUE || parentId < -1 || parentId >= Integer.MAX_VALUE) {
+            throw new IllegalArgumentException("cell id " + id + " and parent id " + parentId + " must be from 0 (-1"
+                    + " for a founder's parent) to " + (Integer.MAX_VALUE - 1));
+        }
         if (generation < 0 || generation > Short.MAX_VALUE) {
             throw new IllegalArgumentException("cell " + id + ": generation must be from 0 to " + Short.MAX_VALUE
                     + ", got " + generation);
@@ -89,8 +94,8 @@ public final class Cell {
         }
         this.birthVolume = birthVolume;
         this.volume = volume;
-        this.id = id;
-        this.parentId = parentId;
+        this.id = (int) id;
+        this.parentId = (int) parentId;
         this.generation = (short) generation;
         this.birthTime = birthTime;
         this.cycleTime = cycleTime;

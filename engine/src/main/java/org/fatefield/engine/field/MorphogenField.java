@@ -284,30 +284,14 @@ public final class MorphogenField {
         int l0 = (int) Math.floor(gz);
         double fz = gz - l0;
         int layer = nx * ny;
-        double below = sampleLayer(x, y, clamp(l0, nz) * layer);
-        double above = sampleLayer(x, y, clamp(l0 + 1, nz) * layer);
+        double below = sampleLayer(x, y, GridInterpolation.clamp(l0, nz) * layer);
+        double above = sampleLayer(x, y, GridInterpolation.clamp(l0 + 1, nz) * layer);
         return below * (1 - fz) + above * fz;
     }
 
     /** Bilinear interpolation within the layer starting at index {@code base}. */
     private double sampleLayer(double x, double y, int base) {
-        double gx = x / h - 0.5;
-        double gy = y / h - 0.5;
-        int i0 = (int) Math.floor(gx);
-        int j0 = (int) Math.floor(gy);
-        double fx = gx - i0;
-        double fy = gy - j0;
-        int ia = clamp(i0, nx);
-        int ib = clamp(i0 + 1, nx);
-        int ja = periodicY ? Math.floorMod(j0, ny) : clamp(j0, ny);
-        int jb = periodicY ? Math.floorMod(j0 + 1, ny) : clamp(j0 + 1, ny);
-        double bottom = current[base + ja * nx + ia] * (1 - fx) + current[base + ja * nx + ib] * fx;
-        double top = current[base + jb * nx + ia] * (1 - fx) + current[base + jb * nx + ib] * fx;
-        return bottom * (1 - fy) + top * fy;
-    }
-
-    private static int clamp(int index, int size) {
-        return index < 0 ? 0 : (index >= size ? size - 1 : index);
+        return GridInterpolation.layer(current, base, nx, ny, h, periodicY, x, y);
     }
 
     /**

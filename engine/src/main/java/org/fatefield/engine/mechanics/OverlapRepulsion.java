@@ -39,8 +39,11 @@ public final class OverlapRepulsion {
      */
     private double[] sx = new double[0];
     private double[] sy = new double[0];
-    /** z positions and forces, allocated only in a 3-D domain. */
-    private double[] sz = new double[0];
+    /**
+     * z positions and forces, allocated only in a 3-D domain; floats, as the positions serve
+     * only the forces (a cell moves from its own double z), to keep a 3-D cell within 256 bytes.
+     */
+    private float[] sz = new float[0];
     private float[] fz = new float[0];
     private final boolean threeD;
     private float[] sr = new float[0];
@@ -49,8 +52,9 @@ public final class OverlapRepulsion {
     private float[] fy = new float[0];
     /** Each cell's slot (its bucket, while the slots are being assigned). */
     private int[] slotOfCell = new int[0];
+    /** Where each bucket's slots start (a bucket's cells are slots bucketStart[b] to bucketStart[b + 1]). */
     private int[] bucketStart = new int[0];
-    private int[] bucketFill = new int[0];
+    private final BucketSlots slots = new BucketSlots();
     private double[] largestVolumeOfWorker = new double[0];
     private double[][] placeOfWorker = new double[0][];
 
@@ -131,7 +135,7 @@ public final class OverlapRepulsion {
                 sx[i] = c.id();
             }
         });
-        assignSlots(n, gx * gy * gz, pool);
+        bucketStart = slots.assign(n, gx * gy * gz, slotOfCell, sx, sy, pool);
         pool.forEach(n, (from, to, worker) -> {
             for (int i = from; i < to; i++) {
                 Cell c = population.get(i);
@@ -139,7 +143,7 @@ public final class OverlapRepulsion {
                 sx[slot] = c.x();
                 sy[slot] = c.y();
                 if (threeD) {
-                    sz[slot] = c.z();
+                    sz[slot] = (float) c.z();
                     sr[slot] = (float) c.sphereRadius(newbornRadius);
                 } else {
                     sr[slot] = (float) c.radius(newbornRadius);
@@ -175,7 +179,7 @@ public final class OverlapRepulsion {
                 int slot = slotOfCell[i];
                 if (threeD) {
                     domain.confine(sx[slot] + step * fx[slot], sy[slot] + step * fy[slot],
-                            sz[slot] + step * fz[slot], sr[slot], place);
+                            population.get(i).z() + step * fz[slot], sr[slot], place);
                     population.get(i).moveTo(place[0], place[1], place[2]);
                 } else {
                     domain.confine(sx[slot] + step * fx[slot], sy[slot] + step * fy[slot], sr[slot], place);
@@ -294,7 +298,7 @@ public final class OverlapRepulsion {
     private void pair3d(int i, int k, boolean periodic) {
         double ex = sx[i] - sx[k];
         double ey = sy[i] - sy[k];
-        double ez = sz[i] - sz[k];
+        double ez = (double) sz[i] - sz[k];
         if (periodic) {
             ey = domain.nearestImageDy(ey);
         }
@@ -326,63 +330,6 @@ public final class OverlapRepulsion {
         fz[k] -= (float) (ez * scale);
     }
 
-    /**
-     * Counts the cells per bucket and gives each cell a slot, buckets in row-major order and
-     * cells in order of id within a bucket (a counting sort, then an insertion sort of each
-     * bucket's few cells, buckets in parallel). The force on a cell is then summed in an order
-     * fixed by positions and ids, never by the population's memory order, so floating-point
-     * results do not depend on when the population was last reordered.
-     */
-    private void assignSlots(int n, int buckets, BlockParallel pool) {
-        if (bucketStart.length < buckets + 1) {
-            bucketStart = new int[buckets + 1];
-            bucketFill = new int[buckets];
-        } else {
-            Arrays.fill(bucketStart, 0, buckets + 1, 0);
-        }
-        for (int i = 0; i < n; i++) {
-            bucketStart[slotOfCell[i] + 1]++;
-        }
-        for (int b = 0; b < buckets; b++) {
-            bucketStart[b + 1] += bucketStart[b];
-        }
-        System.arraycopy(bucketStart, 0, bucketFill, 0, buckets);
-        for (int i = 0; i < n; i++) {
-            slotOfCell[i] = bucketFill[slotOfCell[i]]++;
-        }
-        // sy is free until the snapshot too: it holds the inverse map, slot to cell (exact as doubles).
-        for (int i = 0; i < n; i++) {
-            sy[slotOfCell[i]] = i;
-        }
-        pool.forEach(buckets, (from, to, worker) -> {
-            for (int b = from; b < to; b++) {
-                sortBucketById(bucketStart[b], bucketStart[b + 1]);
-            }
-        });
-        pool.forEach(n, (from, to, worker) -> {
-            for (int k = from; k < to; k++) {
-                slotOfCell[(int) sy[k]] = k;
-            }
-        });
-    }
-
-    /**
-     * Insertion sort of slots {@code [from, to)} (one bucket, a few cells) by cell id: the cells
-     * of the slots are in {@link #sy}, their ids in {@link #sx}, where the bucket pass left them.
-     */
-    private void sortBucketById(int from, int to) {
-        for (int k = from + 1; k < to; k++) {
-            double cell = sy[k];
-            double id = sx[(int) cell];
-            int j = k - 1;
-            while (j >= from && sx[(int) sy[j]] > id) {
-                sy[j + 1] = sy[j];
-                j--;
-            }
-            sy[j + 1] = cell;
-        }
-    }
-
     private static int bucketOf(double coordinate, double side, int count) {
         int b = (int) (coordinate / side);
         return b < 0 ? 0 : (b >= count ? count - 1 : b);
@@ -398,7 +345,7 @@ public final class OverlapRepulsion {
             fy = new float[size];
             slotOfCell = new int[size];
             if (threeD) {
-                sz = new double[size];
+                sz = new float[size];
                 fz = new float[size];
             }
         }

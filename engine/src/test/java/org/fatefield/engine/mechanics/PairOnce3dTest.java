@@ -136,8 +136,9 @@ class PairOnce3dTest {
         assertEquals(expected, reach - d, 1e-6);
         // The continuum exp(-rate t) to the Euler step's first-order error.
         assertEquals(overlap * Math.exp(-RATE * steps * dt), reach - d, 0.01);
-        // They separate along the diagonal and stay centred on it.
+        // They separate along the diagonal and stay centred on it (to the single precision in
+        // which the forces read z: 6e-8 relative, 3e-6 µm at 50 µm).
         assertEquals(100.0, a.x() + b.x(), 1e-9);
-        assertEquals(a.x() - b.x(), a.z() - b.z(), 1e-9);
+        assertEquals(a.x() - b.x(), a.z() - b.z(), 1e-6);
     }
 }

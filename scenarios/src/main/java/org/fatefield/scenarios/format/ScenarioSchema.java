@@ -50,7 +50,8 @@ public final class ScenarioSchema {
             Key.of("secreted_by", KeyType.TEXT, "", "none", "fate whose cells secrete this field, or \"all\""),
             Key.nonNegative("secretion_rate", "concentration µm²/h", "0", "amount each secreting cell adds per hour"
                     + " (concentration µm³/h in a 3-D tissue)"),
-            Key.nonNegative("uptake", "1/h", "0", "first-order uptake by cells, over the area each cell covers"),
+            Key.nonNegative("uptake", "1/h", "0", "first-order uptake by cells, over the area each cell covers"
+                    + " (in a 3-D tissue, the space it fills)"),
             Key.of("profile", KeyType.TEXT, "", "none",
                     "a CSV file (columns x_um, value) in this scenario's folder: a measured profile along x, fixed in"
                             + " time, that replaces the dynamics"),
@@ -97,7 +98,7 @@ public final class ScenarioSchema {
                                     + " box, the width x height x depth box with walls on all six faces; or slab, the"
                                     + " box made periodic along y (walls at x = 0, x = width, z = 0 and z = depth);"
                                     + " cells are spheres and the fields fill the box")),
-                    "the domain (a rectangle with walls) and its founder cells"),
+                    "the domain (a rectangle, disc or strip; in 3-D a box or slab) and its founder cells"),
             new Section("division", false, false, List.of(
                     Key.choice("cycle", "gamma", List.of("fixed", "gamma", "lognormal", "none"),
                             "cycle-time distribution; none: cells never divide (cycle_mean and cycle_cv are ignored)"),

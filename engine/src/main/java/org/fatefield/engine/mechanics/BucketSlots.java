@@ -1,0 +1,75 @@
+package org.fatefield.engine.mechanics;
+
+import java.util.Arrays;
+import org.fatefield.engine.parallel.BlockParallel;
+
+/**
+ * The slot order of {@link OverlapRepulsion}: cells sorted into buckets (a counting sort), and
+ * by id within a bucket (an insertion sort of each bucket's few cells, buckets in parallel). The
+ * force on a cell is then summed in an order fixed by positions and ids, never by the
+ * population's memory order, so floating-point results do not depend on when the population was
+ * last reordered. The arrays are kept from step to step.
+ */
+final class BucketSlots {
+
+    private int[] bucketStart = new int[0];
+    private int[] bucketFill = new int[0];
+
+    /**
+     * Gives each of the {@code n} cells a slot. On entry {@code slotOfCell[i]} holds cell i's
+     * bucket and {@code ids[i]} its id; on return {@code slotOfCell[i]} holds its slot, and the
+     * returned array its bucket starts (bucket b holds slots {@code start[b]} to
+     * {@code start[b + 1]}). {@code cellOfSlot} is scratch of at least n values.
+     */
+    int[] assign(int n, int buckets, int[] slotOfCell, double[] ids, double[] cellOfSlot, BlockParallel pool) {
+        if (bucketStart.length < buckets + 1) {
+            bucketStart = new int[buckets + 1];
+            bucketFill = new int[buckets];
+        } else {
+            Arrays.fill(bucketStart, 0, buckets + 1, 0);
+        }
+        int[] start = bucketStart;
+        for (int i = 0; i < n; i++) {
+            start[slotOfCell[i] + 1]++;
+        }
+        for (int b = 0; b < buckets; b++) {
+            start[b + 1] += start[b];
+        }
+        System.arraycopy(start, 0, bucketFill, 0, buckets);
+        for (int i = 0; i < n; i++) {
+            slotOfCell[i] = bucketFill[slotOfCell[i]]++;
+        }
+        // The inverse map, slot to cell (exact as doubles).
+        for (int i = 0; i < n; i++) {
+            cellOfSlot[slotOfCell[i]] = i;
+        }
+        pool.forEach(buckets, (from, to, worker) -> {
+            for (int b = from; b < to; b++) {
+                sortBucketById(ids, cellOfSlot, start[b], start[b + 1]);
+            }
+        });
+        pool.forEach(n, (from, to, worker) -> {
+            for (int k = from; k < to; k++) {
+                slotOfCell[(int) cellOfSlot[k]] = k;
+            }
+        });
+        return start;
+    }
+
+    /**
+     * Insertion sort of slots {@code [from, to)} (one bucket, a few cells) by cell id: the cells
+     * of the slots are in {@code cellOfSlot}, their ids in {@code ids}, by cell.
+     */
+    private static void sortBucketById(double[] ids, double[] cellOfSlot, int from, int to) {
+        for (int k = from + 1; k < to; k++) {
+            double cell = cellOfSlot[k];
+            double id = ids[(int) cell];
+            int j = k - 1;
+            while (j >= from && ids[(int) cellOfSlot[j]] > id) {
+                cellOfSlot[j + 1] = cellOfSlot[j];
+                j--;
+            }
+            cellOfSlot[j + 1] = cell;
+        }
+    }
+}
