@@ -7,6 +7,7 @@ import java.lang.reflect.InvocationTargetException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Locale;
 import java.util.concurrent.Callable;
 import java.util.concurrent.CountDownLatch;
 import javax.swing.SwingUtilities;
@@ -16,6 +17,7 @@ import org.fatefield.scenarios.format.Overrides;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.format.ScenarioReader;
+import org.fatefield.scenarios.output.RunTables;
 import org.fatefield.viz.live.TissueWindow;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -79,7 +81,10 @@ final class ViewCommand implements Callable<Integer> {
     static TissueWindow open(Scenario loaded, long runSeed) {
         int threads = Runtime.getRuntime().availableProcessors();
         ControlCircuit circuit = ControlCircuit.of(loaded.tissue(), 60);
-        return new TissueWindow("Fatefield: " + loaded.name(), settings -> new Tissue(variant(loaded, settings).tissue(),
+        String slice = loaded.tissue().domain().threeD() ? String.format(Locale.ROOT,
+                " (3-D: the mid-depth slice z = %s of %s µm)", RunTables.number(0.5 * loaded.tissue().domain().depth()),
+                RunTables.number(loaded.tissue().domain().depth())) : "";
+        return new TissueWindow("Fatefield: " + loaded.name() + slice, settings -> new Tissue(variant(loaded, settings).tissue(),
                 runSeed, threads), circuit == null ? List.of() : circuit.branches(),
                 circuit == null ? "control" : circuit.parameter(), circuit == null ? null : circuit.landscape());
     }

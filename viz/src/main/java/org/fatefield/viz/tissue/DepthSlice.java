@@ -1,5 +1,6 @@
 package org.fatefield.viz.tissue;
 
+import java.util.Locale;
 import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.field.MorphogenField;
 import org.fatefield.engine.tissue.Tissue;
@@ -43,7 +44,7 @@ public final class DepthSlice {
     /** A caption for a picture's title: empty for a flat tissue, the plane's depth in 3-D. */
     public static String caption(Tissue tissue) {
         return tissue.spec().domain().threeD()
-                ? String.format(java.util.Locale.ROOT, ", mid-depth slice z = %.4g of %.4g µm", plane(tissue),
+                ? String.format(Locale.ROOT, ", mid-depth slice z = %.4g of %.4g µm", plane(tissue),
                         tissue.spec().domain().depth())
                 : "";
     }
