@@ -68,6 +68,11 @@ final class RunCommand implements Callable<Integer> {
             + " image data (snapshots/<field>-<step>.vti, XML, readable by 3-D viewers)")
     private boolean vtk;
 
+    @Option(names = "--parquet", description = "also write the large tables as Parquet beside their CSV:"
+            + " lineage.parquet, cells.parquet and, with --snapshots, snapshots/cells-<step>.parquet (same columns;"
+            + " empty cells are nulls)")
+    private boolean parquet;
+
     @Option(names = "--resume", description = "continue the run from the checkpoint in --out (same scenario and seed)")
     private boolean resume;
 
@@ -147,7 +152,7 @@ final class RunCommand implements Callable<Integer> {
                     .withThreads(threads.resolveFor(loaded)).withForce(force.given()).withProgress(progress)
                     .withCheckpointSteps(every).withResume(resume).withFrameSteps(frameSteps)
                     .withSnapshots(!snapshots ? SnapshotFormat.NONE : vtk ? SnapshotFormat.TABLES_AND_VTK
-                            : SnapshotFormat.TABLES).withFigures(figures.format()));
+                            : SnapshotFormat.TABLES).withFigures(figures.format()).withParquet(parquet));
             if (!quiet) {
                 TimeSeries.Row last = tissue.series().last();
                 List<String> fates = tissue.series().fateNames();

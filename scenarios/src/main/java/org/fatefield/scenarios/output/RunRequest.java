@@ -21,9 +21,11 @@ import org.fatefield.viz.chart.FigureFormat;
  * @param frameSteps      steps between PNG frames, 0 for none
  * @param snapshots       what to write at every record time into {@code snapshots/}
  * @param figures         resolution and size of the figures
+ * @param parquet         also write the large tables (lineage, cells, cell snapshots) as Parquet
  */
 public record RunRequest(Scenario scenario, Path out, long seed, int threads, boolean force, Progress progress,
-        long checkpointSteps, boolean resume, long frameSteps, SnapshotFormat snapshots, FigureFormat figures) {
+        long checkpointSteps, boolean resume, long frameSteps, SnapshotFormat snapshots, FigureFormat figures,
+        boolean parquet) {
 
     /** Validates. */
     public RunRequest {
@@ -47,59 +49,65 @@ public record RunRequest(Scenario scenario, Path out, long seed, int threads, bo
     /** A run of {@code scenario} into {@code out} with its own seed, one thread, no extras, silent. */
     public static RunRequest of(Scenario scenario, Path out) {
         return new RunRequest(scenario, out, scenario.seed(), 1, false, Progress.silent(), 0, false, 0, SnapshotFormat.NONE,
-                FigureFormat.DEFAULT);
+                FigureFormat.DEFAULT, false);
     }
 
     /** With master seed {@code value}. */
     public RunRequest withSeed(long value) {
         return new RunRequest(scenario, out, value, threads,
-                force, progress, checkpointSteps, resume, frameSteps, snapshots, figures);
+                force, progress, checkpointSteps, resume, frameSteps, snapshots, figures, parquet);
     }
 
     /** Stepped on {@code value} threads. */
     public RunRequest withThreads(int value) {
         return new RunRequest(scenario, out, seed,
-                value, force, progress, checkpointSteps, resume, frameSteps, snapshots, figures);
+                value, force, progress, checkpointSteps, resume, frameSteps, snapshots, figures, parquet);
     }
 
     /** Allowed (or not) to overwrite the run files of a folder that holds files. */
     public RunRequest withForce(boolean value) {
         return new RunRequest(scenario, out, seed, threads,
-                value, progress, checkpointSteps, resume, frameSteps, snapshots, figures);
+                value, progress, checkpointSteps, resume, frameSteps, snapshots, figures, parquet);
     }
 
     /** Reporting progress to {@code value}. */
     public RunRequest withProgress(Progress value) {
         return new RunRequest(scenario, out, seed, threads,
-                force, value, checkpointSteps, resume, frameSteps, snapshots, figures);
+                force, value, checkpointSteps, resume, frameSteps, snapshots, figures, parquet);
     }
 
     /** Checkpointing every {@code steps} steps (0: never). */
     public RunRequest withCheckpointSteps(long steps) {
-        return new RunRequest(scenario, out, seed, threads, force, progress, steps, resume, frameSteps, snapshots, figures);
+        return new RunRequest(scenario, out, seed, threads, force, progress, steps, resume, frameSteps, snapshots, figures, parquet);
     }
 
     /** Continuing (or not) from the folder's checkpoint. */
     public RunRequest withResume(boolean value) {
         return new RunRequest(scenario, out, seed, threads,
-                force, progress, checkpointSteps, value, frameSteps, snapshots, figures);
+                force, progress, checkpointSteps, value, frameSteps, snapshots, figures, parquet);
     }
 
     /** Writing a frame every {@code steps} steps (0: never). */
     public RunRequest withFrameSteps(long steps) {
         return new RunRequest(scenario, out, seed, threads,
-                force, progress, checkpointSteps, resume, steps, snapshots, figures);
+                force, progress, checkpointSteps, resume, steps, snapshots, figures, parquet);
     }
 
     /** Writing figures in {@code value}. */
     public RunRequest withFigures(FigureFormat value) {
         return new RunRequest(scenario, out, seed, threads, force, progress, checkpointSteps, resume, frameSteps,
-                snapshots, value);
+                snapshots, value, parquet);
     }
 
     /** Writing {@code value} at every record time. */
     public RunRequest withSnapshots(SnapshotFormat value) {
         return new RunRequest(scenario, out, seed, threads,
-                force, progress, checkpointSteps, resume, frameSteps, value, figures);
+                force, progress, checkpointSteps, resume, frameSteps, value, figures, parquet);
+    }
+
+    /** Also writing (or not) the large tables as Parquet. */
+    public RunRequest withParquet(boolean value) {
+        return new RunRequest(scenario, out, seed, threads, force, progress, checkpointSteps, resume, frameSteps,
+                snapshots, figures, value);
     }
 }

@@ -128,6 +128,9 @@ public final class ScenarioRunner {
         files.add(RunLayout.POPULATION);
         folder.writeText(RunLayout.CELLS, w -> RunTables.writeCells(tissue, w));
         files.add(RunLayout.CELLS);
+        if (request.parquet()) {
+            files.addAll(parquetCopies(out, request.snapshots().any()));
+        }
         RunMetrics metrics = RunMetrics.of(tissue);
         int timed = tissue.spec().fates().firstPassageFate();
         if (timed >= 0) {
@@ -167,5 +170,24 @@ public final class ScenarioRunner {
                 throw new UncheckedIOException(e);
             }
         };
+    }
+
+    /**
+     * Parquet copies of lineage.csv, cells.csv and, with snapshots, of every cell snapshot;
+     * returns the names of the first two (the snapshots folder is listed already).
+     */
+    private static List<String> parquetCopies(Path out, boolean snapshots) throws IOException {
+        List<Path> tables = new ArrayList<>(List.of(out.resolve(RunLayout.LINEAGE), out.resolve(RunLayout.CELLS)));
+        if (snapshots) {
+            try (var listing = Files.list(out.resolve(RunLayout.SNAPSHOTS))) {
+                listing.filter(p -> p.getFileName().toString().matches("cells-\\d+\\.csv")).sorted()
+                        .forEach(tables::add);
+            }
+        }
+        for (Path table : tables) {
+            ParquetTables.copy(table);
+        }
+        return List.of(ParquetTables.besides(Path.of(RunLayout.LINEAGE)).toString(),
+                ParquetTables.besides(Path.of(RunLayout.CELLS)).toString());
     }
 }
