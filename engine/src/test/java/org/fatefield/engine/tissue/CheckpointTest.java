@@ -32,14 +32,17 @@ import org.junit.jupiter.api.Test;
 class CheckpointTest {
 
     private static TissueSpec spec() {
+        return spec(new Domain.Rectangle(200, 100));
+    }
+
+    private static TissueSpec spec(Domain domain) {
         SelfActivatingSwitch sw = SelfActivatingSwitch.symmetric("A", "B",
                 new GeneKinetics(0.05, 0.2, 0.5, 4, 1.0, 0.5, 4, 1.0));
         return TissueSpec.of(new CircuitSetup(sw, NoiseMode.LANGEVIN, 50, new double[] {0.3, 0.3}),
                 new ParameterMapping(sw.defaultParameters(), List.of(SignalCoupling.of("repression",
                         sw.parameterGroup("repression"), new CouplingLaw.Hill(0.2, 1.8, 1, 2)))),
                         MorphogenSpec.of(2000, 0.3, 10, 0, List.of(new SourceRegion(0, 0, 20, 100, 3))),
-                                new Domain.Rectangle(200,
-                                100), GrowthSpec.of(60, 3, 20,
+                                domain, GrowthSpec.of(60, 3, 20,
                                 new CycleTimeDistribution(CycleTimeDistribution.Kind.GAMMA, 3, 0.2),
                                 Partitioning.binomial()).withAxis(GrowthSpec.DivisionAxis.RANDOM).withDeathRate(0.02)
                                 .withDilution(true), new FateClassifier(List.of(
@@ -51,14 +54,24 @@ class CheckpointTest {
 
     @Test
     void resumedRunEqualsTheStraightRun() throws IOException {
+        resumesExactly(new Domain.Rectangle(200, 100));
+    }
+
+    /** The same in a 3-D box: positions along z, spheres, and the explicit scheme on a cubic grid. */
+    @Test
+    void resumedThreeDimensionalRunEqualsTheStraightRun() throws IOException {
+        resumesExactly(new org.fatefield.engine.domain.Domain3d.Box(200, 100, 30));
+    }
+
+    private static void resumesExactly(Domain domain) throws IOException {
         List<LineageRecord> straightRecords = new ArrayList<>();
-        Tissue straight = new Tissue(spec(), 77, 2);
+        Tissue straight = new Tissue(spec(domain), 77, 2);
         straight.setLineageSink(straightRecords::add);
         straight.start();
         straight.runToEnd();
 
         List<LineageRecord> resumedRecords = new ArrayList<>();
-        Tissue first = new Tissue(spec(), 77, 1);
+        Tissue first = new Tissue(spec(domain), 77, 1);
         first.setLineageSink(resumedRecords::add);
         first.start();
         first.advance(333);
@@ -66,7 +79,7 @@ class CheckpointTest {
         first.writeCheckpoint(new DataOutputStream(bytes));
         first.finish();
 
-        Tissue resumed = new Tissue(spec(), 77, 2);
+        Tissue resumed = new Tissue(spec(domain), 77, 2);
         resumed.setLineageSink(resumedRecords::add);
         resumed.start();
         resumed.readCheckpoint(new DataInputStream(new ByteArrayInputStream(bytes.toByteArray())));
@@ -79,6 +92,7 @@ class CheckpointTest {
             Cell b = resumed.cells().get(i);
             assertEquals(a.id(), b.id());
             assertEquals(a.x(), b.x(), 0.0);
+            assertEquals(a.z(), b.z(), 0.0);
             assertArrayEquals(a.state(), b.state(), 0.0);
             assertArrayEquals(a.scores(), b.scores(), 0.0);
         }

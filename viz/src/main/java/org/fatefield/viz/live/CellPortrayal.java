@@ -26,7 +26,7 @@ final class CellPortrayal extends SimplePortrayal2D {
     @Override
     public void draw(Object object, Graphics2D g, DrawInfo2D info) {
         Cell cell = (Cell) object;
-        double r = DepthSlice.drawnRadius(gui.tissue(), cell);
+        double r = DepthSlice.drawnRadius(gui.tissue(), cell, gui.slicePlane());
         double w = 2 * r * info.draw.width;
         double h = 2 * r * info.draw.height;
         Ellipse2D disc = new Ellipse2D.Double(info.draw.x - w / 2, info.draw.y - h / 2, w, h);
@@ -54,7 +54,7 @@ final class CellPortrayal extends SimplePortrayal2D {
     @Override
     public boolean hitObject(Object object, DrawInfo2D range) {
         Cell cell = (Cell) object;
-        double r = DepthSlice.drawnRadius(gui.tissue(), cell);
+        double r = DepthSlice.drawnRadius(gui.tissue(), cell, gui.slicePlane());
         double w = 2 * r * range.draw.width;
         double h = 2 * r * range.draw.height;
         return new Ellipse2D.Double(range.draw.x - w / 2, range.draw.y - h / 2, w, h).intersects(range.clip);

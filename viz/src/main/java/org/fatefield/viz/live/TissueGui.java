@@ -54,6 +54,8 @@ public final class TissueGui extends GUIState {
     private double speciesMax = 1;
     private double fieldMax = 1e-12;
     private CellTraces traces;
+    /** Depth of the plane shown in a 3-D tissue (µm), mid-depth at first. */
+    private double slicePlane;
 
     /**
      * A view of {@code tissue} (not yet started). The clicked cell's trace is taken by an
@@ -64,6 +66,7 @@ public final class TissueGui extends GUIState {
         this.tissue = tissue;
         this.space = new Continuous2D(4 * tissue.spec().growth().cellRadius(), tissue.spec().width(),
                 tissue.spec().height());
+        this.slicePlane = DepthSlice.plane(tissue);
         tissue.addObserver(t -> traces.record(t.time(), t.cells()));
     }
 
@@ -128,7 +131,7 @@ public final class TissueGui extends GUIState {
         double height = tissue.spec().height();
         double max = 1e-12;
         for (Cell cell : tissue.cells()) {
-            if (DepthSlice.drawnRadius(tissue, cell) > 0) {
+            if (DepthSlice.drawnRadius(tissue, cell, slicePlane) > 0) {
                 space.setObjectLocation(cell, new Double2D(cell.x(), height - cell.y()));
             }
             max = Math.max(max, cell.concentration(species));
@@ -136,7 +139,7 @@ public final class TissueGui extends GUIState {
         speciesMax = max;
         MorphogenField f = tissue.field();
         fieldMax = Math.max(f.max(), 1e-12);
-        int layer = DepthSlice.layer(tissue, f);
+        int layer = DepthSlice.layer(f, slicePlane);
         for (int i = 0; i < f.columns(); i++) {
             for (int j = 0; j < f.rows(); j++) {
                 grid.field[i][f.rows() - 1 - j] = f.value(i, j, layer);
@@ -160,6 +163,17 @@ public final class TissueGui extends GUIState {
     /** Sets the colour mode. */
     public void setMode(ColourMode value) {
         this.mode = value;
+    }
+
+    /** Depth of the plane shown (µm); 0 in a flat tissue. */
+    public double slicePlane() {
+        return slicePlane;
+    }
+
+    /** Shows the plane z = {@code value} µm of a 3-D tissue (kept inside the depth), and syncs. */
+    public void setSlicePlane(double value) {
+        slicePlane = Math.min(Math.max(value, 0.0), tissue.spec().domain().depth());
+        sync();
     }
 
     /** The colour mode. */

@@ -46,11 +46,11 @@ import sim.util.Bag;
 /**
  * The live window: the tissue on MASON's 2D display (cells over the morphogen heat map, zoom by
  * the zoom slider, pan by the scroll bars), our own controls (play, pause, step, reset with new
- * settings, speed, colour mode, field on or off), a legend, the clicked cell's state and lineage,
- * and four live charts (fate proportions with population; the circuit's landscape at the clicked
- * cell's local control parameter; cells over the bifurcation branches; the clicked cell's circuit
- * trace back through its ancestors). MASON's own
- * header, console and movie button are not shown; frames are recorded by {@code run --frames}.
+ * settings, speed, colour mode, field on or off; in 3-D the depth of the slice shown), a legend,
+ * the clicked cell's state and lineage, and four live charts (fate proportions with population;
+ * the landscape at the clicked cell's local control parameter; cells over the bifurcation
+ * branches; the clicked cell's trace back through its ancestors). MASON's own header, console
+ * and movie button are not shown; frames are recorded by {@code run --frames}.
  */
 public final class TissueWindow extends JFrame {
 
@@ -85,6 +85,10 @@ public final class TissueWindow extends JFrame {
     private ChartPanel proportions;
     private final JSlider speed = new JSlider(1, 50, 5);
     private final JSlider zoom = new JSlider(10, 80, 10);
+    private final SliceControl slice = new SliceControl(plane -> {
+        gui.setSlicePlane(plane);
+        display.repaint();
+    });
     private final JCheckBox showField = new JCheckBox("morphogen", true);
     private final JComboBox<ColourChoice> colour = new JComboBox<>();
     private final JLabel settingsProblem = new JLabel(" ");
@@ -120,11 +124,10 @@ public final class TissueWindow extends JFrame {
         timer = new Timer(30, e -> advance(speed.getValue()));
         JToggleButton play = new JToggleButton("Play");
         play.addActionListener(e -> {
+            play.setText(play.isSelected() ? "Pause" : "Play");
             if (play.isSelected()) {
-                play.setText("Pause");
                 timer.start();
             } else {
-                play.setText("Play");
                 timer.stop();
             }
         });
@@ -152,10 +155,9 @@ public final class TissueWindow extends JFrame {
         controls.add(step);
         controls.add(reset);
         controls.add(quit);
-        controls.add(new JLabel("speed"));
-        controls.add(speed);
-        controls.add(new JLabel("zoom"));
-        controls.add(zoom);
+        for (JComponent c : new JComponent[] {new JLabel("speed"), speed, new JLabel("zoom"), zoom}) {
+            controls.add(c);
+        }
         zoom.addChangeListener(e -> {
             display.setScale(zoom.getValue() / 10.0);
             display.repaint();
@@ -169,6 +171,7 @@ public final class TissueWindow extends JFrame {
         edits.add(settings);
         settingsProblem.setForeground(new Color(0xB00020));
         edits.add(settingsProblem);
+        edits.add(slice);
         JPanel top = new JPanel(new GridLayout(2, 1));
         top.add(controls);
         top.add(edits);
@@ -222,6 +225,8 @@ public final class TissueWindow extends JFrame {
         }
         gui = new TissueGui(tissue);
         gui.start();
+        slice.setDepth(tissue.spec().domain().depth());
+        gui.setSlicePlane(slice.plane());
         double scale = Math.min(820 / tissue.spec().width(), 620 / tissue.spec().height());
         display = new Display2D(tissue.spec().width() * scale, tissue.spec().height() * scale, gui);
         display.header.setVisible(false);

@@ -9,7 +9,7 @@ import org.fatefield.engine.tissue.Tissue;
  * What a flat picture shows of a three-dimensional tissue: the plane z = depth / 2, cut through
  * the spheres (each cell crossing the plane drawn as its cross-section, a disc of radius
  * {@code sqrt(R^2 - dz^2)}) and through the fields (the grid layer holding the plane). A flat
- * tissue is shown whole, as it is.
+ * tissue is shown whole, as it is. The live window can move the plane through the depth.
  */
 public final class DepthSlice {
 
@@ -26,18 +26,28 @@ public final class DepthSlice {
      * with the plane in 3-D, 0 if it does not reach the plane.
      */
     public static double drawnRadius(Tissue tissue, Cell cell) {
+        return drawnRadius(tissue, cell, plane(tissue));
+    }
+
+    /** As {@link #drawnRadius(Tissue, Cell)}, cut by the plane z = {@code plane} (µm). */
+    public static double drawnRadius(Tissue tissue, Cell cell, double plane) {
         double r0 = tissue.spec().growth().cellRadius();
         if (!tissue.spec().domain().threeD()) {
             return cell.radius(r0);
         }
         double r = cell.sphereRadius(r0);
-        double dz = cell.z() - plane(tissue);
+        double dz = cell.z() - plane;
         return Math.abs(dz) < r ? Math.sqrt(r * r - dz * dz) : 0.0;
     }
 
-    /** The field's grid layer that holds the plane (0 for a flat field). */
+    /** The field's grid layer that holds the mid-depth plane (0 for a flat field). */
     public static int layer(Tissue tissue, MorphogenField field) {
-        int l = (int) (plane(tissue) / field.spacing());
+        return layer(field, plane(tissue));
+    }
+
+    /** The field's grid layer that holds the plane z = {@code plane} (µm). */
+    public static int layer(MorphogenField field, double plane) {
+        int l = (int) (plane / field.spacing());
         return Math.min(field.layers() - 1, Math.max(0, l));
     }
 

@@ -55,4 +55,33 @@ class TissueGuiTest {
         assertEquals(chosen.id(), gui.selectedId());
         tissue.finish();
     }
+
+    /**
+     * In a 3-D box the view holds exactly the cells whose sphere the chosen plane cuts
+     * (|z - plane| < R, counted here directly), and moving the plane changes that set.
+     */
+    @Test
+    void theViewOfABoxHoldsTheCellsItsSliceCuts() {
+        CustomNetwork decay = CustomNetwork.of(List.of("X"), List.of("k"), new double[] {1},
+                List.of(new CustomNetwork.ReactionDefinition("decay", new int[] {-1}, "k * X")));
+        TissueSpec spec = TissueSpec.of(new CircuitSetup(decay, NoiseMode.NONE, 100, new double[] {1.0}),
+                new ParameterMapping(decay.defaultParameters(), List.of()), MorphogenSpec.of(0, 0, 10, 0, List.of()),
+                new org.fatefield.engine.domain.Domain3d.Box(200, 100, 60), GrowthSpec.of(300, 4, 0,
+                new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e6, 0), Partitioning.equal()),
+                new FateClassifier(List.of(new FateRule("high", new double[] {0.5}, new double[] {Double.NaN})), "low"),
+                new Timing(1, 0.01, 0.5));
+        Tissue tissue = new Tissue(spec, 3);
+        TissueGui gui = new TissueGui(tissue);
+        gui.start();
+        assertEquals(30.0, gui.slicePlane(), 0.0);
+        for (double plane : new double[] {30.0, 8.0, 55.0}) {
+            gui.setSlicePlane(plane);
+            long cut = tissue.cells().stream().filter(c -> Math.abs(c.z() - plane) < c.sphereRadius(4)).count();
+            assertEquals(cut, gui.liveCells().stream().filter(c -> gui.cells().getField() instanceof
+                    sim.field.continuous.Continuous2D space && space.getObjectLocation(c) != null).count(),
+                    "plane " + plane);
+            org.junit.jupiter.api.Assertions.assertTrue(cut > 10 && cut < 300, "a slice, not the whole: " + cut);
+        }
+        tissue.finish();
+    }
 }
