@@ -120,6 +120,20 @@ public sealed interface Domain permits Domain.Rectangle, Domain.Disc, Domain.Str
         return w >= period ? 0.0 : w;
     }
 
+    /**
+     * Checks that a shape periodic along y ({@code shape}: "strip" or "slab") is a whole number of
+     * grid squares tall, at least three, so the fields wrap around exactly.
+     */
+    static void checkPeriodicGrid(String shape, double height, double gridSpacing) {
+        double squares = height / gridSpacing;
+        if (Math.abs(squares - Math.round(squares)) > 1e-6 * squares || Math.round(squares) < 3) {
+            throw new IllegalArgumentException("a " + shape + "'s height must be a whole number of morphogen grid"
+                    + " squares, at least three, so the fields wrap around exactly: height " + height
+                    + " µm / grid spacing " + gridSpacing + " µm = " + squares
+                    + "; change tissue.height or the grid spacing");
+        }
+    }
+
     /** Checks a size: finite and greater than 0 on both sides. */
     static void checkSize(double width, double height) {
         if (!(width > 0) || !(height > 0) || Double.isInfinite(width) || Double.isInfinite(height)) {
@@ -253,13 +267,7 @@ public sealed interface Domain permits Domain.Rectangle, Domain.Disc, Domain.Str
 
         @Override
         public void checkGrid(double gridSpacing) {
-            double squares = height / gridSpacing;
-            if (Math.abs(squares - Math.round(squares)) > 1e-6 * squares || Math.round(squares) < 3) {
-                throw new IllegalArgumentException("a strip's height must be a whole number of morphogen grid"
-                        + " squares, at least three, so the fields wrap around exactly: height " + height
-                        + " µm / grid spacing " + gridSpacing + " µm = " + squares
-                        + "; change tissue.height or the grid spacing");
-            }
+            checkPeriodicGrid("strip", height, gridSpacing);
         }
 
         @Override

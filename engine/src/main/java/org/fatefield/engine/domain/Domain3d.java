@@ -116,7 +116,7 @@ public final class Domain3d {
 
         @Override
         public void checkGrid(double gridSpacing) {
-            new Domain.Strip(width, height).checkGrid(gridSpacing);
+            Domain.checkPeriodicGrid("slab", height, gridSpacing);
         }
 
         @Override
