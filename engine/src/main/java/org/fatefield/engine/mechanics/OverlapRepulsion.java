@@ -57,6 +57,8 @@ public final class OverlapRepulsion {
     private final BucketSlots slots = new BucketSlots();
     private double[] largestVolumeOfWorker = new double[0];
     private double[][] placeOfWorker = new double[0][];
+    /** Per worker: the 3-D force on the cell whose pairs are being summed (x, y, z), padded. */
+    private double[][] accOfWorker = new double[0][];
 
     /**
      * @param domain        where the cells live (its walls, or its periodic seam)
@@ -161,7 +163,7 @@ public final class OverlapRepulsion {
             pool.forEach(rows.length, (from, to, worker) -> {
                 for (int r = from; r < to; r++) {
                     if (threeD) {
-                        pairsOfRow3d(rows[r], gx, gy, gz);
+                        pairsOfRow3d(rows[r], gx, gy, gz, accOfWorker[worker]);
                     } else {
                         pairsOfRow(rows[r], gx, gy);
                     }
@@ -264,7 +266,7 @@ public final class OverlapRepulsion {
      * and next x), of the three buckets at x - 1 to x + 1 in the next z layer of the same y row,
      * and of the nine buckets around it in the next y row (across the seam on a slab).
      */
-    private void pairsOfRow3d(int row, int gx, int gy, int gz) {
+    private void pairsOfRow3d(int row, int gx, int gy, int gz, double[] acc) {
         boolean periodic = domain.periodicY();
         boolean nextRow = RowPasses.pairsWithNext(row, gy, periodic);
         int next = row + 1 == gy ? 0 : row + 1;
@@ -274,60 +276,76 @@ public final class OverlapRepulsion {
                 int lo = Math.max(0, column - 1);
                 int hi = Math.min(gx - 1, column + 1) + 1;
                 int sameEnd = bucketStart[line + hi];
-                int aboveFrom = layer + 1 < gz ? bucketStart[line + gx + lo] : 0;
-                int aboveTo = layer + 1 < gz ? bucketStart[line + gx + hi] : 0;
+                boolean above = layer + 1 < gz;
                 for (int i = bucketStart[line + column]; i < bucketStart[line + column + 1]; i++) {
-                    for (int k = i + 1; k < sameEnd; k++) {
-                        pair3d(i, k, periodic);
-                    }
-                    for (int k = aboveFrom; k < aboveTo; k++) {
-                        pair3d(i, k, periodic);
+                    acc[0] = 0;
+                    acc[1] = 0;
+                    acc[2] = 0;
+                    sweep3d(i, i + 1, sameEnd, periodic, acc);
+                    if (above) {
+                        sweep3d(i, bucketStart[line + gx + lo], bucketStart[line + gx + hi], periodic, acc);
                     }
                     for (int z = Math.max(0, layer - 1); nextRow && z <= Math.min(gz - 1, layer + 1); z++) {
                         int base = (next * gz + z) * gx;
-                        for (int k = bucketStart[base + lo]; k < bucketStart[base + hi]; k++) {
-                            pair3d(i, k, periodic);
-                        }
+                        sweep3d(i, bucketStart[base + lo], bucketStart[base + hi], periodic, acc);
                     }
+                    fx[i] += (float) acc[0];
+                    fy[i] += (float) acc[1];
+                    fz[i] += (float) acc[2];
                 }
             }
         }
     }
 
-    /** The force between slots {@code i} and {@code k} in 3-D, as {@link #pair} in 2-D. */
-    private void pair3d(int i, int k, boolean periodic) {
-        double ex = sx[i] - sx[k];
-        double ey = sy[i] - sy[k];
-        double ez = (double) sz[i] - sz[k];
-        if (periodic) {
-            ey = domain.nearestImageDy(ey);
-        }
-        double reach = (double) sr[i] + sr[k];
-        double d2 = ex * ex + ey * ey + ez * ez;
-        double scale;
-        if (d2 >= reach * reach) {
-            double far = reach * (1 + adhesionRange);
-            if (adhesion <= 0 || d2 >= far * far) {
-                return;
+    /**
+     * The forces in 3-D between slot {@code i} and each of the slots {@code [from, to)}, by the
+     * law of {@link #pair}. Each partner gets its share at once; slot i's shares are summed in
+     * {@code acc} (x, y, z), which the caller adds to slot i once, so slot i is written once per
+     * cell rather than once per pair (measured 40% faster than pair by pair in 3-D; in 2-D, with
+     * fewer candidates per cell, it was not faster, so 2-D keeps {@link #pair}).
+     */
+    private void sweep3d(int i, int from, int to, boolean periodic, double[] acc) {
+        double xi = sx[i];
+        double yi = sy[i];
+        double zi = sz[i];
+        double ri = sr[i];
+        double ax = 0;
+        double ay = 0;
+        double az = 0;
+        for (int k = from; k < to; k++) {
+            double ex = xi - sx[k];
+            double ey = periodic ? domain.nearestImageDy(yi - sy[k]) : yi - sy[k];
+            double ez = zi - sz[k];
+            double reach = ri + sr[k];
+            double d2 = ex * ex + ey * ey + ez * ez;
+            double scale;
+            if (d2 >= reach * reach) {
+                double far = reach * (1 + adhesionRange);
+                if (adhesion <= 0 || d2 >= far * far) {
+                    continue;
+                }
+                double d = Math.sqrt(d2);
+                scale = -adhesion * (d - reach) / d;
+            } else {
+                double d = Math.sqrt(d2);
+                if (d <= 1e-12) {
+                    // Coincident centres: separate along x by slot order, deterministically.
+                    ax -= rate * reach;
+                    fx[k] += (float) (rate * reach);
+                    continue;
+                }
+                scale = rate * (reach - d) / d;
             }
-            double d = Math.sqrt(d2);
-            scale = -adhesion * (d - reach) / d;
-        } else {
-            double d = Math.sqrt(d2);
-            if (d <= 1e-12) {
-                // Coincident centres: separate along x by slot order, deterministically.
-                fx[i] -= (float) (rate * reach);
-                fx[k] += (float) (rate * reach);
-                return;
-            }
-            scale = rate * (reach - d) / d;
+            ax += ex * scale;
+            ay += ey * scale;
+            az += ez * scale;
+            fx[k] -= (float) (ex * scale);
+            fy[k] -= (float) (ey * scale);
+            fz[k] -= (float) (ez * scale);
         }
-        fx[i] += (float) (ex * scale);
-        fy[i] += (float) (ey * scale);
-        fz[i] += (float) (ez * scale);
-        fx[k] -= (float) (ex * scale);
-        fy[k] -= (float) (ey * scale);
-        fz[k] -= (float) (ez * scale);
+        acc[0] += ax;
+        acc[1] += ay;
+        acc[2] += az;
     }
 
     private static int bucketOf(double coordinate, double side, int count) {
@@ -353,6 +371,7 @@ public final class OverlapRepulsion {
             largestVolumeOfWorker = new double[workers];
             // Padded past a cache line so that two workers' scratch never shares one.
             placeOfWorker = new double[workers][3 + 16];
+            accOfWorker = new double[workers][3 + 16];
         }
     }
 }
