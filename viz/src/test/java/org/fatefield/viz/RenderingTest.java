@@ -35,18 +35,25 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 /** Headless drawing checked pixel by pixel, and the SVG export checked as XML with its series. */
 class RenderingTest {
 
-    @Test
-    void cellsAreDrawnInTheirFateColoursAtTheirCentres() {
-        // Two fixed cells: "high" (X = 1) at (25, 25) and "low" (X = 0) at (75, 25) in a 100 x 50 domain.
+    /**
+     * A tissue of {@code founders} cells of radius {@code radius} that neither divide nor move,
+     * with an inert species X = 1: cell "high" (X above 0.5) or "low".
+     */
+    private static TissueSpec fixedCells(Domain domain, int founders, double radius) {
         CustomNetwork inert = CustomNetwork.of(List.of("X"), List.of("k"), new double[] {0},
                 List.of(new CustomNetwork.ReactionDefinition("none", new int[] {1}, "k * X")));
-        TissueSpec spec = TissueSpec.of(new CircuitSetup(inert, NoiseMode.NONE, 100, new double[] {1.0}),
+        return TissueSpec.of(new CircuitSetup(inert, NoiseMode.NONE, 100, new double[] {1.0}),
                 new ParameterMapping(inert.defaultParameters(), List.of()), MorphogenSpec.of(0, 0, 10, 0, List.of()),
-                new Domain.Rectangle(100, 50), GrowthSpec.of(1, 5, 0,
+                domain, GrowthSpec.of(founders, radius, 0,
                 new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e6, 0), Partitioning.equal()),
                 new FateClassifier(List.of(new FateRule("high", new double[] {0.5}, new double[] {Double.NaN})), "low"),
                 new Timing(0.02, 0.01, 0.01));
-        Tissue tissue = new Tissue(spec, 1);
+    }
+
+    @Test
+    void cellsAreDrawnInTheirFateColoursAtTheirCentres() {
+        // Two fixed cells: "high" (X = 1) at (25, 25) and "low" (X = 0) at (75, 25) in a 100 x 50 domain.
+        Tissue tissue = new Tissue(fixedCells(new Domain.Rectangle(100, 50), 1, 5), 1);
         tissue.start();
         tissue.runToEnd();
         Cell only = tissue.cells().get(0);
@@ -77,15 +84,7 @@ class RenderingTest {
      */
     @Test
     void aThreeDimensionalTissueIsDrawnAsItsMidDepthSlice() {
-        CustomNetwork inert = CustomNetwork.of(List.of("X"), List.of("k"), new double[] {0},
-                List.of(new CustomNetwork.ReactionDefinition("none", new int[] {1}, "k * X")));
-        TissueSpec spec = TissueSpec.of(new CircuitSetup(inert, NoiseMode.NONE, 100, new double[] {1.0}),
-                new ParameterMapping(inert.defaultParameters(), List.of()), MorphogenSpec.of(0, 0, 10, 0, List.of()),
-                new org.fatefield.engine.domain.Domain3d.Box(100, 50, 40), GrowthSpec.of(2, 10, 0,
-                new CycleTimeDistribution(CycleTimeDistribution.Kind.FIXED, 1e6, 0), Partitioning.equal()),
-                new FateClassifier(List.of(new FateRule("high", new double[] {0.5}, new double[] {Double.NaN})), "low"),
-                new Timing(0.02, 0.01, 0.01));
-        Tissue tissue = new Tissue(spec, 1);
+        Tissue tissue = new Tissue(fixedCells(new org.fatefield.engine.domain.Domain3d.Box(100, 50, 40), 2, 10), 1);
         tissue.start();
         tissue.runToEnd();
         Cell cut = tissue.cells().get(0);
