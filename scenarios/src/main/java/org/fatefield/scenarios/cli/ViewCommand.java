@@ -39,18 +39,22 @@ final class ViewCommand implements Callable<Integer> {
     @Mixin
     private SharedOptions.Seed seed;
 
+    @Mixin
+    private SharedOptions.Settings settings;
+
     @CommandLine.Spec
     private CommandLine.Model.CommandSpec spec;
 
     @Override
     public Integer call() {
+        // The scenario and its --set values are checked first, so a mistake is reported with or without a display.
+        Scenario loaded = ScenarioArgument.loadOrReport(scenario, settings.overrides(), spec.commandLine().getErr());
+        if (loaded == null) {
+            return FatefieldCommand.INVALID_INPUT;
+        }
         if (GraphicsEnvironment.isHeadless()) {
             spec.commandLine().getErr().println("view needs a display; on a cluster use: fatefield run SCENARIO --frames"
                     + " HOURS (PNG frames and an animated GIF)");
-            return FatefieldCommand.INVALID_INPUT;
-        }
-        Scenario loaded = ScenarioArgument.loadOrReport(scenario, spec.commandLine().getErr());
-        if (loaded == null) {
             return FatefieldCommand.INVALID_INPUT;
         }
         long runSeed = seed.orElse(loaded.seed());
