@@ -44,28 +44,24 @@ public final class TissueBenchmark {
     private TissueBenchmark() {
     }
 
-    /** Area per cell (µm²) of the template's founders: the density the tissue starts at. */
-    public static double founderArea(TissueSpec template) {
-        return template.width() * template.height() / template.growth().initialCells();
+    /**
+     * Space per cell of the template's founders, the density the tissue starts at: area (µm²)
+     * in a flat tissue, volume (µm³) in a 3-D one.
+     */
+    public static double founderSpace(TissueSpec template) {
+        double depth = template.domain().threeD() ? template.domain().depth() : 1.0;
+        return template.width() * template.height() * depth / template.growth().initialCells();
     }
 
     /**
-     * Area per cell (µm²) of a confluent tissue: the mean cell area over the cycle (1.5 newborn
-     * areas) over the packing fraction of discs in a hexagonal packing, 0.9 (common practice).
+     * Space per cell of a confluent tissue: the mean cell size over the cycle (1.5 newborn cells)
+     * over the packing fraction. Flat: discs in a hexagonal packing, 0.9 (common practice), in
+     * µm²; 3-D: spheres at random close packing, 0.64 (Scott &amp; Kilgour 1969, J. Phys. D
+     * 2:863), in µm³.
      */
-    public static double confluentArea(TissueSpec template) {
+    public static double confluentSpace(TissueSpec template) {
         double r = template.growth().cellRadius();
-        return 1.5 * Math.PI * r * r / 0.9;
-    }
-
-    /**
-     * Volume per cell (µm³) of a confluent 3-D tissue: the mean cell volume over the cycle (1.5
-     * newborn spheres) over the packing fraction of random close-packed spheres, 0.64 (Scott &amp;
-     * Kilgour 1969, J. Phys. D 2:863).
-     */
-    public static double confluentVolume(TissueSpec template) {
-        double r = template.growth().cellRadius();
-        return 1.5 * 4.0 / 3.0 * Math.PI * r * r * r / 0.64;
+        return template.domain().threeD() ? 1.5 * 4.0 / 3.0 * Math.PI * r * r * r / 0.64 : 1.5 * Math.PI * r * r / 0.9;
     }
 
     /**
@@ -90,18 +86,19 @@ public final class TissueBenchmark {
      * the median of {@code repeats} timings of {@code steps} steps each.
      */
     public static Result measure(TissueSpec template, int cells, int steps, int repeats, long seed) {
-        return measure(template, cells, steps, repeats, seed, 1, founderArea(template));
+        return measure(template, cells, steps, repeats, seed, 1, founderSpace(template));
     }
 
     /**
      * As {@link #measure(TissueSpec, int, int, int, long)}, the tissue stepped on {@code threads}
-     * threads, in a domain of the template's aspect ratio with {@code areaPerCell} µm² per cell.
+     * threads, in a domain of the template's proportions with {@code spacePerCell} µm² (in 3-D µm³)
+     * per cell.
      */
     public static Result measure(TissueSpec template, int cells, int steps, int repeats, long seed, int threads,
-            double areaPerCell) {
+            double spacePerCell) {
         double dt = template.timing().step();
         Timing timing = new Timing(dt * (repeats + 1) * steps * 3, dt, dt * steps);
-        TissueSpec spec = scaled(template, cells, areaPerCell, timing);
+        TissueSpec spec = scaled(template, cells, spacePerCell, timing);
         Tissue tissue = new Tissue(spec, seed, threads);
         tissue.start();
         if (!(template.mapping().couplings().get(0).law() instanceof CouplingLaw.Hill hill)) {
@@ -244,13 +241,13 @@ public final class TissueBenchmark {
 
     /**
      * Heap bytes per live cell of a tissue of {@code cells} founders built like {@code template}
-     * with {@code areaPerCell} µm² per cell (cells, their states and streams, the field and the
+     * with {@code spacePerCell} µm² (µm³) per cell (cells, their states and streams, the field and the
      * work buffers, divided by the cell count), measured as the change in used heap after garbage
      * collection; approximate.
      */
-    public static double bytesPerCell(TissueSpec template, int cells, double areaPerCell) {
+    public static double bytesPerCell(TissueSpec template, int cells, double spacePerCell) {
         double dt = template.timing().step();
-        TissueSpec spec = scaled(template, cells, areaPerCell, new Timing(dt * 10, dt, dt));
+        TissueSpec spec = scaled(template, cells, spacePerCell, new Timing(dt * 10, dt, dt));
         long before = usedHeap();
         Tissue tissue = new Tissue(spec, 1L);
         tissue.start();

@@ -94,7 +94,7 @@ public sealed interface Domain permits Domain.Rectangle, Domain.Disc, Domain.Str
      */
     static Domain of(String shape, double width, double height, double depth) {
         String word = shape.toLowerCase(Locale.ROOT);
-        boolean solid = word.equals("box") || word.equals("slab");
+        boolean solid = threeDimensional(word);
         if (solid && !(depth > 0)) {
             throw new IllegalArgumentException("a " + word + " is three-dimensional: give it a depth greater than 0"
                     + " (tissue.depth, µm), or use a flat shape (rectangle, disc or strip)");
@@ -112,6 +112,12 @@ public sealed interface Domain permits Domain.Rectangle, Domain.Disc, Domain.Str
             default -> throw new IllegalArgumentException("domain shape must be \"rectangle\", \"disc\", \"strip\","
                     + " \"box\" or \"slab\", got \"" + shape + "\"");
         };
+    }
+
+    /** True if the scenario word {@code shape} names a three-dimensional shape ("box" or "slab"). */
+    static boolean threeDimensional(String shape) {
+        String word = shape.toLowerCase(Locale.ROOT);
+        return word.equals("box") || word.equals("slab");
     }
 
     /** {@code y} brought into [0, period) by whole periods. */

@@ -176,14 +176,10 @@ public final class MorphogenField {
     }
 
     /**
-     * Explicit sub-steps a flat field of {@code spec} takes per step of {@code dt} (as a double:
-     * for estimates of work, where a hopeless scenario may ask for more than an int holds).
+     * Explicit sub-steps a field of {@code spec} in {@code dimensions} (2 or 3) takes per step of
+     * {@code dt} (as a double: for estimates of work, where a hopeless scenario may ask for more
+     * than an int holds).
      */
-    public static double subSteps(MorphogenSpec spec, double dt) {
-        return subSteps(spec, dt, 2);
-    }
-
-    /** Explicit sub-steps a field of {@code spec} in {@code dimensions} (2 or 3) takes per step of {@code dt}. */
     public static double subSteps(MorphogenSpec spec, double dt, int dimensions) {
         return Math.max(1, Math.ceil(dt / (SAFETY * stableStepLimit(spec, dimensions))));
     }

@@ -179,13 +179,14 @@ public final class OverlapRepulsion {
             double[] place = placeOfWorker[worker];
             for (int i = from; i < to; i++) {
                 int slot = slotOfCell[i];
+                Cell cell = population.get(i);
                 if (threeD) {
-                    domain.confine(sx[slot] + step * fx[slot], sy[slot] + step * fy[slot],
-                            population.get(i).z() + step * fz[slot], sr[slot], place);
-                    population.get(i).moveTo(place[0], place[1], place[2]);
+                    domain.confine(sx[slot] + step * fx[slot], sy[slot] + step * fy[slot], cell.z() + step * fz[slot],
+                            sr[slot], place);
+                    cell.moveTo(place[0], place[1], place[2]);
                 } else {
                     domain.confine(sx[slot] + step * fx[slot], sy[slot] + step * fy[slot], sr[slot], place);
-                    population.get(i).moveTo(place[0], place[1]);
+                    cell.moveTo(place[0], place[1]);
                 }
             }
         });

@@ -97,11 +97,8 @@ final class BenchCommand implements Callable<Integer> {
         for (int d : dimensions) {
             TissueSpec template = d == 3 ? TissueBenchmark.inThreeDimensions(loaded.tissue()) : loaded.tissue();
             boolean solid = template.domain().threeD();
-            double space = solid ? (density == Density.confluent ? TissueBenchmark.confluentVolume(template)
-                    : template.width() * template.height() * template.domain().depth()
-                            / template.growth().initialCells())
-                    : (density == Density.confluent ? TissueBenchmark.confluentArea(template)
-                            : TissueBenchmark.founderArea(template));
+            double space = density == Density.confluent ? TissueBenchmark.confluentSpace(template)
+                    : TissueBenchmark.founderSpace(template);
             out.println();
             out.printf("%s tissue (%s), %s packing, %.0f %s per cell%n", solid ? "Three-dimensional" : "Flat",
                     template.domain().shape(), density, space, solid ? "µm³" : "µm²");

@@ -7,7 +7,6 @@ import java.lang.reflect.InvocationTargetException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Locale;
 import java.util.concurrent.Callable;
 import java.util.concurrent.CountDownLatch;
 import javax.swing.SwingUtilities;
@@ -17,7 +16,6 @@ import org.fatefield.scenarios.format.Overrides;
 import org.fatefield.scenarios.format.Scenario;
 import org.fatefield.scenarios.format.ScenarioException;
 import org.fatefield.scenarios.format.ScenarioReader;
-import org.fatefield.scenarios.output.RunTables;
 import org.fatefield.viz.live.TissueWindow;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
@@ -85,9 +83,8 @@ final class ViewCommand implements Callable<Integer> {
     static TissueWindow open(Scenario loaded, long runSeed) {
         int threads = Runtime.getRuntime().availableProcessors();
         ControlCircuit circuit = ControlCircuit.of(loaded.tissue(), 60);
-        String slice = loaded.tissue().domain().threeD() ? String.format(Locale.ROOT,
-                " (3-D: the mid-depth slice z = %s of %s µm)", RunTables.number(0.5 * loaded.tissue().domain().depth()),
-                RunTables.number(loaded.tissue().domain().depth())) : "";
+        // The slice slider names the plane shown, which it moves; the title only says the view is a slice.
+        String slice = loaded.tissue().domain().threeD() ? " (3-D, shown as a slice through the depth)" : "";
         return new TissueWindow("Fatefield: " + loaded.name() + slice, settings -> new Tissue(variant(loaded, settings).tissue(),
                 runSeed, threads), circuit == null ? List.of() : circuit.branches(),
                 circuit == null ? "control" : circuit.parameter(), circuit == null ? null : circuit.landscape());

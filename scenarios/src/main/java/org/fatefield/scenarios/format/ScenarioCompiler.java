@@ -93,7 +93,7 @@ final class ScenarioCompiler {
         double height = values.number(tissue, "tissue", "height");
         double depth = values.number(tissue, "tissue", "depth");
         String shape = values.text(tissue, "tissue", "shape");
-        boolean solid = shape.equals("box") || shape.equals("slab");
+        boolean solid = Domain.threeDimensional(shape);
         if (solid && !(depth > 0)) {
             values.fail(tissue, "tissue", "depth", "a " + shape + " is three-dimensional: give tissue.depth, the size"
                     + " along z in µm (greater than 0), or use a flat shape (rectangle, disc or strip)");
