@@ -1,12 +1,8 @@
 package org.fatefield.engine.parallel;
 
-import java.util.ArrayList;
-import java.util.List;
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
 import java.util.concurrent.atomic.AtomicInteger;
+import java.util.concurrent.atomic.AtomicReference;
+import java.util.concurrent.locks.LockSupport;
 
 /**
  * Runs a loop over {@code [0, n)} in contiguous chunks on the calling thread and a fixed set of
@@ -17,6 +13,12 @@ import java.util.concurrent.atomic.AtomicInteger;
  * whose iterations touch disjoint data and draw from per-item random streams therefore gives the
  * same result for any number of workers. (MASON 18's ParallelSequence is not used: it skips the
  * last {@code size % threads} agents.)
+ *
+ * <p>A tick hands out a dozen short loops; an executor's submit and wait cost tens of
+ * microseconds each on a virtual machine, which made two threads slower than one on a small
+ * tissue. So the pool threads wait for the next loop by spinning for {@value #SPIN_NANOS} ns
+ * (the gap between two loops of a tick) and only then park, and the caller waits for them by
+ * spinning. One caller at a time; a block must not call {@code forEach} itself.
  */
 public final class BlockParallel implements AutoCloseable {
 
@@ -30,8 +32,22 @@ public final class BlockParallel implements AutoCloseable {
     /** Chunks per worker: enough to even out uneven chunks, few enough that handing them out is cheap. */
     static final int CHUNKS_PER_WORKER = 8;
 
+    /** How long an idle pool thread spins for the next loop before it parks. */
+    static final long SPIN_NANOS = 200_000;
+
     private final int workers;
-    private final ExecutorService executor;
+    private final Thread[] threads;
+    /** Per pool thread: parked, or about to park, waiting for a loop (cache-line apart). */
+    private final AtomicInteger[] sleeping;
+    /** Counts the loops handed out; a pool thread runs each new value once. */
+    private volatile int generation;
+    private volatile boolean closed;
+    private Block task;
+    private int taskSize;
+    private int taskChunks;
+    private final AtomicInteger nextChunk = new AtomicInteger();
+    private final AtomicInteger running = new AtomicInteger();
+    private final AtomicReference<Throwable> failure = new AtomicReference<>();
 
     /** {@code workers} workers: the caller's thread and {@code workers - 1} pool threads. */
     public BlockParallel(int workers) {
@@ -39,11 +55,15 @@ public final class BlockParallel implements AutoCloseable {
             throw new IllegalArgumentException("threads must be at least 1, got " + workers);
         }
         this.workers = workers;
-        this.executor = workers == 1 ? null : Executors.newFixedThreadPool(workers - 1, runnable -> {
-            Thread thread = new Thread(runnable, "fatefield-worker");
-            thread.setDaemon(true);
-            return thread;
-        });
+        this.threads = new Thread[workers - 1];
+        this.sleeping = new AtomicInteger[workers - 1];
+        for (int w = 1; w < workers; w++) {
+            int worker = w;
+            sleeping[w - 1] = new AtomicInteger();
+            threads[w - 1] = new Thread(() -> serve(worker), "fatefield-worker-" + w);
+            threads[w - 1].setDaemon(true);
+            threads[w - 1].start();
+        }
     }
 
     /** Number of workers. */
@@ -53,55 +73,106 @@ public final class BlockParallel implements AutoCloseable {
 
     /** Runs {@code block} over {@code [0, n)} in chunks spread over the workers, and waits for all. */
     public void forEach(int n, Block block) {
-        if (executor == null || n < 2 * workers) {
+        if (workers == 1 || n < 2 * workers) {
             block.run(0, n, 0);
             return;
         }
-        int chunks = Math.min(n, workers * CHUNKS_PER_WORKER);
-        AtomicInteger next = new AtomicInteger();
-        List<Future<?>> futures = new ArrayList<>(workers - 1);
-        for (int w = 1; w < workers; w++) {
-            int worker = w;
-            futures.add(executor.submit(() -> drain(n, chunks, next, block, worker)));
+        if (closed) {
+            throw new IllegalStateException("this worker pool is closed");
         }
-        RuntimeException failure = null;
-        try {
-            drain(n, chunks, next, block, 0);
-        } catch (RuntimeException e) {
-            failure = e;
-            next.set(chunks);
-        }
-        for (Future<?> future : futures) {
-            try {
-                future.get();
-            } catch (InterruptedException e) {
-                Thread.currentThread().interrupt();
-                throw new IllegalStateException("interrupted while stepping cells", e);
-            } catch (ExecutionException e) {
-                Throwable cause = e.getCause();
-                if (failure == null) {
-                    failure = cause instanceof RuntimeException runtime ? runtime : new IllegalStateException(cause);
-                }
+        task = block;
+        taskSize = n;
+        taskChunks = Math.min(n, workers * CHUNKS_PER_WORKER);
+        failure.set(null);
+        nextChunk.set(0);
+        running.set(workers - 1);
+        generation++;
+        for (int w = 0; w < threads.length; w++) {
+            if (sleeping[w].get() != 0) {
+                LockSupport.unpark(threads[w]);
             }
         }
-        if (failure != null) {
-            throw failure;
+        try {
+            drain(0);
+        } catch (RuntimeException | Error e) {
+            failure.compareAndSet(null, e);
+            nextChunk.set(taskChunks);
+        }
+        while (running.get() != 0) {
+            Thread.onSpinWait();
+        }
+        task = null;
+        Throwable thrown = failure.getAndSet(null);
+        if (thrown instanceof RuntimeException runtime) {
+            throw runtime;
+        }
+        if (thrown instanceof Error error) {
+            throw error;
+        }
+        if (thrown != null) {
+            throw new IllegalStateException(thrown);
         }
     }
 
-    /** Takes chunks until none is left. */
-    private static void drain(int n, int chunks, AtomicInteger next, Block block, int worker) {
-        for (int c = next.getAndIncrement(); c < chunks; c = next.getAndIncrement()) {
+    /** Takes chunks of the current loop until none is left. */
+    private void drain(int worker) {
+        int n = taskSize;
+        int chunks = taskChunks;
+        Block block = task;
+        for (int c = nextChunk.getAndIncrement(); c < chunks; c = nextChunk.getAndIncrement()) {
             int from = (int) ((long) n * c / chunks);
             int to = (int) ((long) n * (c + 1) / chunks);
             block.run(from, to, worker);
         }
     }
 
+    /** A pool thread's life: wait for each new loop, take its share, report done. */
+    private void serve(int worker) {
+        int seen = 0;
+        AtomicInteger asleep = sleeping[worker - 1];
+        while (true) {
+            long spinUntil = System.nanoTime() + SPIN_NANOS;
+            while (generation == seen && !closed) {
+                if (System.nanoTime() < spinUntil) {
+                    Thread.onSpinWait();
+                } else {
+                    asleep.set(1);
+                    if (generation == seen && !closed) {
+                        LockSupport.park(this);
+                    }
+                    asleep.set(0);
+                }
+            }
+            if (closed) {
+                return;
+            }
+            seen = generation;
+            try {
+                drain(worker);
+            } catch (RuntimeException | Error e) {
+                failure.compareAndSet(null, e);
+                nextChunk.set(taskChunks);
+            } finally {
+                running.decrementAndGet();
+            }
+        }
+    }
+
+    /** True while any pool thread is still running (for tests of {@link #close}). */
+    boolean anyThreadAlive() {
+        for (Thread thread : threads) {
+            if (thread.isAlive()) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     @Override
     public void close() {
-        if (executor != null) {
-            executor.shutdownNow();
+        closed = true;
+        for (Thread thread : threads) {
+            LockSupport.unpark(thread);
         }
     }
 }
