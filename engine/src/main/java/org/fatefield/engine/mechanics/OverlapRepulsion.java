@@ -59,6 +59,8 @@ public final class OverlapRepulsion {
     private double[][] placeOfWorker = new double[0][];
     /** Per worker: the 3-D force on the cell whose pairs are being summed (x, y, z), padded. */
     private double[][] accOfWorker = new double[0][];
+    /** Per worker: the 3-D window cursors (start, end) of the four lines a bucket line pairs with, padded. */
+    private int[][] cursorOfWorker = new int[0][];
 
     /**
      * @param domain        where the cells live (its walls, or its periodic seam)
@@ -104,20 +106,18 @@ public final class OverlapRepulsion {
      * the number of workers.
      */
     public void relax(CellPopulation population, double dt, BlockParallel pool) {
+        relax(population, dt, pool, Double.NaN);
+    }
+
+    /**
+     * As {@link #relax(CellPopulation, double, BlockParallel)}, given an upper bound on every
+     * cell's volume (the tick's cell loop knows it, which saves a pass over the cells), or NaN to
+     * find it. The buckets are sized for the larger of the bound and a volume of 2.
+     */
+    public void relax(CellPopulation population, double dt, BlockParallel pool, double volumeBound) {
         int n = population.size();
         ensureCapacity(n, pool.workers());
-        Arrays.fill(largestVolumeOfWorker, 2.0);
-        pool.forEach(n, (from, to, worker) -> {
-            double volume = largestVolumeOfWorker[worker];
-            for (int i = from; i < to; i++) {
-                volume = Math.max(volume, population.get(i).volume());
-            }
-            largestVolumeOfWorker[worker] = volume;
-        });
-        double largestVolume = 0;
-        for (double value : largestVolumeOfWorker) {
-            largestVolume = Math.max(largestVolume, value);
-        }
+        double largestVolume = volumeBound >= 0 ? Math.max(2.0, volumeBound) : largestVolume(population, pool);
         // Radius grows as the square (cube) root of volume (Cell.radius, sphereRadius): the largest radius.
         double largest = newbornRadius * (threeD ? Math.cbrt(largestVolume) : Math.sqrt(largestVolume));
         // Buckets at least one interaction range wide, so every neighbour is in the 3 x 3 block around a cell.
@@ -133,11 +133,11 @@ public final class OverlapRepulsion {
                 Cell c = population.get(i);
                 int layer = threeD ? bucketOf(c.z(), side, gz) : 0;
                 slotOfCell[i] = (bucketOf(c.y(), sideY, gy) * gz + layer) * gx + bucketOf(c.x(), side, gx);
-                // sx is free until the snapshot: it holds the ids (exact below 2^53) for the sort.
-                sx[i] = c.id();
+                // sx is free until the snapshot: it holds each cell's x, by cell, for the sort.
+                sx[i] = c.x();
             }
         });
-        bucketStart = slots.assign(n, gx * gy * gz, slotOfCell, sx, sy, pool);
+        bucketStart = slots.assign(n, gx * gy * gz, slotOfCell, sx, i -> population.get(i).id(), sy, pool);
         pool.forEach(n, (from, to, worker) -> {
             for (int i = from; i < to; i++) {
                 Cell c = population.get(i);
@@ -163,14 +163,31 @@ public final class OverlapRepulsion {
             pool.forEach(rows.length, (from, to, worker) -> {
                 for (int r = from; r < to; r++) {
                     if (threeD) {
-                        pairsOfRow3d(rows[r], gx, gy, gz, accOfWorker[worker]);
+                        pairsOfRow3d(rows[r], gx, gy, gz, side, accOfWorker[worker], cursorOfWorker[worker]);
                     } else {
-                        pairsOfRow(rows[r], gx, gy);
+                        pairsOfRow(rows[r], gx, gy, side);
                     }
                 }
             });
         }
         move(population, n, 0.5 * dt, pool);
+    }
+
+    /** The largest volume of any cell, at least 2. */
+    private double largestVolume(CellPopulation population, BlockParallel pool) {
+        Arrays.fill(largestVolumeOfWorker, 2.0);
+        pool.forEach(population.size(), (from, to, worker) -> {
+            double volume = largestVolumeOfWorker[worker];
+            for (int i = from; i < to; i++) {
+                volume = Math.max(volume, population.get(i).volume());
+            }
+            largestVolumeOfWorker[worker] = volume;
+        });
+        double largest = 0;
+        for (double value : largestVolumeOfWorker) {
+            largest = Math.max(largest, value);
+        }
+        return largest;
     }
 
     /** Moves each cell by {@code step} times its net force, kept inside the domain. */
@@ -194,25 +211,32 @@ public final class OverlapRepulsion {
 
     /**
      * Adds the force of every pair whose first cell is in bucket row {@code row}: with a later
-     * cell of the same or the next bucket of that row, or with any cell of the three buckets
-     * below it in the next row (across the seam on a strip). Each neighbouring pair is met once,
-     * from its first cell, and both cells get their share, equal and opposite. Writes only rows
-     * {@code row} and the next, so the rows of one {@link RowPasses} pass run in parallel.
+     * cell of that row, or with any cell of the next row (across the seam on a strip), less than
+     * {@code range} apart in x. A row's slots are sorted by x ({@link BucketSlots}), so the
+     * partners of a cell are a window of each row: the same row's up to x + range, and the next
+     * row's from x - range (a cursor that only moves forward) to x + range; a third fewer
+     * candidates than whole buckets. Each neighbouring pair is met once, from its first cell, and
+     * both cells get their share, equal and opposite. Writes only rows {@code row} and the next,
+     * so the rows of one {@link RowPasses} pass run in parallel.
      */
-    private void pairsOfRow(int row, int gx, int gy) {
+    private void pairsOfRow(int row, int gx, int gy, double range) {
         boolean periodic = domain.periodicY();
         boolean nextRow = RowPasses.pairsWithNext(row, gy, periodic);
         int next = row + 1 == gy ? 0 : row + 1;
-        for (int column = 0; column < gx; column++) {
-            int bucket = row * gx + column;
-            int sameEnd = bucketStart[row * gx + Math.min(gx - 1, column + 1) + 1];
-            int belowFrom = bucketStart[next * gx + Math.max(0, column - 1)];
-            int belowTo = bucketStart[next * gx + Math.min(gx - 1, column + 1) + 1];
-            for (int i = bucketStart[bucket]; i < bucketStart[bucket + 1]; i++) {
-                for (int k = i + 1; k < sameEnd; k++) {
-                    pair(i, k, periodic);
+        int end = bucketStart[(row + 1) * gx];
+        int below = bucketStart[next * gx];
+        int belowEnd = bucketStart[(next + 1) * gx];
+        for (int i = bucketStart[row * gx]; i < end; i++) {
+            double right = sx[i] + range;
+            for (int k = i + 1; k < end && sx[k] <= right; k++) {
+                pair(i, k, periodic);
+            }
+            if (nextRow) {
+                double left = sx[i] - range;
+                while (below < belowEnd && sx[below] < left) {
+                    below++;
                 }
-                for (int k = belowFrom; nextRow && k < belowTo; k++) {
+                for (int k = below; k < belowEnd && sx[k] <= right; k++) {
                     pair(i, k, periodic);
                 }
             }
@@ -263,49 +287,61 @@ public final class OverlapRepulsion {
 
     /**
      * The 3-D counterpart of {@link #pairsOfRow}: the first cell of each pair lies in bucket row
-     * {@code row} (one y); its partners are the later cells of its own x row of buckets (same
-     * and next x), of the three buckets at x - 1 to x + 1 in the next z layer of the same y row,
-     * and of the nine buckets around it in the next y row (across the seam on a slab).
+     * {@code row} (one y); each line of buckets (one y, one z) is sorted by x, and a cell's
+     * partners are the x windows (within {@code range}) of: the rest of its own line, the next z
+     * line of its row, and the three lines at z - 1 to z + 1 of the next row (across the seam on
+     * a slab), each window found by a cursor that only moves forward.
      */
-    private void pairsOfRow3d(int row, int gx, int gy, int gz, double[] acc) {
+    private void pairsOfRow3d(int row, int gx, int gy, int gz, double range, double[] acc, int[] cursor) {
         boolean periodic = domain.periodicY();
         boolean nextRow = RowPasses.pairsWithNext(row, gy, periodic);
         int next = row + 1 == gy ? 0 : row + 1;
         for (int layer = 0; layer < gz; layer++) {
-            int line = (row * gz + layer) * gx;
-            for (int column = 0; column < gx; column++) {
-                int lo = Math.max(0, column - 1);
-                int hi = Math.min(gx - 1, column + 1) + 1;
-                int sameEnd = bucketStart[line + hi];
-                boolean above = layer + 1 < gz;
-                for (int i = bucketStart[line + column]; i < bucketStart[line + column + 1]; i++) {
-                    acc[0] = 0;
-                    acc[1] = 0;
-                    acc[2] = 0;
-                    sweep3d(i, i + 1, sameEnd, periodic, acc);
-                    if (above) {
-                        sweep3d(i, bucketStart[line + gx + lo], bucketStart[line + gx + hi], periodic, acc);
+            int line = row * gz + layer;
+            int end = bucketStart[(line + 1) * gx];
+            boolean above = layer + 1 < gz;
+            // cursor[2w], cursor[2w + 1]: start and end of window line w (0: next z; 1-3: next row).
+            cursor[0] = above ? end : 0;
+            cursor[1] = above ? bucketStart[(line + 2) * gx] : 0;
+            int lines = 1;
+            for (int z = Math.max(0, layer - 1); nextRow && z <= Math.min(gz - 1, layer + 1); z++) {
+                int other = next * gz + z;
+                cursor[2 * lines] = bucketStart[other * gx];
+                cursor[2 * lines + 1] = bucketStart[(other + 1) * gx];
+                lines++;
+            }
+            for (int i = bucketStart[line * gx]; i < end; i++) {
+                double left = sx[i] - range;
+                double right = sx[i] + range;
+                acc[0] = 0;
+                acc[1] = 0;
+                acc[2] = 0;
+                sweep3d(i, i + 1, end, right, periodic, acc);
+                for (int w = 0; w < lines; w++) {
+                    int from = cursor[2 * w];
+                    int to = cursor[2 * w + 1];
+                    while (from < to && sx[from] < left) {
+                        from++;
                     }
-                    for (int z = Math.max(0, layer - 1); nextRow && z <= Math.min(gz - 1, layer + 1); z++) {
-                        int base = (next * gz + z) * gx;
-                        sweep3d(i, bucketStart[base + lo], bucketStart[base + hi], periodic, acc);
-                    }
-                    fx[i] += (float) acc[0];
-                    fy[i] += (float) acc[1];
-                    fz[i] += (float) acc[2];
+                    cursor[2 * w] = from;
+                    sweep3d(i, from, to, right, periodic, acc);
                 }
+                fx[i] += (float) acc[0];
+                fy[i] += (float) acc[1];
+                fz[i] += (float) acc[2];
             }
         }
     }
 
     /**
-     * The forces in 3-D between slot {@code i} and each of the slots {@code [from, to)}, by the
-     * law of {@link #pair}. Each partner gets its share at once; slot i's shares are summed in
-     * {@code acc} (x, y, z), which the caller adds to slot i once, so slot i is written once per
-     * cell rather than once per pair (measured 40% faster than pair by pair in 3-D; in 2-D, with
-     * fewer candidates per cell, it was not faster, so 2-D keeps {@link #pair}).
+     * The forces in 3-D between slot {@code i} and each of the slots from {@code from} (before
+     * {@code to}) up to x = {@code right}, by the law of {@link #pair}. Each partner gets its
+     * share at once; slot i's shares are summed in {@code acc} (x, y, z), which the caller adds
+     * to slot i once, so slot i is written once per cell rather than once per pair (measured 40%
+     * faster than pair by pair in 3-D; in 2-D, with fewer candidates per cell, it was not faster,
+     * so 2-D keeps {@link #pair}).
      */
-    private void sweep3d(int i, int from, int to, boolean periodic, double[] acc) {
+    private void sweep3d(int i, int from, int to, double right, boolean periodic, double[] acc) {
         double xi = sx[i];
         double yi = sy[i];
         double zi = sz[i];
@@ -313,7 +349,7 @@ public final class OverlapRepulsion {
         double ax = 0;
         double ay = 0;
         double az = 0;
-        for (int k = from; k < to; k++) {
+        for (int k = from; k < to && sx[k] <= right; k++) {
             double ex = xi - sx[k];
             double ey = periodic ? domain.nearestImageDy(yi - sy[k]) : yi - sy[k];
             double ez = zi - sz[k];
@@ -373,6 +409,7 @@ public final class OverlapRepulsion {
             // Padded past a cache line so that two workers' scratch never shares one.
             placeOfWorker = new double[workers][3 + 16];
             accOfWorker = new double[workers][3 + 16];
+            cursorOfWorker = new int[workers][8 + 16];
         }
     }
 }

@@ -38,6 +38,8 @@ final class CellLoop {
     private final long[] failedCell;
     private final int[] failedSpecies;
     private final double[] failedValue;
+    /** Per worker, spaced a cache line apart: the largest cell volume the last pass left. */
+    private final double[] largestVolume;
     /** Which cells the last pass found ready to divide, by population index. */
     private boolean[] ready = new boolean[0];
 
@@ -62,6 +64,20 @@ final class CellLoop {
         Arrays.fill(failedCell, Long.MAX_VALUE);
         failedSpecies = new int[threads * PAD];
         failedValue = new double[threads * PAD];
+        largestVolume = new double[threads * PAD];
+        Arrays.fill(largestVolume, Double.NaN);
+    }
+
+    /**
+     * The largest volume of any cell after the last pass (NaN before the first): an upper bound
+     * on every volume until the next pass, as division and death only shrink or remove cells.
+     */
+    double largestVolume() {
+        double largest = largestVolume[0];
+        for (int w = 1; w < threads; w++) {
+            largest = Math.max(largest, largestVolume[w * PAD]);
+        }
+        return largest;
     }
 
     /** The stream view of worker 0, for the serial stages (founders, division, death). */
@@ -84,11 +100,15 @@ final class CellLoop {
             ready = new boolean[cells.size() + cells.size() / 4];
         }
         boolean[] readyNow = ready;
+        for (int w = 0; w < threads; w++) {
+            largestVolume[w * PAD] = 0;
+        }
         pool.forEach(cells.size(), (from, to, worker) -> {
             CircuitStepper circuit = steppers[worker];
             CellRandom random = randoms[worker];
             double[] p = params[worker];
             double[] levels = signals[worker];
+            double largest = 0;
             for (int i = from; i < to; i++) {
                 Cell cell = cells.get(i);
                 for (int f = 0; f < fields.length; f++) {
@@ -114,8 +134,10 @@ final class CellLoop {
                     }
                 }
                 cell.grow(end, size, dilute);
+                largest = Math.max(largest, cell.volume());
                 readyNow[i] = cell.readyToDivide(size, end);
             }
+            largestVolume[worker * PAD] = Math.max(largestVolume[worker * PAD], largest);
         });
         checkFinite(end);
         return readyNow;

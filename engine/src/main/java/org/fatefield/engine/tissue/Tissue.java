@@ -147,7 +147,8 @@ public final class Tissue extends SimState {
         }
         long sinceMechanics = steps % mechanicsEvery;
         if (sinceMechanics == 0 || steps == spec.timing().totalSteps()) {
-            mechanics.relax(population, dt * (sinceMechanics == 0 ? mechanicsEvery : sinceMechanics), pool);
+            mechanics.relax(population, dt * (sinceMechanics == 0 ? mechanicsEvery : sinceMechanics), pool,
+                    cellLoop.largestVolume());
         }
         if (steps % reorderEvery == 0) {
             population.sortByBlock(blockSide, spec.width(), spec.height(), pool);
@@ -197,7 +198,7 @@ public final class Tissue extends SimState {
                     f.advance(dt, pool);
                 }
             }
-            case MECHANICS -> mechanics.relax(population, dt, pool);
+            case MECHANICS -> mechanics.relax(population, dt, pool, cellLoop.largestVolume());
         }
     }
 

@@ -75,8 +75,12 @@ class PairOnceTest {
     }
 
     private static double[][] relaxed(CellPopulation p, Domain domain, int workers) {
+        return relaxed(p, domain, workers, Double.NaN);
+    }
+
+    private static double[][] relaxed(CellPopulation p, Domain domain, int workers, double volumeBound) {
         try (BlockParallel pool = new BlockParallel(workers)) {
-            new OverlapRepulsion(domain, RATE, RADIUS, ADHESION, RANGE).relax(p, DT, pool);
+            new OverlapRepulsion(domain, RATE, RADIUS, ADHESION, RANGE).relax(p, DT, pool, volumeBound);
         }
         double[][] out = new double[p.size()][];
         for (int i = 0; i < p.size(); i++) {
@@ -104,6 +108,25 @@ class PairOnceTest {
                 moved += Math.abs(got[i][0] - packing(800, 160, 130, 7).get(i).x()) > 1e-6 ? 1 : 0;
             }
             assertTrue(moved > 600, "most cells feel a neighbour: " + moved);
+        }
+    }
+
+    @Test
+    void aLooserVolumeBoundAndCellsOfEqualXGiveTheSameStep() {
+        // Volumes are below 2; a bound of 3.7 widens the buckets and the x windows (more
+        // candidates, none missed). Every fourth cell is moved onto one of a few shared x values,
+        // so the x-sorted slots must break ties (by id) and the windows include equal x.
+        for (Domain domain : List.of(new Domain.Rectangle(160, 130), new Domain.Strip(160, 130))) {
+            CellPopulation p = packing(800, 160, 130, 13);
+            for (int i = 0; i < p.size(); i += 4) {
+                p.get(i).moveTo(40.0 + 20.0 * (i % 5), p.get(i).y());
+            }
+            double[][] expected = bruteForce(p, domain);
+            double[][] got = relaxed(p, domain, 2, 3.7);
+            for (int i = 0; i < expected.length; i++) {
+                assertEquals(expected[i][0], got[i][0], 1e-6, domain + " cell " + i + " x");
+                assertEquals(expected[i][1], got[i][1], 1e-6, domain + " cell " + i + " y");
+            }
         }
     }
 
