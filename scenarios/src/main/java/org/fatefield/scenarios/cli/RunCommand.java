@@ -110,7 +110,7 @@ final class RunCommand implements Callable<Integer> {
         Path folder = out.orElse(RunLayout.defaultFolder(loaded.name(), "-seed" + runSeed));
         boolean detail = verbose.on(spec, quiet);
         if (detail) {
-            RunPlan.print(loaded, runSeed, threads.resolveFor(loaded), outWriter);
+            RunPlan.print(loaded, runSeed, threads.resolveFor(loaded), threads.reasonFor(loaded), outWriter);
         }
         Progress progress = quiet ? Progress.silent()
                 : Progress.forConsole(loaded.name(), loaded.tissue().timing().totalSteps(), System.err);

@@ -28,6 +28,11 @@ final class RunPlan {
 
     /** Writes the plan of {@code scenario} run on {@code seed} with {@code threads} to {@code out}. */
     static void print(Scenario scenario, long seed, int threads, PrintWriter out) {
+        print(scenario, seed, threads, "", out);
+    }
+
+    /** As {@link #print(Scenario, long, int, PrintWriter)}, saying after the thread count why ({@code why}, or nothing). */
+    static void print(Scenario scenario, long seed, int threads, String why, PrintWriter out) {
         TissueSpec spec = scenario.tissue();
         Timing timing = spec.timing();
         GrowthSpec growth = spec.growth();
@@ -37,7 +42,7 @@ final class RunPlan {
         for (String override : scenario.overrides()) {
             out.printf(Locale.ROOT, "  override: %s%n", override);
         }
-        out.printf(Locale.ROOT, "seed: %d; threads: %d%n", seed, threads);
+        out.printf(Locale.ROOT, "seed: %d; threads: %d%s%n", seed, threads, why.isEmpty() ? "" : " (" + why + ")");
         out.printf(Locale.ROOT, "time: %s h in %d steps of %s h; records every %d steps; mechanics every %d"
                 + " step%s (%s h, %s)%n", n(timing.duration()), timing.totalSteps(), n(timing.step()),
                 timing.stepsPerRecord(), mechanics, mechanics == 1 ? "" : "s", n(mechanics * timing.step()),

@@ -53,6 +53,9 @@ class QuietTest {
         // 0.1 / (4/h x 0.005 h) = 5 steps of mechanics (Timing.MECHANICS_ACCURACY).
         assertTrue(out.toString().contains("time: 2 h in 400 steps of 0.005 h; records every 100 steps; mechanics"
                 + " every 5 steps (0.025 h, set from the repulsion time scale)"), out.toString());
+        // The demo ends with about 2100 cells, under SharedOptions.Threads.SMALL_TISSUE: one thread, and the plan says why.
+        assertTrue(out.toString().contains("seed: 1; threads: 1 (automatic: fewer than 5000 cells expected"),
+                out.toString());
         assertTrue(out.toString().contains("  override: tissue.repulsion = 4.0") && out.toString()
                 .contains("  timeseries.csv ("), out.toString());
         for (String table : new String[] {"timeseries.csv", "cells.csv", "lineage.csv"}) {
