@@ -26,11 +26,8 @@ public final class LangevinStepper implements CircuitStepper {
     private final double systemSize;
     private final ReactionTable table;
     private final double[] propensity;
+    private final double[] normals;
     private final int reactions;
-    /** True if every reaction changes one species by +-1 (then the loop skips the sparse table). */
-    private final boolean unitOnly;
-    private final int[] unitSpecies;
-    private final double[] unitChange;
     private final SwitchableSource source = new SwitchableSource();
     private final ZigguratSampler.NormalizedGaussian gaussian = ZigguratSampler.NormalizedGaussian.of(source);
 
@@ -41,14 +38,7 @@ public final class LangevinStepper implements CircuitStepper {
         // Padded: see SCRATCH_PADDING.
         this.reactions = network.reactionCount();
         this.propensity = new double[reactions + SCRATCH_PADDING];
-        this.unitSpecies = table.unitSpecies.clone();
-        this.unitChange = new double[reactions];
-        boolean unit = true;
-        for (int j = 0; j < reactions; j++) {
-            unit &= unitSpecies[j] >= 0;
-            unitChange[j] = table.unitChange[j];
-        }
-        this.unitOnly = unit;
+        this.normals = new double[reactions + SCRATCH_PADDING];
     }
 
     /**
@@ -72,28 +62,10 @@ public final class LangevinStepper implements CircuitStepper {
     @Override
     public void advance(double[] state, double[] params, double dt, UniformRandomProvider rng) {
         source.use(rng);
-        double[] a = propensity;
-        network.propensities(state, params, a);
-        double noiseScale = dt / systemSize;
-        // The same arithmetic as advance(state, params, dt, xi) with each normal drawn where it is used.
-        if (unitOnly) {
-            int[] species = unitSpecies;
-            double[] change = unitChange;
-            for (int j = 0; j < reactions; j++) {
-                double aj = Math.max(a[j], 0.0);
-                state[species[j]] += change[j] * (aj * dt + Math.sqrt(aj * noiseScale) * gaussian.sample());
-            }
-        } else {
-            for (int j = 0; j < reactions; j++) {
-                double aj = Math.max(a[j], 0.0);
-                table.fire(j, aj * dt + Math.sqrt(aj * noiseScale) * gaussian.sample(), 1.0, state);
-            }
+        for (int j = 0; j < reactions; j++) {
+            normals[j] = gaussian.sample();
         }
-        for (int i = 0; i < state.length; i++) {
-            if (state[i] < 0.0) {
-                state[i] = 0.0;
-            }
-        }
+        advance(state, params, dt, normals);
     }
 
     /**
