@@ -41,12 +41,11 @@ final class BucketSlots {
             start[b + 1] += start[b];
         }
         System.arraycopy(start, 0, bucketFill, 0, buckets);
+        // Each cell's slot and the inverse map, slot to cell (exact as doubles), in one pass.
         for (int i = 0; i < n; i++) {
-            slotOfCell[i] = bucketFill[slotOfCell[i]]++;
-        }
-        // The inverse map, slot to cell (exact as doubles).
-        for (int i = 0; i < n; i++) {
-            cellOfSlot[slotOfCell[i]] = i;
+            int slot = bucketFill[slotOfCell[i]]++;
+            slotOfCell[i] = slot;
+            cellOfSlot[slot] = i;
         }
         pool.forEach(buckets, (from, to, worker) -> {
             for (int b = from; b < to; b++) {
