@@ -51,13 +51,7 @@ class BlockParallelTest {
             for (int round = 0; round < 5; round++) {
                 // Longer than the spin, so the pool thread has parked.
                 Thread.sleep(5 + BlockParallel.SPIN_NANOS / 1_000_000);
-                AtomicLong sum = new AtomicLong();
-                pool.forEach(1000, (from, to, worker) -> {
-                    for (int i = from; i < to; i++) {
-                        sum.addAndGet(i);
-                    }
-                });
-                assertEquals(1000L * 999 / 2, sum.get());
+                assertEquals(1000L * 999 / 2, indexSum(pool, 1000));
             }
         }
     }
@@ -74,13 +68,7 @@ class BlockParallelTest {
                             }
                         }));
                 assertEquals("cell " + bad, e.getMessage());
-                AtomicLong sum = new AtomicLong();
-                pool.forEach(64, (from, to, worker) -> {
-                    for (int i = from; i < to; i++) {
-                        sum.addAndGet(i);
-                    }
-                });
-                assertEquals(64L * 63 / 2, sum.get());
+                assertEquals(64L * 63 / 2, indexSum(pool, 64));
             }
         }
     }
@@ -96,5 +84,16 @@ class BlockParallelTest {
             Thread.sleep(10);
         }
         assertTrue(!pool.anyThreadAlive(), "the pool threads should end after close");
+    }
+
+    /** The sum of the indices {@code [0, n)} as the pool runs them. */
+    private static long indexSum(BlockParallel pool, int n) {
+        AtomicLong sum = new AtomicLong();
+        pool.forEach(n, (from, to, worker) -> {
+            for (int i = from; i < to; i++) {
+                sum.addAndGet(i);
+            }
+        });
+        return sum.get();
     }
 }
