@@ -1,8 +1,6 @@
 package org.fatefield.engine.cell;
 
-import java.io.DataInputStream;
-import java.io.DataOutputStream;
-import java.io.IOException;
+import java.util.Arrays;
 import org.fatefield.circuits.random.XoroshiroStep;
 import org.fatefield.engine.division.SizeControl;
 
@@ -31,22 +29,25 @@ public final class Cell {
     private final double birthTime;
     private final double cycleTime;
     private final double[] state;
-    private double x;
-    private double y;
-    /** Position along z, 0 in a flat tissue. */
-    private double z;
+    /**
+     * Where the cell's position (x, y, z; z is 0 in a flat tissue) and volume live: four doubles
+     * from {@code base}. In a population they are its {@link CellPopulation} place array, so the
+     * mechanics streams 32 bytes a cell instead of whole cell objects; a cell outside one has an
+     * array of its own.
+     */
+    double[] place;
+    int base;
     private final double birthVolume;
-    private double volume;
-    private short fate = -1;
-    private double fateSince = Double.NaN;
+    short fate = -1;
+    double fateSince = Double.NaN;
     /** Time this cell itself first entered the timed fate; a float fills the object's padding (no extra heap). */
-    private float firstEntry = Float.NaN;
+    float firstEntry = Float.NaN;
     /** Birth position in single precision (6e-5 µm at 1000 µm): three floats fit where two doubles were. */
-    private final float birthX;
-    private final float birthY;
-    private final float birthZ;
-    private double[] scores = NO_SCORES;
-    private static final double[] NO_SCORES = new double[0];
+    final float birthX;
+    final float birthY;
+    final float birthZ;
+    double[] scores = NO_SCORES;
+    static final double[] NO_SCORES = new double[0];
 
     /**
      * A cell. A founder is born before time 0 (a negative birth time) so that it starts part-way
@@ -77,6 +78,17 @@ public final class Cell {
      */
     public Cell(long id, long parentId, int generation, double birthTime, double cycleTime, double[] state,
             long[] stream, double x, double y, double z, double birthVolume, double volume) {
+        this(id, parentId, generation, birthTime, cycleTime, state, stream, x, y, z, birthVolume, volume, null, 0);
+    }
+
+    /**
+     * The cell of the public constructor, whose position and volume are the four doubles of
+     * {@code existing} from {@code at} if it is not null (they are left as they are), or a new
+     * array of its own holding (x, y, z, volume).
+     */
+    private Cell(long id, long parentId, int generation, double birthTime, double cycleTime, double[] state,
+            long[] stream, double x, double y, double z, double birthVolume, double volume, double[] existing,
+            int at) {
         XoroshiroStep.checkState(stream[0], stream[1]);
         if (id < 0 || id >= Integer.MAX_VALUE || parentId < -1 || parentId >= Integer.MAX_VALUE) {
             throw new IllegalArgumentException("cell id " + id + " and parent id " + parentId + " must be from 0 (-1"
@@ -93,96 +105,29 @@ public final class Cell {
                     + birthVolume + " and volume " + volume);
         }
         this.birthVolume = birthVolume;
-        this.volume = volume;
         this.id = (int) id;
         this.parentId = (int) parentId;
         this.generation = (short) generation;
         this.birthTime = birthTime;
         this.cycleTime = cycleTime;
         this.state = state;
-        this.x = x;
-        this.y = y;
-        this.z = z;
+        this.place = existing != null ? existing : new double[] {x, y, z, volume};
+        this.base = existing != null ? at : 0;
         this.birthX = (float) x;
         this.birthY = (float) y;
         this.birthZ = (float) z;
     }
 
     /**
-     * Writes everything about this cell, its random stream's state included, so that
-     * {@link #read} rebuilds an identical cell (checkpoints).
-     */
-    public void write(DataOutputStream out) throws IOException {
-        out.writeLong(id);
-        out.writeLong(parentId);
-        out.writeInt(generation);
-        out.writeDouble(birthTime);
-        out.writeDouble(cycleTime);
-        writeArray(out, state);
-        out.writeLong(stream0);
-        out.writeLong(stream1);
-        out.writeDouble(x);
-        out.writeDouble(y);
-        out.writeDouble(z);
-        out.writeDouble(birthVolume);
-        out.writeDouble(volume);
-        out.writeInt(fate);
-        out.writeDouble(fateSince);
-        out.writeFloat(firstEntry);
-        out.writeFloat(birthX);
-        out.writeFloat(birthY);
-        out.writeFloat(birthZ);
-        writeArray(out, scores);
-    }
-
-    /** Longest state or score array a stored cell may hold (far more species than any circuit has). */
-    private static final int MAX_STORED_ARRAY = 1 << 16;
-
-    /** Reads a cell written by {@link #write}. */
-    public static Cell read(DataInputStream in) throws IOException {
-        long id = in.readLong();
-        long parentId = in.readLong();
-        int generation = in.readInt();
-        double birthTime = in.readDouble();
-        double cycleTime = in.readDouble();
-        double[] state = readArray(in);
-        long[] stream = {in.readLong(), in.readLong()};
-        double x = in.readDouble();
-        double y = in.readDouble();
-        double z = in.readDouble();
-        double birthVolume = in.readDouble();
-        double volume = in.readDouble();
-        int fate = in.readInt();
-        double fateSince = in.readDouble();
-        float firstEntry = in.readFloat();
-        float birthX = in.readFloat();
-        float birthY = in.readFloat();
-        float birthZ = in.readFloat();
-        double[] scores = readArray(in);
-        Cell cell = new Cell(id, parentId, generation, birthTime, cycleTime, state, stream, birthX, birthY, birthZ,
-                birthVolume, volume);
-        cell.x = x;
-        cell.y = y;
-        cell.z = z;
-        cell.fate = (short) fate;
-        cell.fateSince = fateSince;
-        cell.firstEntry = firstEntry;
-        cell.scores = scores.length == 0 ? NO_SCORES : scores;
-        return cell;
-    }
-
-    /**
      * An identical cell in a new object, its state array allocated right after it (its random
-     * stream continues from where this one's is). Copying the population in stepping order lays
+     * stream continues from where this one's is), whose position and volume are this cell's
+     * place (the population's slot it occupies). Copying the population in stepping order lays
      * the cells out in memory in that order, so the cell loop reads memory sequentially instead
      * of missing the cache on every cell.
      */
-    public Cell relocated() {
+    Cell relocated() {
         Cell cell = new Cell(id, parentId, generation, birthTime, cycleTime, state.clone(), new long[] {stream0,
-                stream1}, birthX, birthY, birthZ, birthVolume, volume);
-        cell.x = x;
-        cell.y = y;
-        cell.z = z;
+                stream1}, birthX, birthY, birthZ, birthVolume, volume(), place, base);
         cell.fate = fate;
         cell.fateSince = fateSince;
         cell.firstEntry = firstEntry;
@@ -190,24 +135,17 @@ public final class Cell {
         return cell;
     }
 
-    private static void writeArray(DataOutputStream out, double[] values) throws IOException {
-        out.writeInt(values.length);
-        for (double v : values) {
-            out.writeDouble(v);
-        }
+    /** Copies this cell's position and volume to {@code places} from {@code at}, and keeps them there from now on. */
+    void attach(double[] places, int at) {
+        System.arraycopy(place, base, places, at, 4);
+        place = places;
+        base = at;
     }
 
-    private static double[] readArray(DataInputStream in) throws IOException {
-        int length = in.readInt();
-        if (length < 0 || length > MAX_STORED_ARRAY) {
-            throw new IOException("a cell record holds an array of " + length + " values (at most "
-                    + MAX_STORED_ARRAY + "): the checkpoint is damaged");
-        }
-        double[] values = new double[length];
-        for (int i = 0; i < values.length; i++) {
-            values[i] = in.readDouble();
-        }
-        return values;
+    /** Gives this cell an array of its own for its position and volume (it is leaving its population). */
+    void detach() {
+        place = Arrays.copyOfRange(place, base, base + 4);
+        base = 0;
     }
 
     /** Unique id. */
@@ -237,17 +175,17 @@ public final class Cell {
 
     /** Position along x (µm). */
     public double x() {
-        return x;
+        return place[base];
     }
 
     /** Position along y (µm). */
     public double y() {
-        return y;
+        return place[base + 1];
     }
 
     /** Position along z (µm), 0 in a flat tissue. */
     public double z() {
-        return z;
+        return place[base + 2];
     }
 
     /** Time since birth (h) at time {@code now} (h). */
@@ -275,17 +213,17 @@ public final class Cell {
      * volume, so the radius scales as the square root of the volume.
      */
     public double radius(double r0) {
-        return r0 * Math.sqrt(volume);
+        return r0 * Math.sqrt(volume());
     }
 
     /** Radius (µm) in a three-dimensional tissue, where the radius scales as the cube root of the volume. */
     public double sphereRadius(double r0) {
-        return r0 * Math.cbrt(volume);
+        return r0 * Math.cbrt(volume());
     }
 
     /** Volume now, in units of a mean newborn cell. */
     public double volume() {
-        return volume;
+        return place[base + 3];
     }
 
     /** Volume at birth, in units of a mean newborn cell. */
@@ -300,15 +238,15 @@ public final class Cell {
 
     /** Moves the cell to (x, y) µm. */
     public void moveTo(double newX, double newY) {
-        this.x = newX;
-        this.y = newY;
+        place[base] = newX;
+        place[base + 1] = newY;
     }
 
     /** Moves the cell to (x, y, z) µm. */
     public void moveTo(double newX, double newY, double newZ) {
-        this.x = newX;
-        this.y = newY;
-        this.z = newZ;
+        place[base] = newX;
+        place[base + 1] = newY;
+        place[base + 2] = newZ;
     }
 
     /**
@@ -317,8 +255,9 @@ public final class Cell {
      * dilution the growth causes since the last call.
      */
     public void grow(double now, SizeControl control, boolean dilute) {
-        double before = volume;
-        volume = control.volume(birthVolume, now - birthTime, cycleTime);
+        double before = place[base + 3];
+        double volume = control.volume(birthVolume, now - birthTime, cycleTime);
+        place[base + 3] = volume;
         if (dilute) {
             double factor = before / volume;
             for (int i = 0; i < state.length; i++) {
@@ -329,7 +268,7 @@ public final class Cell {
 
     /** True once the cell should divide under {@code control} at time {@code now} (h). */
     public boolean readyToDivide(SizeControl control, double now) {
-        return control.ready(birthVolume, volume, now - birthTime, cycleTime);
+        return control.ready(birthVolume, volume(), now - birthTime, cycleTime);
     }
 
     /**

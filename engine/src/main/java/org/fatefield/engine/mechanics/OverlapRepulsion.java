@@ -1,7 +1,6 @@
 package org.fatefield.engine.mechanics;
 
 import java.util.Arrays;
-import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.cell.CellPopulation;
 import org.fatefield.engine.domain.Domain;
 import org.fatefield.engine.parallel.BlockParallel;
@@ -128,25 +127,25 @@ public final class OverlapRepulsion {
         int gz = threeD ? Math.max(1, (int) Math.ceil(domain.depth() / side)) : 1;
         pool.forEach(n, (from, to, worker) -> {
             for (int i = from; i < to; i++) {
-                Cell c = population.get(i);
-                int layer = threeD ? bucketOf(c.z(), side, gz) : 0;
-                slotOfCell[i] = (bucketOf(c.y(), sideY, gy) * gz + layer) * gx + bucketOf(c.x(), side, gx);
+                double x = population.x(i);
+                int layer = threeD ? bucketOf(population.z(i), side, gz) : 0;
+                slotOfCell[i] = (bucketOf(population.y(i), sideY, gy) * gz + layer) * gx + bucketOf(x, side, gx);
                 // sx is free until the snapshot: it holds each cell's x, by cell, for the sort.
-                sx[i] = c.x();
+                sx[i] = x;
             }
         });
         bucketStart = slots.assign(n, gx * gy * gz, slotOfCell, sx, i -> population.get(i).id(), sy, pool);
         pool.forEach(n, (from, to, worker) -> {
             for (int i = from; i < to; i++) {
-                Cell c = population.get(i);
                 int slot = slotOfCell[i];
-                sx[slot] = c.x();
-                sy[slot] = c.y();
+                sx[slot] = population.x(i);
+                sy[slot] = population.y(i);
+                // Radius as Cell.radius and Cell.sphereRadius give it: square (cube) root of the volume.
                 if (threeD) {
-                    sz[slot] = (float) c.z();
-                    sr[slot] = (float) c.sphereRadius(newbornRadius);
+                    sz[slot] = (float) population.z(i);
+                    sr[slot] = (float) (newbornRadius * Math.cbrt(population.volume(i)));
                 } else {
-                    sr[slot] = (float) c.radius(newbornRadius);
+                    sr[slot] = (float) (newbornRadius * Math.sqrt(population.volume(i)));
                 }
             }
         });
@@ -177,7 +176,7 @@ public final class OverlapRepulsion {
         pool.forEach(population.size(), (from, to, worker) -> {
             double volume = largestVolumeOfWorker[worker];
             for (int i = from; i < to; i++) {
-                volume = Math.max(volume, population.get(i).volume());
+                volume = Math.max(volume, population.volume(i));
             }
             largestVolumeOfWorker[worker] = volume;
         });
@@ -194,14 +193,13 @@ public final class OverlapRepulsion {
             double[] place = placeOfWorker[worker];
             for (int i = from; i < to; i++) {
                 int slot = slotOfCell[i];
-                Cell cell = population.get(i);
                 if (threeD) {
-                    domain.confine(sx[slot] + step * fx[slot], sy[slot] + step * fy[slot], cell.z() + step * fz[slot],
-                            sr[slot], place);
-                    cell.moveTo(place[0], place[1], place[2]);
+                    domain.confine(sx[slot] + step * fx[slot], sy[slot] + step * fy[slot],
+                            population.z(i) + step * fz[slot], sr[slot], place);
+                    population.moveTo(i, place[0], place[1], place[2]);
                 } else {
                     domain.confine(sx[slot] + step * fx[slot], sy[slot] + step * fy[slot], sr[slot], place);
-                    cell.moveTo(place[0], place[1]);
+                    population.moveTo(i, place[0], place[1]);
                 }
             }
         });

@@ -4,6 +4,7 @@ import java.io.DataInputStream;
 import java.io.DataOutputStream;
 import java.io.IOException;
 import org.fatefield.engine.cell.Cell;
+import org.fatefield.engine.cell.CellRecords;
 import org.fatefield.engine.field.MorphogenField;
 import org.fatefield.engine.record.TimeSeries;
 
@@ -29,7 +30,7 @@ final class TissueCheckpoint {
         out.writeLong(tissue.population().peekNextId());
         out.writeInt(tissue.cells().size());
         for (Cell cell : tissue.cells()) {
-            cell.write(out);
+            CellRecords.write(cell, out);
         }
         for (MorphogenField f : tissue.fields()) {
             f.write(out);
@@ -64,7 +65,7 @@ final class TissueCheckpoint {
         tissue.population().reset(nextId);
         int species = spec.circuit().network().speciesCount();
         for (int i = 0; i < n; i++) {
-            Cell cell = Cell.read(in);
+            Cell cell = CellRecords.read(in);
             require(cell.liveState().length == species && cell.scores().length <= spec.extrinsic().size()
                     && cell.id() >= 0 && cell.id() < nextId, "cell record " + i + " does not fit this scenario");
             tissue.population().add(cell);
