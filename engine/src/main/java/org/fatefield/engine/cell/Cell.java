@@ -27,7 +27,8 @@ public final class Cell {
     /** Divisions since the founder; shorts keep the 3-D cell within the 2-D cell's 136 bytes. */
     private final short generation;
     private final double birthTime;
-    private final double cycleTime;
+    /** Drawn cycle time in single precision (1e-6 h at 16 h, far below any time step), to fit 96 bytes. */
+    private final float cycleTime;
     private final double[] state;
     /**
      * Where the cell's position (x, y, z; z is 0 in a flat tissue) and volume live: four doubles
@@ -39,7 +40,8 @@ public final class Cell {
     int base;
     private final double birthVolume;
     short fate = -1;
-    double fateSince = Double.NaN;
+    /** A recording time, in single precision (as firstEntry). */
+    float fateSince = Float.NaN;
     /** Time this cell itself first entered the timed fate; a float fills the object's padding (no extra heap). */
     float firstEntry = Float.NaN;
     /** Birth position in single precision (6e-5 µm at 1000 µm): three floats fit where two doubles were. */
@@ -109,7 +111,7 @@ public final class Cell {
         this.parentId = (int) parentId;
         this.generation = (short) generation;
         this.birthTime = birthTime;
-        this.cycleTime = cycleTime;
+        this.cycleTime = (float) cycleTime;
         this.state = state;
         this.place = existing != null ? existing : new double[] {x, y, z, volume};
         this.base = existing != null ? at : 0;
@@ -290,7 +292,7 @@ public final class Cell {
     /** Records the cell's fate index at time {@code now}; notes when it last changed. */
     public void setFate(int value, double now) {
         if (value != fate) {
-            fateSince = now;
+            fateSince = (float) now;
         }
         this.fate = (short) value;
     }
@@ -300,7 +302,7 @@ public final class Cell {
      * last entered that fate's region of states, to the recording interval); NaN before any.
      */
     public double fateSince() {
-        return fateSince;
+        return shortest(fateSince);
     }
 
     /** Extrinsic-noise scores, one per noisy parameter (see ExtrinsicNoise); live array. */

@@ -67,6 +67,13 @@ public final class CellPopulation {
         size++;
     }
 
+    /** Makes room for {@code capacity} cells in all, so that adding that many allocates nothing more. */
+    public void reserve(int capacity) {
+        if (capacity > cells.length) {
+            grow(capacity);
+        }
+    }
+
     /** Puts {@code cell} in slot {@code index}, replacing the cell there (which takes its values with it). */
     public void replace(int index, Cell cell) {
         checkIndex(index);

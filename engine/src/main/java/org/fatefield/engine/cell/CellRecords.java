@@ -60,7 +60,7 @@ public final class CellRecords {
         double birthVolume = in.readDouble();
         double volume = in.readDouble();
         int fate = in.readInt();
-        double fateSince = in.readDouble();
+        float fateSince = (float) in.readDouble();
         float firstEntry = in.readFloat();
         float birthX = in.readFloat();
         float birthY = in.readFloat();

@@ -28,11 +28,13 @@ final class Founders {
         CircuitSetup circuit = spec.circuit();
         double r = growth.cellRadius();
         double[] point = new double[3];
+        population.reserve(population.size() + growth.initialCells());
         for (int i = 0; i < growth.initialCells(); i++) {
             spec.domain().samplePoint(placement, r, point);
             long id = population.newId();
             EmbeddedStream.Detached birth = new EmbeddedStream.Detached(streams.seedWords(id));
-            double cycle = growth.cycle().sample(birth);
+            // Rounded as the cell keeps it, so that its starting volume is the one its own growth gives.
+            double cycle = (float) growth.cycle().sample(birth);
             // Founders are spread over their cycle; cells that never divide all start at age 0.
             double age = growth.cycle().divides() ? cycle * birth.nextDouble() : 0.0;
             double z = spec.domain().threeD() ? point[2] : 0.0;
