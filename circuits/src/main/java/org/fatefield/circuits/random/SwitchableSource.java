@@ -12,31 +12,8 @@ import org.apache.commons.rng.UniformRandomProvider;
  * stream, because the Ziggurat samplers keep no state but their source. Not thread-safe: one
  * per thread.
  */
-public final class SwitchableSource implements UniformRandomProvider {
+public final class SwitchableSource extends PaddedProvider {
 
-    /*
-     * Unused padding: the stepper of each worker points its source at a stream once per cell,
-     * and two workers' sources next to each other in memory (as a collection can leave them)
-     * would share a cache line, each write stalling the other worker (false sharing). HotSpot
-     * lays out long fields before references, so these put 128 bytes between one source's
-     * reference and the next one's.
-     */
-    private long pad0;
-    private long pad1;
-    private long pad2;
-    private long pad3;
-    private long pad4;
-    private long pad5;
-    private long pad6;
-    private long pad7;
-    private long pad8;
-    private long pad9;
-    private long pad10;
-    private long pad11;
-    private long pad12;
-    private long pad13;
-    private long pad14;
-    private long pad15;
     private UniformRandomProvider target;
 
     /** Points this source at {@code stream}; later draws come from it. */
