@@ -117,7 +117,12 @@ public final class SelfActivatingSwitch implements ReactionNetwork {
         out[3] = p[PER_GENE + 7] * Math.max(b, 0.0);
     }
 
-    private static double production(double[] p, int o, double own, double other) {
+    /**
+     * Production propensity of a gene whose parameters start at {@code o} in {@code p}
+     * ({@link #geneOffset}): basal, self-activation of {@code own}, repression by {@code other}.
+     * The exact arithmetic of {@link #propensities}, for steppers that fuse it into their update.
+     */
+    public static double production(double[] p, int o, double own, double other) {
         return p[o] + p[o + 1] * HillFunctions.activation(own, p[o + 2], p[o + 3])
                 + p[o + 4] * HillFunctions.repression(other, p[o + 5], p[o + 6]);
     }
