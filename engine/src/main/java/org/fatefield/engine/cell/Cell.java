@@ -24,7 +24,7 @@ public final class Cell {
     /** Ids fit in 31 bits (the ancestry's limit), so ints hold them: 8 bytes a cell. */
     private final int id;
     private final int parentId;
-    /** Divisions since the founder; shorts keep the 3-D cell within the 2-D cell's 136 bytes. */
+    /** Divisions since the founder; shorts (this and fate) help keep the cell object at 96 bytes. */
     private final short generation;
     private final double birthTime;
     /** Drawn cycle time in single precision (1e-6 h at 16 h, far below any time step), to fit 96 bytes. */
@@ -215,12 +215,22 @@ public final class Cell {
      * volume, so the radius scales as the square root of the volume.
      */
     public double radius(double r0) {
-        return r0 * Math.sqrt(volume());
+        return discRadius(r0, volume());
+    }
+
+    /** Radius (µm) of a flat cell of {@code volume} and newborn radius {@code r0}, as {@link #radius(double)}. */
+    public static double discRadius(double r0, double volume) {
+        return r0 * Math.sqrt(volume);
+    }
+
+    /** Radius (µm) of a 3-D cell of {@code volume} and newborn radius {@code r0}, as {@link #sphereRadius(double)}. */
+    public static double sphereRadius(double r0, double volume) {
+        return r0 * Math.cbrt(volume);
     }
 
     /** Radius (µm) in a three-dimensional tissue, where the radius scales as the cube root of the volume. */
     public double sphereRadius(double r0) {
-        return r0 * Math.cbrt(volume());
+        return sphereRadius(r0, volume());
     }
 
     /** Volume now, in units of a mean newborn cell. */

@@ -1,6 +1,7 @@
 package org.fatefield.engine.mechanics;
 
 import java.util.Arrays;
+import org.fatefield.engine.cell.Cell;
 import org.fatefield.engine.cell.CellPopulation;
 import org.fatefield.engine.domain.Domain;
 import org.fatefield.engine.parallel.BlockParallel;
@@ -97,11 +98,7 @@ public final class OverlapRepulsion {
         }
     }
 
-    /**
-     * Moves every cell by one overdamped step of {@code dt} hours; the forces on disjoint blocks
-     * of cells are computed in parallel from the same snapshot, so the result does not depend on
-     * the number of workers.
-     */
+    /** One overdamped step of {@code dt} hours on {@code pool}; the result does not depend on its number of workers. */
     public void relax(CellPopulation population, double dt, BlockParallel pool) {
         relax(population, dt, pool, Double.NaN);
     }
@@ -140,12 +137,11 @@ public final class OverlapRepulsion {
                 int slot = slotOfCell[i];
                 sx[slot] = population.x(i);
                 sy[slot] = population.y(i);
-                // Radius as Cell.radius and Cell.sphereRadius give it: square (cube) root of the volume.
                 if (threeD) {
                     sz[slot] = (float) population.z(i);
-                    sr[slot] = (float) (newbornRadius * Math.cbrt(population.volume(i)));
+                    sr[slot] = (float) Cell.sphereRadius(newbornRadius, population.volume(i));
                 } else {
-                    sr[slot] = (float) (newbornRadius * Math.sqrt(population.volume(i)));
+                    sr[slot] = (float) Cell.discRadius(newbornRadius, population.volume(i));
                 }
             }
         });
