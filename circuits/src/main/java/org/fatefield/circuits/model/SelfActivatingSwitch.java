@@ -112,9 +112,18 @@ public final class SelfActivatingSwitch implements ReactionNetwork {
         double a = x[0];
         double b = x[1];
         out[0] = production(p, 0, a, b);
-        out[1] = p[7] * Math.max(a, 0.0);
+        out[1] = loss(p, 0, a);
         out[2] = production(p, PER_GENE, b, a);
-        out[3] = p[PER_GENE + 7] * Math.max(b, 0.0);
+        out[3] = loss(p, PER_GENE, b);
+    }
+
+    /**
+     * Loss (degradation and dilution) propensity of a gene whose parameters start at {@code o}
+     * in {@code p}, at level {@code own} (clipped at zero); as {@link #production}, the exact
+     * arithmetic of {@link #propensities}.
+     */
+    public static double loss(double[] p, int o, double own) {
+        return p[o + 7] * Math.max(own, 0.0);
     }
 
     /**

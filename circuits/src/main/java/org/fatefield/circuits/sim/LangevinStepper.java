@@ -80,7 +80,7 @@ public final class LangevinStepper implements CircuitStepper {
      * The step of {@link #advance(double[], double[], double, double[])} for the built-in switch,
      * written out: the same four normals in the same order, the same propensities and the same
      * operations in the same order, so the result is identical to the last bit, without the
-     * propensity and normal arrays and the reaction table (LangevinStepperTest compares the two).
+     * propensity and normal arrays and the reaction table (SwitchKernelTest compares the two).
      */
     private void advanceSwitch(double[] state, double[] p, double dt) {
         double n0 = gaussian.sample();
@@ -91,9 +91,9 @@ public final class LangevinStepper implements CircuitStepper {
         double a = state[0];
         double b = state[1];
         double prodA = Math.max(SelfActivatingSwitch.production(p, 0, a, b), 0.0);
-        double lossA = Math.max(p[7] * Math.max(a, 0.0), 0.0);
+        double lossA = Math.max(SelfActivatingSwitch.loss(p, 0, a), 0.0);
         double prodB = Math.max(SelfActivatingSwitch.production(p, second, b, a), 0.0);
-        double lossB = Math.max(p[second + 7] * Math.max(b, 0.0), 0.0);
+        double lossB = Math.max(SelfActivatingSwitch.loss(p, second, b), 0.0);
         double noiseScale = dt / systemSize;
         double x = a + (prodA * dt + Math.sqrt(prodA * noiseScale) * n0);
         x = x - (lossA * dt + Math.sqrt(lossA * noiseScale) * n1);
